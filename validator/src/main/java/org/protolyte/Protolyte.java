@@ -1,0 +1,114 @@
+package org.protolyte;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.Properties;
+
+import org.protolyte.analysis.Analyzer;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Formulation;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.Problem;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.document.SourceDocument;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.RecipeResolver;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.report.RunReport;
+import org.protolyte.rules.Checker;
+import org.protolyte.rules.Finding;
+import org.protolyte.rules.Severity;
+import org.protolyte.substance.SubstanceLibrary;
+
+/**
+ * The one flow: read and validate → resolve → analyse every condition → check → report. Each input
+ * is checked on its own; one bad file never stops the others.
+ */
+public final class Protolyte {
+
+    /** Rule id of the findings that make a document invalid. */
+    public static final String INVALID_DOCUMENT = "invalid-document";
+
+    private final JsonReader json = new JsonReader();
+    private final FormulationReader reader;
+    private final RecipeResolver resolver;
+    private final Analyzer analyzer = new Analyzer(new Equilibrium(Davies.INSTANCE));
+    private final Checker checker = Checker.builtIn();
+
+    public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
+        this.reader = new FormulationReader(schemas);
+        this.resolver = new RecipeResolver(library);
+    }
+
+    public static String version() {
+        try (InputStream in = Protolyte.class.getResourceAsStream("version.properties")) {
+            Properties p = new Properties();
+            if (in != null) {
+                p.load(in);
+            }
+            return p.getProperty("version", "development");
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    public RunReport check(List<Path> files) {
+        List<DocumentReport> reports = new ArrayList<>();
+        for (Path p : files) {
+            reports.add(check(p));
+        }
+        return new RunReport(version(), reports);
+    }
+
+    public DocumentReport check(Path file) {
+        String source = file.toString();
+        byte[] content;
+        try {
+            if (!Files.isRegularFile(file)) {
+                return invalid(source, Optional.empty(), List.of(new Problem("", Optional.empty(),
+                        Files.exists(file) ? "not a regular file" : "file not found")));
+            }
+            content = Files.readAllBytes(file);
+        } catch (IOException e) {
+            return invalid(source, Optional.empty(), List.of(new Problem("", Optional.empty(),
+                    "cannot read the file: " + e.getMessage())));
+        }
+        return check(source, content);
+    }
+
+    public DocumentReport check(String source, byte[] content) {
+        Optional<String> id = Optional.empty();
+        try {
+            SourceDocument doc = json.read(source, content);
+            if (doc.root().path("id").isString()) {
+                id = Optional.of(doc.root().path("id").asString());
+            }
+            Formulation f = reader.read(doc);
+            Recipe recipe = resolver.resolve(f);
+            FormulationAnalysis analysis = analyzer.analyze(recipe);
+            List<Finding> findings = checker.check(analysis);
+            return DocumentReport.of(analysis, findings);
+        } catch (DocumentException e) {
+            return invalid(source, id, e.problems());
+        } catch (RuntimeException e) {
+            return DocumentReport.fault(source, "internal fault while checking this document ("
+                    + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
+        }
+    }
+
+    private static DocumentReport invalid(String source, Optional<String> id, List<Problem> problems) {
+        List<Finding> findings = problems.stream().map(p -> new Finding(INVALID_DOCUMENT, Severity.ERROR,
+                p.message(), Optional.of(p.pointer()), p.location())).toList();
+        return DocumentReport.invalid(source, id, findings);
+    }
+}

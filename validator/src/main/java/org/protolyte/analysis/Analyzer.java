@@ -1,0 +1,202 @@
+package org.protolyte.analysis;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.protolyte.chemistry.Caveat;
+import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.IndeterminateException;
+import org.protolyte.chemistry.Thermo;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Formulation;
+import org.protolyte.recipe.DensityModel;
+import org.protolyte.recipe.Ingredient;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.Solution;
+import org.protolyte.substance.Substance;
+
+/**
+ * Runs the chemistry for a recipe: finds the q.s. amount of its titrant, then solves the equilibrium
+ * at every condition with that amount.
+ */
+public final class Analyzer {
+
+    /** Upper limit of a q.s. search, mol of titrant per kg of water: far beyond any buffer's need. */
+    static final double MAX_TITRANT_MOLALITY = 2.0;
+
+    private final Equilibrium equilibrium;
+
+    public Analyzer(Equilibrium equilibrium) {
+        this.equilibrium = equilibrium;
+    }
+
+    public FormulationAnalysis analyze(Recipe recipe) {
+        List<Caveat> caveats = new ArrayList<>();
+        List<TitrantResult> titrants = new ArrayList<>();
+        Map<Ingredient, Double> doses = new HashMap<>();
+        if (!recipe.titrants().isEmpty()) {
+            titrants.addAll(adjust(recipe, caveats));
+            titrants.forEach(t -> doses.put(t.ingredient(), t.moles()));
+        }
+        Solution solution = recipe.solution(doses);
+        List<ConditionResult> results = new ArrayList<>();
+        for (Formulation.Condition c : recipe.formulation().conditions()) {
+            results.add(condition(solution, c));
+        }
+        return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe));
+    }
+
+    private ConditionResult condition(Solution solution, Formulation.Condition c) {
+        double volume = solution.volumeLitres(c.kelvin());
+        try {
+            EquilibriumState s = equilibrium.solve(solution.species(), solution.totals(), c.kelvin());
+            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * solution.waterKg() / volume,
+                    volume);
+        } catch (IndeterminateException e) {
+            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume);
+        }
+    }
+
+    private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin) {
+        Solution s = recipe.solution(moles > 0 ? Map.of(titrant, moles) : Map.of());
+        return equilibrium.solve(s.species(), s.totals(), kelvin).pH();
+    }
+
+    /** Acid or base: the pH of a 0.01 mol/kg solution of the titrant alone at 25 °C, below or above neutral. */
+    TitrantResult.Role role(Recipe recipe, Ingredient titrant) {
+        Solution alone = new Recipe(recipe.formulation(), recipe.library(), List.of(titrant), recipe.makeUpKelvin())
+                .solution(Map.of(titrant, 0.01 * recipe.solution(Map.of()).waterKg()));
+        Map<Component, Double> totals = alone.totals();
+        EquilibriumState s = equilibrium.solve(alone.species(), totals, Thermo.T_REF);
+        return s.pH() < 7 ? TitrantResult.Role.ACID : TitrantResult.Role.BASE;
+    }
+
+    private List<TitrantResult> adjust(Recipe recipe, List<Caveat> caveats) {
+        Formulation f = recipe.formulation();
+        List<Ingredient> lines = recipe.titrants();
+        Map<Ingredient, TitrantResult.Role> roles = new HashMap<>();
+        for (Ingredient t : lines) {
+            roles.put(t, role(recipe, t));
+        }
+        if (lines.size() > 2 || (lines.size() == 2 && roles.get(lines.get(0)) == roles.get(lines.get(1)))) {
+            String what = lines.size() > 2 ? "more than two components carry adjustTo"
+                    : "two " + (roles.get(lines.get(0)) == TitrantResult.Role.ACID ? "acids" : "bases")
+                    + " carry adjustTo; give at most one acid and one base";
+            throw new DocumentException(f.document().problem(lines.get(1).line().pointer() + "/adjustTo", what));
+        }
+        Formulation.Adjustment adj = lines.get(0).line().adjustTo().orElseThrow();
+        double adjustK = adj.kelvin();
+        double goalPH;
+        double goalK;
+        boolean explicit = adj.pH().isPresent();
+        if (explicit) {
+            goalPH = adj.pH().getAsDouble();
+            goalK = adjustK;
+        } else if (f.pHTarget().isPresent() && Double.isFinite(f.pHTarget().get().midpoint())) {
+            goalPH = f.pHTarget().get().midpoint();
+            goalK = f.pHTarget().get().kelvin();
+        } else {
+            throw new DocumentException(f.document().problem(adj.pointer(),
+                    "adjustTo has no pH and the document has no pH target to adjust to"));
+        }
+        if (lines.size() == 2) {
+            Formulation.Adjustment other = lines.get(1).line().adjustTo().orElseThrow();
+            if (Math.abs(other.kelvin() - adjustK) > 0.005 || !other.pH().equals(adj.pH())) {
+                throw new DocumentException(f.document().problem(other.pointer(),
+                        "an acid and a base adjusting the same recipe must carry the same adjustTo"));
+            }
+        }
+        double startPH;
+        try {
+            startPH = pH(recipe, lines.get(0), 0, goalK);
+        } catch (IndeterminateException e) {
+            caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. could not be computed: " + e.getMessage()));
+            return lines.stream().map(t -> new TitrantResult(t, roles.get(t), 0, false, OptionalDouble.empty(),
+                    adjustK, goalPH, goalK, Optional.empty())).toList();
+        }
+        TitrantResult.Role needed = startPH > goalPH ? TitrantResult.Role.ACID : TitrantResult.Role.BASE;
+        List<TitrantResult> out = new ArrayList<>();
+        for (Ingredient t : lines) {
+            if (roles.get(t) != needed) {
+                Optional<TitrantResult.Unreachable> why = lines.size() == 1
+                        ? Optional.of(new TitrantResult.Unreachable(String.format(Locale.ROOT,
+                        "%s is %s and can only %s the pH; before adjustment the recipe is at pH %.2f at %.0f °C, "
+                                + "%s the goal pH %.2f", t.substance().name(),
+                        roles.get(t) == TitrantResult.Role.ACID ? "an acid" : "a base",
+                        roles.get(t) == TitrantResult.Role.ACID ? "lower" : "raise", startPH,
+                        goalK - Thermo.KELVIN_OFFSET, startPH > goalPH ? "already above" : "already below", goalPH),
+                        startPH, startPH))
+                        : Optional.empty();
+                out.add(new TitrantResult(t, roles.get(t), 0, false, OptionalDouble.empty(), adjustK, goalPH, goalK,
+                        why));
+            } else {
+                out.add(dose(recipe, t, needed, startPH, goalPH, goalK, adjustK, explicit, caveats));
+            }
+        }
+        return out;
+    }
+
+    private TitrantResult dose(Recipe recipe, Ingredient t, TitrantResult.Role role, double startPH, double goalPH,
+                               double goalK, double adjustK, boolean explicit, List<Caveat> caveats) {
+        double water = recipe.solution(Map.of()).waterKg();
+        double max = MAX_TITRANT_MOLALITY * water;
+        UnivariateFunction g = n -> pH(recipe, t, n, goalK) - goalPH;
+        double moles;
+        try {
+            double atMax = g.value(max);
+            if ((role == TitrantResult.Role.ACID) ? atMax > 0 : atMax < 0) {
+                double reach = atMax + goalPH;
+                return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK,
+                        Optional.of(new TitrantResult.Unreachable(String.format(Locale.ROOT,
+                                "%s cannot bring the pH to %.2f: even %.0f mmol per kg of water reaches only pH %.2f "
+                                        + "at %.0f °C", t.substance().name(), goalPH, max / water * 1000, reach,
+                                goalK - Thermo.KELVIN_OFFSET), reach, startPH)));
+            }
+            moles = Math.abs(startPH - goalPH) < 1e-9 ? 0
+                    : new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+        } catch (IndeterminateException | MathIllegalStateException e) {
+            caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. of " + t.substance().name()
+                    + " could not be computed: " + e.getMessage()));
+            return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK,
+                    Optional.empty());
+        }
+        OptionalDouble setpoint;
+        try {
+            setpoint = OptionalDouble.of(explicit ? goalPH : pH(recipe, t, moles, adjustK));
+        } catch (IndeterminateException e) {
+            caveats.add(Caveat.indeterminate("qs-indeterminate", "the setpoint at the adjustment temperature "
+                    + "could not be computed: " + e.getMessage()));
+            setpoint = OptionalDouble.empty();
+        }
+        return new TitrantResult(t, role, moles, true, setpoint, adjustK, goalPH, goalK, Optional.empty());
+    }
+
+    private List<String> assumptions(Recipe recipe) {
+        List<String> out = new ArrayList<>();
+        out.add("closed system, free of CO2 as made (no exchange with air)");
+        out.add("activity coefficients from the " + equilibrium.activityModel().name()
+                + " equation; pH on the conventional (Bates–Guggenheim) scale");
+        Formulation.Basis b = recipe.formulation().basis();
+        if (b.finalVolume()) {
+            out.add(String.format(Locale.ROOT, "made up to volume at %.0f °C; water mass from additive apparent "
+                    + "molar volumes", recipe.makeUpKelvin() - Thermo.KELVIN_OFFSET));
+            List<String> estimated = recipe.ingredients().stream().map(Ingredient::substance)
+                    .filter(DensityModel::isEstimated).map(Substance::name).distinct().toList();
+            if (!estimated.isEmpty()) {
+                out.add("apparent molar volume estimated from the molar mass ("
+                        + DensityModel.FALLBACK_SPECIFIC_VOLUME + " cm³/g) for: " + String.join(", ", estimated));
+            }
+        }
+        return out;
+    }
+}

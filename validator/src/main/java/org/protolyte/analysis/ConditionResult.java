@@ -1,0 +1,26 @@
+package org.protolyte.analysis;
+
+import java.util.List;
+import java.util.Optional;
+
+import org.protolyte.chemistry.Caveat;
+import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.document.Formulation;
+
+/**
+ * The equilibrium at one condition. {@code state} is empty when no equilibrium could be solved; when it
+ * is present but a caveat is indeterminate, its numbers must not be shown as results.
+ *
+ * @param bufferCapacityPerLitre mol per litre of solution per pH unit, at the condition's temperature
+ */
+public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
+                              List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres) {
+
+    public ConditionResult {
+        caveats = List.copyOf(caveats);
+    }
+
+    public boolean determinate() {
+        return state.isPresent() && caveats.stream().noneMatch(c -> c.severity() == Caveat.Severity.INDETERMINATE);
+    }
+}

@@ -1,0 +1,64 @@
+package org.protolyte.chemistry;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A weak acid and its conjugate bases, e.g. phosphate: H3PO4, H2PO4-, HPO4-2, PO4-3 with three
+ * dissociation steps. The least protonated form is the mass-balance component; each other form is a
+ * species with p protons whose cumulative formation constant is the sum of the last p steps:
+ * log β_p = Σ pKa (the p most basic steps).
+ */
+public record AcidBaseSystem(String name, List<Form> forms, List<DissociationStep> steps) {
+
+    /** A protonation state: its name as written in speciation (H2PO4-) and its charge. */
+    public record Form(String name, int charge) {
+    }
+
+    public AcidBaseSystem {
+        forms = List.copyOf(forms);
+        steps = List.copyOf(steps);
+        if (forms.size() != steps.size() + 1) {
+            throw new IllegalArgumentException("acid–base system " + name + " has " + forms.size()
+                    + " forms and " + steps.size() + " dissociation steps; forms must be one more than steps");
+        }
+        for (int i = 1; i < forms.size(); i++) {
+            if (forms.get(i).charge() != forms.get(i - 1).charge() - 1) {
+                throw new IllegalArgumentException("acid–base system " + name
+                        + ": each form must carry one charge less than the one before (most protonated first)");
+            }
+        }
+    }
+
+    /** The mass-balance component: the least protonated form. */
+    public Component basis() {
+        Form last = forms.get(forms.size() - 1);
+        return new Component(last.name(), last.charge());
+    }
+
+    /** Every form as a species, most protonated first. */
+    public List<Species> species() {
+        Component basis = basis();
+        int n = steps.size();
+        List<Species> out = new ArrayList<>();
+        for (int i = 0; i < forms.size(); i++) {
+            FormationConstant beta = FormationConstant.UNITY;
+            for (int k = i; k < n; k++) {
+                beta = beta.plus(steps.get(k).association());
+            }
+            Form f = forms.get(i);
+            out.add(new Species(f.name(), f.charge(), Map.of(basis, 1), n - i, beta));
+        }
+        return out;
+    }
+
+    public int indexOf(String formName) {
+        for (int i = 0; i < forms.size(); i++) {
+            if (forms.get(i).name().equals(formName)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+}

@@ -1,0 +1,306 @@
+package org.protolyte.chemistry;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.MathIllegalStateException;
+
+/**
+ * Acid–base equilibrium of an aqueous solution at one temperature.
+ *
+ * <p>Unknown: the hydrogen-ion activity aH. For a given aH and given activity coefficients, every
+ * species follows from its component's mass balance (mol/kg water):
+ * <pre>
+ *   m_s = β_s(T) · aH^p · γ_C · m_C / γ_s,     T_C = Σ_s m_s      (one component per species)
+ * </pre>
+ * and aH is the root of the charge balance
+ * <pre>
+ *   f(pH) = Σ_s z_s m_s + mH − mOH = 0,   mH = aH/γH,  mOH = Kw/(aH·γOH)   (water activity taken as 1)
+ * </pre>
+ * f falls strictly with pH (df/dpH = −ln10·(mH + mOH + Σ variances) &lt; 0), so a bracket on pH and
+ * Brent's method always find the one root if there is one. The ionic strength I = ½ Σ z² m is then
+ * iterated with the activity model until it no longer changes.
+ *
+ * <p>The reported pH is −log10(γH·mH) with γH from the activity model. A single-ion activity cannot
+ * be measured; at I ≤ 0.1 mol/kg the Davies γH agrees with the Bates–Guggenheim convention that pH
+ * meters are calibrated to (Buck et al., Pure Appl. Chem. 74 (2002) 2169) within a few thousandths.
+ *
+ * <p>Buffer capacity, analytic at fixed activity coefficients (Van Slyke's β, generalised):
+ * <pre>
+ *   β = dC_base/dpH = ln10 · (mH + mOH + Σ_C [Σ_s p_s² m_s − (Σ_s p_s m_s)²/T_C])
+ * </pre>
+ */
+public final class Equilibrium {
+
+    private static final double PH_LOW = -2;
+    private static final double PH_HIGH = 16;
+    private static final int MAX_ITERATIONS = 200;
+
+    private final ActivityModel activity;
+
+    public Equilibrium(ActivityModel activity) {
+        this.activity = activity;
+    }
+
+    public ActivityModel activityModel() {
+        return activity;
+    }
+
+    /**
+     * Solves with the activity coefficients iterated to self-consistency.
+     *
+     * @param totals total molality of every component, mol/kg water
+     * @throws IndeterminateException when the charge balance has no root or the iteration does not converge
+     */
+    public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin) {
+        return solve(species, totals, kelvin, Double.NaN);
+    }
+
+    /**
+     * Solves at a fixed ionic strength (activity coefficients held constant), as the analytic buffer
+     * capacity assumes; NaN means self-consistent.
+     */
+    public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin,
+                                  double fixedIonicStrength) {
+        Problem p = new Problem(species, totals, kelvin);
+        List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
+        double ionicStrength = Double.isNaN(fixedIonicStrength) ? p.strongIonicStrength() : fixedIonicStrength;
+        double pH = Double.NaN;
+        boolean converged = false;
+        for (int i = 0; i < MAX_ITERATIONS; i++) {
+            p.setActivityCoefficients(ionicStrength);
+            pH = p.chargeBalanceRoot();
+            if (!Double.isNaN(fixedIonicStrength)) {
+                converged = true;
+                break;
+            }
+            double next = p.ionicStrength(pH);
+            // relaxation keeps the fixed point from oscillating when strong ions dominate
+            double step = next - ionicStrength;
+            if (Math.abs(step) <= 1e-13 + 1e-11 * ionicStrength) {
+                ionicStrength = next;
+                converged = true;
+                break;
+            }
+            ionicStrength = i < 20 ? next : ionicStrength + 0.5 * step;
+        }
+        if (!converged) {
+            throw new IndeterminateException(Caveat.indeterminate("activity-not-converged",
+                    "the ionic strength did not converge with the " + activity.name() + " activity model"));
+        }
+        p.setActivityCoefficients(ionicStrength);
+        EquilibriumState s = p.state(pH, ionicStrength, caveats);
+        caveats.addAll(validityCaveats(s));
+        return new EquilibriumState(s.kelvin(), s.pH(), s.ionicStrength(), s.bufferCapacity(), s.pKw(),
+                s.hydrogenMolality(), s.hydroxideMolality(), s.particleMolality(), s.species(), caveats);
+    }
+
+    private List<Caveat> validityCaveats(EquilibriumState s) {
+        List<Caveat> out = new ArrayList<>();
+        double i = s.ionicStrength();
+        if (i > activity.indeterminateAbove()) {
+            out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg, where the %s equation cannot be trusted",
+                    i, activity.indeterminateAbove(), activity.name())));
+        } else if (i > activity.warnAbove()) {
+            out.add(Caveat.warning("ionic-strength-high", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg: the %s equation loses accuracy here, "
+                            + "fastest where ions of charge 2 or more carry the buffering",
+                    i, activity.warnAbove(), activity.name())));
+        }
+        double tf = Cryoscopy.freezingPointKelvin(s.particleMolality());
+        if (s.kelvin() < tf) {
+            out.add(Caveat.indeterminate("below-freezing-point", String.format(Locale.ROOT,
+                    "%.1f °C is below the estimated freezing point of the solution (%.1f °C): ice forms and a "
+                            + "liquid-state pH means nothing there",
+                    s.kelvin() - Thermo.KELVIN_OFFSET, tf - Thermo.KELVIN_OFFSET)));
+        }
+        return out;
+    }
+
+    /** The arrays of one solve: species, their components and constants at the temperature. */
+    private final class Problem {
+        final double kelvin;
+        final int n;
+        final Species[] sp;
+        final int[] comp;          // index of the species' component
+        final int[] protons;
+        final int[] charge;
+        final double[] log10Beta;
+        final Component[] components;
+        final double[] total;
+        final double kw;
+        final double a;
+        final double[] log10Gamma;
+        double log10GammaH;
+        double log10GammaOH;
+
+        Problem(List<Species> species, Map<Component, Double> totals, double kelvin) {
+            this.kelvin = kelvin;
+            Map<Component, Integer> index = new LinkedHashMap<>();
+            for (Component c : totals.keySet()) {
+                index.put(c, index.size());
+            }
+            List<Species> used = new ArrayList<>();
+            for (Species s : species) {
+                if (s.components().size() != 1 || s.components().values().iterator().next() != 1) {
+                    throw new IllegalArgumentException("species " + s.name()
+                            + " combines several components; complexes are not solved yet");
+                }
+                if (index.containsKey(s.components().keySet().iterator().next())) {
+                    used.add(s);
+                }
+            }
+            n = used.size();
+            sp = used.toArray(new Species[0]);
+            comp = new int[n];
+            protons = new int[n];
+            charge = new int[n];
+            log10Beta = new double[n];
+            for (int i = 0; i < n; i++) {
+                comp[i] = index.get(sp[i].components().keySet().iterator().next());
+                protons[i] = sp[i].protons();
+                charge[i] = sp[i].charge();
+                log10Beta[i] = sp[i].formation().log10K(kelvin);
+            }
+            components = index.keySet().toArray(new Component[0]);
+            total = new double[components.length];
+            for (int j = 0; j < components.length; j++) {
+                double t = totals.get(components[j]);
+                if (!(t >= 0) || !Double.isFinite(t)) {
+                    throw new IllegalArgumentException("total of " + components[j].name() + " must be ≥ 0");
+                }
+                total[j] = t;
+                boolean hasSpecies = false;
+                for (int i = 0; i < n; i++) {
+                    hasSpecies |= comp[i] == j;
+                }
+                if (!hasSpecies) {
+                    throw new IllegalArgumentException("component " + components[j].name() + " has no species");
+                }
+            }
+            kw = Math.pow(10, -Water.pKw(kelvin));
+            a = Water.debyeHuckelA(kelvin);
+            log10Gamma = new double[n];
+        }
+
+        List<Caveat> temperatureCaveats() {
+            List<Caveat> out = new ArrayList<>();
+            double t = kelvin - Thermo.KELVIN_OFFSET;
+            if (!Water.VALIDITY.contains(kelvin)) {
+                throw new IndeterminateException(Caveat.indeterminate("temperature-out-of-range", String.format(
+                        Locale.ROOT, "%.1f °C is outside %s, where the water properties used are valid", t,
+                        Water.VALIDITY)));
+            }
+            for (int i = 0; i < n; i++) {
+                TemperatureRange v = sp[i].formation().validity();
+                if (total[comp[i]] > 0 && !v.contains(kelvin)) {
+                    out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
+                            "%.1f °C is outside %s, where the constants of %s are valid", t, v, sp[i].name())));
+                }
+            }
+            return out;
+        }
+
+        double strongIonicStrength() {
+            double s = 0;
+            for (int j = 0; j < components.length; j++) {
+                s += total[j] * components[j].charge() * components[j].charge();
+            }
+            return 0.5 * s;
+        }
+
+        void setActivityCoefficients(double ionicStrength) {
+            for (int i = 0; i < n; i++) {
+                log10Gamma[i] = activity.log10Gamma(charge[i], ionicStrength, a);
+            }
+            log10GammaH = activity.log10Gamma(1, ionicStrength, a);
+            log10GammaOH = activity.log10Gamma(-1, ionicStrength, a);
+        }
+
+        /** Molality of every species at this pH, from the mass balances (log space, then scaled). */
+        double[] molalities(double pH) {
+            double[] m = new double[n];
+            double[] maxLog = new double[components.length];
+            java.util.Arrays.fill(maxLog, Double.NEGATIVE_INFINITY);
+            double[] w = new double[n];
+            for (int i = 0; i < n; i++) {
+                // γ of the free component is common to every species of C and cancels in m_s/T_C
+                w[i] = log10Beta[i] - protons[i] * pH - log10Gamma[i];
+                maxLog[comp[i]] = Math.max(maxLog[comp[i]], w[i]);
+            }
+            double[] sum = new double[components.length];
+            for (int i = 0; i < n; i++) {
+                w[i] = Math.pow(10, w[i] - maxLog[comp[i]]);
+                sum[comp[i]] += w[i];
+            }
+            for (int i = 0; i < n; i++) {
+                m[i] = total[comp[i]] * w[i] / sum[comp[i]];
+            }
+            return m;
+        }
+
+        double chargeBalance(double pH) {
+            double[] m = molalities(pH);
+            double f = Math.pow(10, -pH - log10GammaH) - kw * Math.pow(10, pH - log10GammaOH);
+            for (int i = 0; i < n; i++) {
+                f += charge[i] * m[i];
+            }
+            return f;
+        }
+
+        double chargeBalanceRoot() {
+            UnivariateFunction f = this::chargeBalance;
+            double lo = f.value(PH_LOW);
+            double hi = f.value(PH_HIGH);
+            if (!(lo > 0 && hi < 0)) {
+                throw new IndeterminateException(Caveat.indeterminate("no-root", String.format(Locale.ROOT,
+                        "the charge balance has no root between pH %.0f and %.0f", PH_LOW, PH_HIGH)));
+            }
+            try {
+                return new BrentSolver(1e-14, 1e-12).solve(500, f, PH_LOW, PH_HIGH);
+            } catch (MathIllegalStateException e) {
+                throw new IndeterminateException(Caveat.indeterminate("no-convergence",
+                        "the charge balance did not converge: " + e.getMessage()));
+            }
+        }
+
+        double ionicStrength(double pH) {
+            double[] m = molalities(pH);
+            double s = Math.pow(10, -pH - log10GammaH) + kw * Math.pow(10, pH - log10GammaOH);
+            for (int i = 0; i < n; i++) {
+                s += (double) charge[i] * charge[i] * m[i];
+            }
+            return 0.5 * s;
+        }
+
+        EquilibriumState state(double pH, double ionicStrength, List<Caveat> caveats) {
+            double[] m = molalities(pH);
+            double mH = Math.pow(10, -pH - log10GammaH);
+            double mOH = kw * Math.pow(10, pH - log10GammaOH);
+            double[] meanP = new double[components.length];
+            double particles = 0;
+            List<SpeciesAmount> out = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                int j = comp[i];
+                meanP[j] += total[j] > 0 ? protons[i] * m[i] / total[j] : 0;
+                particles += m[i];
+                out.add(new SpeciesAmount(sp[i], components[j], m[i], Math.pow(10, log10Gamma[i]),
+                        total[j] > 0 ? m[i] / total[j] : 0));
+            }
+            double variance = 0;   // Σ_C Σ_s m_s (p_s − p̄_C)², the centred form of the sum above
+            for (int i = 0; i < n; i++) {
+                double d = protons[i] - meanP[comp[i]];
+                variance += m[i] * d * d;
+            }
+            double beta = Thermo.LN10 * (mH + mOH + variance);
+            return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,
+                    particles + mH + mOH, out, caveats);
+        }
+    }
+}

@@ -1,0 +1,40 @@
+package org.protolyte.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** {@code protolyte}: the command line. Subcommands do the work; this class only wires them. */
+@Command(name = "protolyte", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Checks buffer and medium recipes: equilibrium pH, buffer capacity and rule findings.%n"
+                + "A decision aid: release rests on measured values, the pharmacopoeia, local SOPs and QA review.",
+        subcommands = {CheckCommand.class, CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    public static void main(String[] args) {
+        System.exit(run(args));
+    }
+
+    static int run(String... args) {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setExecutionExceptionHandler((ex, cmd, parsed) -> {
+            cmd.getErr().println("protolyte: internal fault: " + ex);
+            return 4;
+        });
+        cl.setParameterExceptionHandler((ex, a) -> {
+            CommandLine c = ex.getCommandLine();
+            c.getErr().println("protolyte: " + ex.getMessage());
+            c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help'.");
+            return 2;
+        });
+        return cl.execute(args);
+    }
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getErr());
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is needed, e.g. 'check FILE'");
+    }
+}

@@ -1,0 +1,60 @@
+package org.protolyte.document;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.protolyte.units.Quantity;
+
+/**
+ * A formulation document as read and checked: quantities parsed and of the right dimension, every
+ * part keeping its JSON pointer so findings can name their place. Temperatures are kelvin.
+ */
+public record Formulation(SourceDocument document, String id, Optional<String> title, Optional<String> revision,
+                          Optional<String> intendedUse, Basis basis, List<Line> components,
+                          Optional<PhTarget> pHTarget, List<Condition> conditions) {
+
+    public Formulation {
+        components = List.copyOf(components);
+        conditions = List.copyOf(conditions);
+    }
+
+    /** The recipe makes {@code finalVolume} of solution, or is dissolved in {@code waterMass} of water. */
+    public record Basis(boolean finalVolume, double amount, String pointer) {
+        /** Litres of solution under finalVolume, kilograms of water under waterMass. */
+        public double amount() {
+            return amount;
+        }
+    }
+
+    /** One component line of the recipe. */
+    public record Line(int index, String substance, Optional<Quantity> amount, Optional<Stock> stock,
+                       Optional<Adjustment> adjustTo, Optional<Double> density, String pointer) {
+        public boolean isTitrant() {
+            return adjustTo.isPresent();
+        }
+    }
+
+    /** A liquid stock: concentration (amount, mass or mass-fraction) and density in g/mL where given. */
+    public record Stock(Quantity concentration, Optional<Double> density, String pointer) {
+    }
+
+    /** q.s. to a pH at a temperature; without a pH the document's pH target is meant. */
+    public record Adjustment(OptionalDouble pH, double kelvin, String pointer) {
+    }
+
+    /** pH between min and max (value ± tolerance is stored as such) at a temperature. */
+    public record PhTarget(double min, double max, double kelvin, boolean temperatureStated, String pointer) {
+        public double midpoint() {
+            return Double.isInfinite(min) ? max : Double.isInfinite(max) ? min : (min + max) / 2;
+        }
+
+        public boolean contains(double pH) {
+            return pH >= min - 1e-9 && pH <= max + 1e-9;
+        }
+    }
+
+    /** A named state of the solution; {@code implicit} when the reader added it. */
+    public record Condition(String name, double kelvin, boolean implicit, String pointer) {
+    }
+}

@@ -1,0 +1,212 @@
+package org.protolyte.document;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+import org.protolyte.units.Dimension;
+import org.protolyte.units.Quantity;
+import org.protolyte.units.UnitException;
+
+import tools.jackson.databind.JsonNode;
+
+/**
+ * Reads a formulation document: schema first, then the rules a schema cannot state, then the typed
+ * {@link Formulation}. Every problem names its place; all of them are collected before failing.
+ */
+public final class FormulationReader {
+
+    public static final String SCHEMA = "formulation.schema.json";
+    static final double DEFAULT_TEMPERATURE = 298.15;
+
+    private final SchemaCatalog schemas;
+
+    public FormulationReader(SchemaCatalog schemas) {
+        this.schemas = schemas;
+    }
+
+    public Formulation read(SourceDocument doc) {
+        JsonNode root = doc.root();
+        if (!root.isObject() || !"formulation".equals(root.path("document").asString(""))) {
+            throw new DocumentException(doc.problem(root.isObject() && root.has("document") ? "/document" : "",
+                    "not a Protolyte formulation document: expected \"document\": \"formulation\""));
+        }
+        List<Problem> problems = schemas.validate(doc, SCHEMA);
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        return new Parse(doc).formulation();
+    }
+
+    /** One document's parse, collecting problems. */
+    private static final class Parse {
+        private final SourceDocument doc;
+        private final List<Problem> problems = new ArrayList<>();
+
+        Parse(SourceDocument doc) {
+            this.doc = doc;
+        }
+
+        Formulation formulation() {
+            JsonNode root = doc.root();
+            Formulation.Basis basis = basis(root.get("basis"));
+            List<Formulation.Line> lines = new ArrayList<>();
+            JsonNode comps = root.get("components");
+            for (int i = 0; i < comps.size(); i++) {
+                lines.add(line(comps.get(i), i));
+            }
+            Optional<Formulation.PhTarget> target = root.path("targets").has("pH")
+                    ? Optional.ofNullable(target(root.path("targets").get("pH"))) : Optional.empty();
+            List<Formulation.Condition> conditions = conditions(root.path("conditions"), target);
+            if (!problems.isEmpty()) {
+                throw new DocumentException(problems);
+            }
+            return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
+                    text(root, "intendedUse"), basis, lines, target, conditions);
+        }
+
+        private static Optional<String> text(JsonNode n, String field) {
+            return n.has(field) ? Optional.of(n.get(field).asString()) : Optional.empty();
+        }
+
+        private Optional<Quantity> quantity(JsonNode n, String pointer, String what, Dimension... allowed) {
+            try {
+                Quantity q = n.isString() ? Quantity.parse(n.asString())
+                        : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
+                return Optional.of(q.require(what, allowed));
+            } catch (UnitException e) {
+                problems.add(doc.problem(pointer, e.getMessage()));
+                return Optional.empty();
+            }
+        }
+
+        private Optional<Quantity> positive(JsonNode n, String pointer, String what, Dimension... allowed) {
+            Optional<Quantity> q = quantity(n, pointer, what, allowed);
+            if (q.isPresent() && !(q.get().value() > 0)) {
+                problems.add(doc.problem(pointer, what + " must be greater than zero, not " + q.get()));
+                return Optional.empty();
+            }
+            return q;
+        }
+
+        private OptionalDouble temperature(JsonNode n, String pointer) {
+            Optional<Quantity> q = quantity(n, pointer, "a temperature", Dimension.TEMPERATURE);
+            if (q.isEmpty()) {
+                return OptionalDouble.empty();
+            }
+            double k = q.get().base();
+            if (!(k > 0)) {
+                problems.add(doc.problem(pointer, "temperature " + q.get() + " is below absolute zero"));
+                return OptionalDouble.empty();
+            }
+            return OptionalDouble.of(k);
+        }
+
+        private Formulation.Basis basis(JsonNode n) {
+            if (n.has("finalVolume")) {
+                String p = "/basis/finalVolume";
+                Optional<Quantity> q = positive(n.get("finalVolume"), p, "finalVolume", Dimension.VOLUME);
+                return new Formulation.Basis(true, q.map(Quantity::base).orElse(1.0), p);
+            }
+            String p = "/basis/waterMass";
+            Optional<Quantity> q = positive(n.get("waterMass"), p, "waterMass", Dimension.MASS);
+            return new Formulation.Basis(false, q.map(x -> x.base() / 1000).orElse(1.0), p);
+        }
+
+        private Formulation.Line line(JsonNode n, int i) {
+            String p = "/components/" + i;
+            String substance = n.get("substance").asString();
+            boolean hasAmount = n.has("amount");
+            boolean hasAdjust = n.has("adjustTo");
+            if (hasAmount == hasAdjust) {
+                problems.add(doc.problem(p, hasAmount
+                        ? "component '" + substance + "' has both amount and adjustTo; give one"
+                        : "component '" + substance + "' needs an amount, or adjustTo for q.s. to a pH"));
+            }
+            Optional<Quantity> amount = hasAmount ? positive(n.get("amount"), p + "/amount", "amount",
+                    Dimension.MASS, Dimension.AMOUNT, Dimension.VOLUME, Dimension.AMOUNT_CONCENTRATION,
+                    Dimension.MASS_CONCENTRATION, Dimension.MOLALITY, Dimension.VOLUME_FRACTION,
+                    Dimension.MASS_FRACTION) : Optional.empty();
+            Optional<Formulation.Stock> stock = Optional.empty();
+            if (n.has("stock")) {
+                JsonNode s = n.get("stock");
+                Optional<Quantity> c = positive(s.get("concentration"), p + "/stock/concentration",
+                        "a stock concentration", Dimension.AMOUNT_CONCENTRATION, Dimension.MASS_CONCENTRATION,
+                        Dimension.MASS_FRACTION);
+                Optional<Double> density = s.has("density")
+                        ? positive(s.get("density"), p + "/stock/density", "a density", Dimension.DENSITY)
+                        .map(Quantity::base) : Optional.empty();
+                if (c.isPresent() && c.get().dimension() == Dimension.MASS_FRACTION && density.isEmpty()) {
+                    problems.add(doc.problem(p + "/stock", "a stock given in % w/w needs its density, "
+                            + "e.g. \"density\": \"1.18 g/mL\""));
+                }
+                if (c.isPresent()) {
+                    stock = Optional.of(new Formulation.Stock(c.get(), density, p + "/stock"));
+                }
+            }
+            Optional<Formulation.Adjustment> adjust = Optional.empty();
+            if (hasAdjust) {
+                JsonNode a = n.get("adjustTo");
+                OptionalDouble t = temperature(a.get("temperature"), p + "/adjustTo/temperature");
+                OptionalDouble pH = a.has("pH") ? OptionalDouble.of(a.get("pH").asDouble()) : OptionalDouble.empty();
+                adjust = Optional.of(new Formulation.Adjustment(pH, t.orElse(DEFAULT_TEMPERATURE), p + "/adjustTo"));
+            }
+            Optional<Double> density = n.has("density")
+                    ? positive(n.get("density"), p + "/density", "a density", Dimension.DENSITY).map(Quantity::base)
+                    : Optional.empty();
+            return new Formulation.Line(i, substance, amount, stock, adjust, density, p);
+        }
+
+        private Formulation.PhTarget target(JsonNode n) {
+            String p = "/targets/pH";
+            double min = Double.NEGATIVE_INFINITY;
+            double max = Double.POSITIVE_INFINITY;
+            if (n.has("value")) {
+                min = n.get("value").asDouble() - n.get("tolerance").asDouble();
+                max = n.get("value").asDouble() + n.get("tolerance").asDouble();
+                if (n.has("min") || n.has("max")) {
+                    problems.add(doc.problem(p, "give either value with tolerance, or min/max, not both"));
+                }
+            } else {
+                min = n.has("min") ? n.get("min").asDouble() : min;
+                max = n.has("max") ? n.get("max").asDouble() : max;
+                if (min > max) {
+                    problems.add(doc.problem(p + "/min", "min " + min + " is above max " + max));
+                }
+            }
+            boolean stated = n.has("temperature");
+            double t = stated ? temperature(n.get("temperature"), p + "/temperature").orElse(DEFAULT_TEMPERATURE)
+                    : DEFAULT_TEMPERATURE;
+            return new Formulation.PhTarget(min, max, t, stated, p);
+        }
+
+        private List<Formulation.Condition> conditions(JsonNode n, Optional<Formulation.PhTarget> target) {
+            List<Formulation.Condition> out = new ArrayList<>();
+            Set<String> names = new HashSet<>();
+            for (int i = 0; i < n.size(); i++) {
+                String p = "/conditions/" + i;
+                String name = n.get(i).get("name").asString();
+                if (!names.add(name)) {
+                    problems.add(doc.problem(p + "/name", "condition name '" + name + "' is used twice"));
+                }
+                OptionalDouble t = temperature(n.get(i).get("temperature"), p + "/temperature");
+                out.add(new Formulation.Condition(name, t.orElse(DEFAULT_TEMPERATURE), false, p));
+            }
+            if (out.isEmpty()) {
+                out.add(new Formulation.Condition("use", DEFAULT_TEMPERATURE, true, ""));
+            }
+            if (target.isPresent()) {
+                double tk = target.get().kelvin();
+                boolean matched = out.stream().anyMatch(c -> Math.abs(c.kelvin() - tk) < 0.005);
+                if (!matched) {
+                    String name = names.contains("target") ? "target (pH)" : "target";
+                    out.add(new Formulation.Condition(name, tk, true, target.get().pointer()));
+                }
+            }
+            return out;
+        }
+    }
+}

@@ -1,0 +1,80 @@
+package org.protolyte.document;
+
+import java.util.HashMap;
+import java.util.Map;
+import java.util.Optional;
+
+import tools.jackson.core.JacksonException;
+import tools.jackson.core.JsonParser;
+import tools.jackson.core.JsonToken;
+import tools.jackson.core.StreamReadConstraints;
+import tools.jackson.core.StreamReadFeature;
+import tools.jackson.core.TokenStreamLocation;
+import tools.jackson.core.json.JsonFactory;
+import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * Strict JSON reading: duplicate keys, trailing content, nesting deeper than {@value #MAX_DEPTH} and
+ * numbers beyond the range of a double are errors, each named by place. Records where every value
+ * begins so that later problems can name a line and column.
+ */
+public final class JsonReader {
+
+    public static final int MAX_DEPTH = 64;
+    private static final long MAX_BYTES = 16L * 1024 * 1024;
+
+    private final JsonMapper mapper;
+
+    public JsonReader() {
+        JsonFactory factory = JsonFactory.builder()
+                .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
+                .build();
+        mapper = JsonMapper.builder(factory)
+                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+                .build();
+    }
+
+    public SourceDocument read(String source, byte[] content) {
+        if (content.length > MAX_BYTES) {
+            throw new DocumentException(new Problem("", Optional.empty(),
+                    "file is larger than " + MAX_BYTES / (1024 * 1024) + " MiB"));
+        }
+        Map<String, Location> locations = new HashMap<>();
+        String last = "";
+        try (JsonParser p = mapper.createParser(content)) {
+            JsonToken t;
+            while ((t = p.nextToken()) != null) {
+                String pointer = p.streamReadContext().pathAsPointer().toString();
+                last = pointer;
+                TokenStreamLocation l = p.currentTokenLocation();
+                Location here = new Location(l.getLineNr(), l.getColumnNr());
+                if (t == JsonToken.PROPERTY_NAME) {
+                    locations.putIfAbsent(pointer, here);
+                } else if (t.isScalarValue() || t.isStructStart()) {
+                    locations.putIfAbsent(pointer, here);
+                    if (t == JsonToken.VALUE_NUMBER_FLOAT && !Double.isFinite(p.getDoubleValue())) {
+                        throw new DocumentException(new Problem(pointer, Optional.of(here),
+                                "the number " + p.getString() + " is outside the range of a finite number"));
+                    }
+                }
+            }
+        } catch (JacksonException e) {
+            // the pointer is the last value read before the fault: the place to start looking
+            throw new DocumentException(new Problem(last, locationOf(e), "not valid JSON: "
+                    + e.getOriginalMessage()));
+        }
+        JsonNode root = mapper.readTree(content);
+        return new SourceDocument(source, root, locations);
+    }
+
+    private static Optional<Location> locationOf(JacksonException e) {
+        TokenStreamLocation l = e.getLocation();
+        if (l == null || l.getLineNr() < 1) {
+            return Optional.empty();
+        }
+        return Optional.of(new Location(l.getLineNr(), l.getColumnNr()));
+    }
+}

@@ -1,0 +1,152 @@
+package org.protolyte.document;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.ConcurrentHashMap;
+
+import com.networknt.schema.Error;
+import com.networknt.schema.Schema;
+import com.networknt.schema.SchemaLocation;
+import com.networknt.schema.SchemaRegistry;
+import com.networknt.schema.SpecificationVersion;
+import com.networknt.schema.path.NodePath;
+
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The JSON Schemas shipped in the jar under {@code schemas/}, validated with networknt's validator.
+ * Schemas are identified by {@value #ID_PREFIX}…; that prefix is mapped to the class path and nothing
+ * else may be loaded, so a {@code $ref} or {@code $schema} can never cause a network fetch.
+ */
+public final class SchemaCatalog {
+
+    public static final String ID_PREFIX = "https://protolyte.org/schemas/";
+    private static final String CLASSPATH_PREFIX = "classpath:schemas/";
+
+    private final SchemaRegistry registry;
+    private final Map<String, Schema> schemas = new ConcurrentHashMap<>();
+    private final Map<String, JsonNode> schemaTrees = new ConcurrentHashMap<>();
+    private final JsonMapper mapper = JsonMapper.builder().build();
+
+    public SchemaCatalog() {
+        registry = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12, builder -> builder
+                .schemaIdResolvers(ids -> ids.mapPrefix(ID_PREFIX, CLASSPATH_PREFIX))
+                .schemaLoader(loader -> loader
+                        .fetchRemoteResources(false)
+                        .allow(iri -> isLocal(iri.toString()))));
+    }
+
+    /** Only our own schemas (mapped to the class path) and the validator's built-in meta-schemas. */
+    static boolean isLocal(String iri) {
+        return iri.startsWith(ID_PREFIX) || iri.startsWith("classpath:")
+                || iri.startsWith("https://json-schema.org/draft/2020-12/");
+    }
+
+    public Schema schema(String fileName) {
+        return schemas.computeIfAbsent(fileName, f -> registry.getSchema(SchemaLocation.of(ID_PREFIX + f)));
+    }
+
+    /** The schema file's own tree, for naming the properties a place allows. */
+    JsonNode schemaTree(String fileName) {
+        return schemaTrees.computeIfAbsent(fileName, f -> {
+            try (InputStream in = SchemaCatalog.class.getResourceAsStream("/schemas/" + f)) {
+                if (in == null) {
+                    throw new IllegalStateException("schema " + f + " is missing from the jar");
+                }
+                return mapper.readTree(in);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        });
+    }
+
+    /** Validates, returning problems in document order, each naming its place. */
+    public List<Problem> validate(SourceDocument doc, String schemaFile) {
+        List<Error> errors = schema(schemaFile).validate(doc.root());
+        List<Problem> out = new ArrayList<>();
+        for (Error e : errors) {
+            String pointer = pointer(e.getInstanceLocation());
+            String keyword = e.getKeyword() == null ? "" : e.getKeyword();
+            String message;
+            if ((keyword.equals("additionalProperties") || keyword.equals("unevaluatedProperties"))
+                    && e.getProperty() != null) {
+                pointer = pointer + "/" + escape(e.getProperty());
+                message = unknownProperty(e, schemaFile);
+            } else if (keyword.equals("required") && e.getProperty() != null) {
+                message = "required property '" + e.getProperty() + "' is missing";
+            } else {
+                message = stripPath(e.getMessage());
+            }
+            Problem p = doc.problem(pointer, message);
+            if (out.stream().noneMatch(q -> q.pointer().equals(p.pointer()) && q.message().equals(p.message()))) {
+                out.add(p);
+            }
+        }
+        out.sort(Comparator.comparing((Problem p) -> p.location().map(Location::line).orElse(0))
+                .thenComparing(p -> p.location().map(Location::column).orElse(0)));
+        return out;
+    }
+
+    private String unknownProperty(Error e, String schemaFile) {
+        String name = e.getProperty();
+        List<String> known = allowedProperties(e, schemaFile);
+        Optional<String> nearest = Suggestions.nearest(name, known);
+        String base = "unknown property '" + name + "'";
+        if (nearest.isPresent()) {
+            return base + "; did you mean '" + nearest.get() + "'?";
+        }
+        return known.isEmpty() ? base : base + "; allowed here: " + String.join(", ", known);
+    }
+
+    /** The names under the sibling {@code properties} of the failing keyword, from the schema file. */
+    private List<String> allowedProperties(Error e, String schemaFile) {
+        List<String> out = new ArrayList<>();
+        NodePath fragment = e.getSchemaLocation().getFragment();
+        JsonNode node = schemaTree(fileOf(e.getSchemaLocation(), schemaFile));
+        for (int i = 0; i < fragment.getNameCount() - 1 && node != null; i++) {
+            Object el = fragment.getElement(i);
+            node = el instanceof Integer idx ? node.get(idx) : node.get(String.valueOf(el));
+        }
+        if (node != null && node.get("properties") != null) {
+            Iterator<String> names = node.get("properties").propertyNames().iterator();
+            names.forEachRemaining(out::add);
+        }
+        return out;
+    }
+
+    private static String fileOf(SchemaLocation location, String fallback) {
+        String iri = location.getAbsoluteIri() == null ? "" : location.getAbsoluteIri().toString();
+        for (String prefix : List.of(ID_PREFIX, CLASSPATH_PREFIX)) {
+            if (iri.startsWith(prefix)) {
+                return iri.substring(prefix.length());
+            }
+        }
+        return fallback;
+    }
+
+    static String pointer(NodePath path) {
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < path.getNameCount(); i++) {
+            b.append('/').append(escape(String.valueOf(path.getElement(i))));
+        }
+        return b.toString();
+    }
+
+    private static String escape(String s) {
+        return s.replace("~", "~0").replace("/", "~1");
+    }
+
+    /** networknt prefixes messages with the instance path, which we report separately. */
+    private static String stripPath(String message) {
+        int colon = message.indexOf(": ");
+        return message.startsWith("$") && colon > 0 ? message.substring(colon + 2) : message;
+    }
+}

@@ -1,0 +1,54 @@
+package org.protolyte.document;
+
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+
+/** "Did you mean": the nearest names by edit distance (Levenshtein), ignoring case. */
+public final class Suggestions {
+
+    private Suggestions() {
+    }
+
+    public static Optional<String> nearest(String name, Collection<String> candidates) {
+        List<String> n = nearest(name, candidates, 1);
+        return n.isEmpty() ? Optional.empty() : Optional.of(n.get(0));
+    }
+
+    /** Up to {@code limit} candidates within a distance of a third of the name's length (at least 2). */
+    public static List<String> nearest(String name, Collection<String> candidates, int limit) {
+        String key = name.toLowerCase(Locale.ROOT);
+        int threshold = Math.max(2, key.length() / 3);
+        List<String> close = new ArrayList<>();
+        for (String c : candidates) {
+            if (distance(key, c.toLowerCase(Locale.ROOT)) <= threshold) {
+                close.add(c);
+            }
+        }
+        close.sort(Comparator.comparingInt((String c) -> distance(key, c.toLowerCase(Locale.ROOT)))
+                .thenComparing(Comparator.naturalOrder()));
+        return close.subList(0, Math.min(limit, close.size()));
+    }
+
+    public static int distance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
+    }
+}

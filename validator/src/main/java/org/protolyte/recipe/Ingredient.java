@@ -1,0 +1,19 @@
+package org.protolyte.recipe;
+
+import org.protolyte.document.Formulation;
+import org.protolyte.substance.Substance;
+
+/**
+ * A resolved component line: moles per basis, or a molality (mol/kg water) where the recipe gives one,
+ * or a titrant whose amount the analysis finds. {@code stockMolarity} (mol/L) is set where the line
+ * names a stock.
+ */
+public record Ingredient(Formulation.Line line, Substance substance, Kind kind, double value,
+                         double stockMolarity, double stockDensity) {
+
+    public enum Kind { MOLES, MOLALITY, TITRANT }
+
+    public boolean hasStock() {
+        return stockMolarity > 0;
+    }
+}

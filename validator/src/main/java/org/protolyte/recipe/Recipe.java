@@ -1,0 +1,118 @@
+package org.protolyte.recipe;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.Species;
+import org.protolyte.chemistry.Water;
+import org.protolyte.document.Formulation;
+import org.protolyte.substance.Composition;
+import org.protolyte.substance.Substance;
+import org.protolyte.substance.SubstanceLibrary;
+
+/**
+ * A formulation with every substance resolved and every amount in moles (or mol/kg) per basis. It
+ * makes the {@link Solution} for any amounts of its titrants.
+ *
+ * @param makeUpKelvin temperature at which the volume is made up (the preparation condition, else 20 °C)
+ */
+public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ingredient> ingredients,
+                     double makeUpKelvin) {
+
+    public Recipe {
+        ingredients = List.copyOf(ingredients);
+    }
+
+    public List<Ingredient> titrants() {
+        return ingredients.stream().filter(i -> i.kind() == Ingredient.Kind.TITRANT).toList();
+    }
+
+    /** Makes the solution with the given moles (per basis) of each titrant; absent titrants are zero. */
+    public Solution solution(Map<Ingredient, Double> titrantMoles) {
+        boolean finalVolume = formulation.basis().finalVolume();
+        double basis = formulation.basis().amount();
+        double rho = DensityModel.waterDensity(makeUpKelvin);
+        Map<Ingredient, Double> fixed = new LinkedHashMap<>();
+        double fixedVolume = 0;       // L of solute apparent volume from fixed amounts
+        double molalVolume = 0;       // L per kg water from molality amounts
+        double extraWater = 0;        // kg of water the ingredients bring (waterMass basis)
+        for (Ingredient ing : ingredients) {
+            double phi = DensityModel.apparentMolarVolume(ing.substance()) / 1000;
+            if (ing.kind() == Ingredient.Kind.MOLALITY) {
+                molalVolume += ing.value() * phi;
+                continue;
+            }
+            double n = ing.kind() == Ingredient.Kind.TITRANT ? titrantMoles.getOrDefault(ing, 0.0) : ing.value();
+            fixed.put(ing, n);
+            if (ing.substance().solvent()) {
+                extraWater += n * Water.MOLAR_MASS / 1000;
+                continue;
+            }
+            fixedVolume += n * phi;
+            extraWater += n * ing.substance().hydrationWater() * Water.MOLAR_MASS / 1000;
+            if (ing.hasStock()) {
+                extraWater += stockWater(ing, n);
+            }
+        }
+        double waterKg;
+        if (finalVolume) {
+            // V = m_w/ρ + Σ n φ + m_w Σ b φ  ⇒  m_w = ρ (V − Σ n φ) / (1 + ρ Σ b φ)
+            waterKg = rho * (basis - fixedVolume) / (1 + rho * molalVolume);
+        } else {
+            waterKg = basis + extraWater;
+        }
+        if (!(waterKg > 0)) {
+            throw new IllegalStateException("the solutes fill the whole final volume: no water is left");
+        }
+        Map<Ingredient, Double> moles = new LinkedHashMap<>(fixed);
+        for (Ingredient ing : ingredients) {
+            if (ing.kind() == Ingredient.Kind.MOLALITY) {
+                moles.put(ing, ing.value() * waterKg);
+            }
+        }
+        return build(moles, waterKg, fixedVolume + molalVolume * waterKg);
+    }
+
+    /** kg of water in {@code n} moles' worth of stock: stock mass less solute mass, or the density model. */
+    private double stockWater(Ingredient ing, double n) {
+        double litres = n / ing.stockMolarity();
+        double m = ing.substance().molarMass().orElse(0);
+        if (ing.stockDensity() > 0) {
+            return litres * ing.stockDensity() - n * m / 1000;
+        }
+        double phi = DensityModel.apparentMolarVolume(ing.substance()) / 1000;
+        return DensityModel.waterDensity(293.15) * (litres - n * phi);
+    }
+
+    private Solution build(Map<Ingredient, Double> moles, double waterKg, double soluteVolume) {
+        Map<Component, Double> totals = new LinkedHashMap<>();
+        Set<Species> species = new LinkedHashSet<>();
+        for (Map.Entry<Ingredient, Double> e : moles.entrySet()) {
+            Substance s = e.getKey().substance();
+            double molality = e.getValue() / waterKg;
+            Composition c = s.composition();
+            c.ions().forEach((name, count) -> {
+                Component ion = library.ion(name).orElseThrow();
+                totals.merge(ion, count * molality, Double::sum);
+                species.add(Species.free(ion));
+            });
+            c.solutes().forEach((name, count) -> {
+                Component solute = library.solute(name).orElseThrow();
+                totals.merge(solute, count * molality, Double::sum);
+                species.add(Species.free(solute));
+            });
+            for (Composition.SystemPart part : c.systems()) {
+                AcidBaseSystem system = library.system(part.system()).orElseThrow();
+                totals.merge(system.basis(), part.count() * molality, Double::sum);
+                species.addAll(system.species());
+            }
+        }
+        return new Solution(totals, new ArrayList<>(species), waterKg, moles, soluteVolume);
+    }
+}

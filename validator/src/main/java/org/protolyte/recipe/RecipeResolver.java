@@ -1,0 +1,140 @@
+package org.protolyte.recipe;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Formulation;
+import org.protolyte.document.Problem;
+import org.protolyte.substance.LookupException;
+import org.protolyte.substance.Substance;
+import org.protolyte.substance.SubstanceLibrary;
+import org.protolyte.units.Quantity;
+
+/**
+ * Resolves each component line to a library substance and its amount to moles (or mol/kg) per basis.
+ * A name that does not resolve, a mass without a molar mass, a per-litre amount on a water-mass basis:
+ * each is a problem at its line, and all are reported together.
+ */
+public final class RecipeResolver {
+
+    private static final double DEFAULT_MAKE_UP_KELVIN = 293.15;
+
+    private final SubstanceLibrary library;
+
+    public RecipeResolver(SubstanceLibrary library) {
+        this.library = library;
+    }
+
+    public Recipe resolve(Formulation f) {
+        List<Problem> problems = new ArrayList<>();
+        List<Ingredient> ingredients = new ArrayList<>();
+        for (Formulation.Line line : f.components()) {
+            Substance s;
+            try {
+                s = library.lookup(line.substance());
+            } catch (LookupException e) {
+                problems.add(f.document().problem(line.pointer() + "/substance", e.getMessage()));
+                continue;
+            }
+            try {
+                ingredients.add(ingredient(f, line, s));
+            } catch (AmountException e) {
+                problems.add(f.document().problem(e.pointer, e.getMessage()));
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        double makeUp = f.conditions().stream().filter(c -> c.name().equals("preparation")).findFirst()
+                .map(Formulation.Condition::kelvin).orElse(DEFAULT_MAKE_UP_KELVIN);
+        return new Recipe(f, library, ingredients, makeUp);
+    }
+
+    private static final class AmountException extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        final String pointer;
+
+        AmountException(String pointer, String message) {
+            super(message);
+            this.pointer = pointer;
+        }
+    }
+
+    private Ingredient ingredient(Formulation f, Formulation.Line line, Substance s) {
+        double molarity = 0;
+        double stockDensity = line.stock().flatMap(Formulation.Stock::density).orElse(0.0);
+        if (line.stock().isPresent()) {
+            molarity = stockMolarity(line.stock().get(), s);
+        }
+        if (line.isTitrant()) {
+            if (s.solvent() || !s.composition().isIonizable()) {
+                throw new AmountException(line.pointer() + "/adjustTo",
+                        "'" + s.name() + "' is neither an acid nor a base and cannot adjust the pH");
+            }
+            return new Ingredient(line, s, Ingredient.Kind.TITRANT, 0, molarity, stockDensity);
+        }
+        Quantity q = line.amount().orElseThrow();
+        String at = line.pointer() + "/amount";
+        boolean finalVolume = f.basis().finalVolume();
+        double basis = f.basis().amount();
+        double n;
+        switch (q.dimension()) {
+            case MASS -> n = q.base() / molarMass(s, at);
+            case AMOUNT -> n = q.base();
+            case VOLUME -> {
+                if (molarity > 0) {
+                    n = q.base() * molarity;
+                } else {
+                    n = q.base() * 1000 * neatDensity(line, s, at) / molarMass(s, at);
+                }
+            }
+            case AMOUNT_CONCENTRATION -> n = perLitre(finalVolume, at, q) * basis;
+            case MASS_CONCENTRATION -> n = perLitre(finalVolume, at, q) * basis / molarMass(s, at);
+            case VOLUME_FRACTION -> n = perLitre(finalVolume, at, q) * basis * 1000 * neatDensity(line, s, at)
+                    / molarMass(s, at);
+            case MOLALITY -> {
+                return new Ingredient(line, s, Ingredient.Kind.MOLALITY, q.base(), molarity, stockDensity);
+            }
+            case MASS_FRACTION -> throw new AmountException(at, "% w/w is accepted for a stock concentration; "
+                    + "for a component give g/L, % w/v, mol/kg or a mass per basis");
+            default -> throw new AmountException(at, "an amount cannot be " + q.dimension().description());
+        }
+        return new Ingredient(line, s, Ingredient.Kind.MOLES, n, molarity, stockDensity);
+    }
+
+    private static double perLitre(boolean finalVolume, String at, Quantity q) {
+        if (!finalVolume) {
+            throw new AmountException(at, "'" + q + "' is per litre of solution, but the basis is a water mass; "
+                    + "give mol/kg, or a mass or amount per basis, or use a finalVolume basis");
+        }
+        return q.base();
+    }
+
+    private static double molarMass(Substance s, String at) {
+        if (s.molarMass().isEmpty()) {
+            throw new AmountException(at, "'" + s.name() + "' has no molar mass in the library, so a mass or "
+                    + "mass concentration cannot be converted to moles; give an amount in mol or mmol/L");
+        }
+        return s.molarMass().getAsDouble();
+    }
+
+    private static double neatDensity(Formulation.Line line, Substance s, String at) {
+        Optional<Double> d = line.density().or(() -> s.density().isPresent()
+                ? Optional.of(s.density().getAsDouble()) : Optional.empty());
+        return d.orElseThrow(() -> new AmountException(at, "a volume of '" + s.name()
+                + "' needs its density (\"density\": \"1.05 g/mL\") or a stock (\"stock\": {\"concentration\": ...})"));
+    }
+
+    private static double stockMolarity(Formulation.Stock stock, Substance s) {
+        Quantity c = stock.concentration();
+        String at = stock.pointer() + "/concentration";
+        return switch (c.dimension()) {
+            case AMOUNT_CONCENTRATION -> c.base();
+            case MASS_CONCENTRATION -> c.base() / molarMass(s, at);
+            case MASS_FRACTION -> c.base() * stock.density().orElseThrow() * 1000 / molarMass(s, at);
+            default -> throw new AmountException(at, "a stock concentration cannot be " + c.dimension().description());
+        };
+    }
+}

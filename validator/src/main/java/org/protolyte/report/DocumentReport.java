@@ -1,0 +1,57 @@
+package org.protolyte.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.protolyte.analysis.ConditionResult;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Caveat;
+import org.protolyte.document.Formulation;
+import org.protolyte.rules.Finding;
+import org.protolyte.rules.Severity;
+
+/** What a run says about one input file. */
+public record DocumentReport(String source, Optional<String> id, Status status,
+                             Optional<FormulationAnalysis> analysis, List<Finding> findings,
+                             List<Diagnostic> diagnostics) {
+
+    public DocumentReport {
+        findings = List.copyOf(findings);
+        diagnostics = List.copyOf(diagnostics);
+    }
+
+    public static DocumentReport invalid(String source, Optional<String> id, List<Finding> problems) {
+        return new DocumentReport(source, id, Status.INVALID, Optional.empty(), problems, List.of());
+    }
+
+    public static DocumentReport fault(String source, String message) {
+        return new DocumentReport(source, Optional.empty(), Status.FAULT, Optional.empty(), List.of(),
+                List.of(new Diagnostic("internal-fault", Caveat.Severity.INDETERMINATE, message, Optional.empty(),
+                        Optional.empty(), Optional.empty())));
+    }
+
+    /** Status from the analysis: indeterminate outranks fail, an error finding fails. */
+    public static DocumentReport of(FormulationAnalysis a, List<Finding> findings) {
+        Formulation f = a.recipe().formulation();
+        List<Diagnostic> diagnostics = new ArrayList<>();
+        for (Caveat c : a.caveats()) {
+            diagnostics.add(new Diagnostic(c.code(), c.severity(), c.message(), Optional.empty(), Optional.empty(),
+                    Optional.empty()));
+        }
+        for (ConditionResult r : a.conditions()) {
+            String pointer = r.condition().pointer();
+            for (Caveat c : r.caveats()) {
+                diagnostics.add(new Diagnostic(c.code(), c.severity(), c.message(),
+                        Optional.of(r.condition().name()), pointer.isEmpty() ? Optional.empty() : Optional.of(pointer),
+                        pointer.isEmpty() ? Optional.empty() : f.document().locate(pointer)));
+            }
+        }
+        boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE)
+                || a.conditions().stream().anyMatch(r -> !r.determinate());
+        boolean failed = findings.stream().anyMatch(x -> x.severity() == Severity.ERROR);
+        Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
+        return new DocumentReport(f.document().source(), Optional.of(f.id()), s, Optional.of(a), findings,
+                diagnostics);
+    }
+}

@@ -1,0 +1,178 @@
+package org.protolyte.report;
+
+import java.util.Optional;
+
+import org.protolyte.analysis.ConditionResult;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.TitrantResult;
+import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SpeciesAmount;
+import org.protolyte.document.Formulation;
+import org.protolyte.document.Location;
+import org.protolyte.rules.Finding;
+
+import tools.jackson.databind.SerializationFeature;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.ObjectNode;
+
+/** The machine-readable report; its schema is {@code schemas/report.schema.json}. */
+public final class JsonRenderer {
+
+    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+
+    public String render(RunReport run) {
+        return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
+    }
+
+    public ObjectNode tree(RunReport run) {
+        ObjectNode root = mapper.createObjectNode();
+        ObjectNode tool = root.putObject("tool");
+        tool.put("name", "Protolyte");
+        tool.put("version", run.toolVersion());
+        tool.put("caution", RunReport.CAUTION);
+        tool.put("pHConvention", "conventional pH scale (Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. "
+                + "74 (2002) 2169): pH = −log10(γH·mH) with γH from the Davies equation");
+        ArrayNode reports = root.putArray("reports");
+        for (DocumentReport r : run.reports()) {
+            reports.add(document(r));
+        }
+        ObjectNode summary = root.putObject("summary");
+        summary.put("documents", run.reports().size());
+        for (Status s : Status.values()) {
+            summary.put(s.code(), run.count(s));
+        }
+        summary.put("exitCode", run.exitCode());
+        return root;
+    }
+
+    private ObjectNode document(DocumentReport r) {
+        ObjectNode n = mapper.createObjectNode();
+        n.put("source", r.source());
+        r.id().ifPresent(id -> n.put("id", id));
+        n.put("status", r.status().code());
+        r.analysis().ifPresent(a -> analysis(n, a));
+        ArrayNode findings = n.putArray("findings");
+        r.findings().forEach(f -> findings.add(finding(f)));
+        ArrayNode diagnostics = n.putArray("diagnostics");
+        for (Diagnostic d : r.diagnostics()) {
+            ObjectNode o = diagnostics.addObject();
+            o.put("code", d.code());
+            o.put("severity", d.severity().name().toLowerCase(java.util.Locale.ROOT));
+            o.put("message", d.message());
+            d.condition().ifPresent(c -> o.put("condition", c));
+            place(o, d.pointer(), d.location());
+        }
+        if (!n.has("conditions")) {
+            n.putArray("conditions");
+            n.putArray("titrants");
+        }
+        return n;
+    }
+
+    private void analysis(ObjectNode n, FormulationAnalysis a) {
+        Formulation f = a.recipe().formulation();
+        f.title().ifPresent(t -> n.put("title", t));
+        f.revision().ifPresent(t -> n.put("revision", t));
+        f.intendedUse().ifPresent(t -> n.put("intendedUse", t));
+        ObjectNode basis = n.putObject("basis");
+        if (f.basis().finalVolume()) {
+            basis.put("finalVolume", Numbers.significant(f.basis().amount(), 6));
+            basis.put("unit", "L");
+        } else {
+            basis.put("waterMass", Numbers.significant(f.basis().amount(), 6));
+            basis.put("unit", "kg");
+        }
+        basis.put("waterMassKg", Numbers.significant(a.solution().waterKg(), 6));
+        basis.put("makeUpTemperature", Numbers.decimals(Numbers.celsius(a.recipe().makeUpKelvin()), 2));
+        Systems systems = new Systems(a.recipe().library());
+        ArrayNode conditions = n.putArray("conditions");
+        for (ConditionResult c : a.conditions()) {
+            conditions.add(condition(c, systems, !f.basis().finalVolume(), a.solution().waterKg()));
+        }
+        ArrayNode titrants = n.putArray("titrants");
+        for (TitrantResult t : a.titrants()) {
+            titrants.add(titrant(t, f));
+        }
+        ArrayNode assumptions = n.putArray("assumptions");
+        a.assumptions().forEach(assumptions::add);
+    }
+
+    private ObjectNode condition(ConditionResult c, Systems systems, boolean perKg, double waterKg) {
+        ObjectNode o = mapper.createObjectNode();
+        o.put("name", c.condition().name());
+        o.put("implicit", c.condition().implicit());
+        o.put("temperature", Numbers.decimals(Numbers.celsius(c.condition().kelvin()), 2));
+        o.put("determinate", c.determinate());
+        if (c.determinate()) {
+            EquilibriumState s = c.state().orElseThrow();
+            o.put("pH", Numbers.decimals(s.pH(), 3));
+            o.put("bufferCapacity", Numbers.significant(c.bufferCapacityPerLitre() * 1000, 4));
+            if (perKg) {
+                o.put("bufferCapacityPerKgWater", Numbers.significant(s.bufferCapacity() * 1000, 4));
+            }
+            o.put("ionicStrength", Numbers.significant(s.ionicStrength(), 4));
+            o.put("pKw", Numbers.decimals(s.pKw(), 3));
+            ArrayNode species = o.putArray("species");
+            for (SpeciesAmount sp : s.species()) {
+                if (!systems.isSystem(sp.component())) {
+                    continue;
+                }
+                ObjectNode x = species.addObject();
+                x.put("system", systems.of(sp.component()));
+                x.put("name", sp.species().name());
+                x.put("charge", sp.species().charge());
+                x.put("molality", Numbers.significant(sp.molality(), 4));
+                x.put("fraction", Numbers.significant(sp.fractionOfComponent(), 4));
+            }
+        } else {
+            o.putNull("pH");
+            o.putNull("bufferCapacity");
+            o.putNull("ionicStrength");
+            o.putArray("species");
+        }
+        return o;
+    }
+
+    private ObjectNode titrant(TitrantResult t, Formulation f) {
+        ObjectNode o = mapper.createObjectNode();
+        o.put("substance", t.ingredient().substance().name());
+        o.put("pointer", t.ingredient().line().pointer());
+        o.put("role", t.role() == TitrantResult.Role.ACID ? "acid" : "base");
+        o.put("used", t.used() && t.unreachable().isEmpty());
+        o.put("amount", Numbers.significant(t.moles() * 1000, 5));
+        o.put("amountUnit", f.basis().finalVolume() ? "mmol per " + Numbers.significant(f.basis().amount(), 6)
+                + " L of solution" : "mmol per " + Numbers.significant(f.basis().amount(), 6) + " kg of water");
+        t.stockMillilitres().ifPresent(ml -> o.put("stockVolume", Numbers.significant(ml, 4)));
+        ObjectNode goal = o.putObject("goal");
+        goal.put("pH", Numbers.decimals(t.goalPH(), 3));
+        goal.put("temperature", Numbers.decimals(Numbers.celsius(t.goalKelvin()), 2));
+        if (t.setpointPH().isPresent()) {
+            ObjectNode sp = o.putObject("setpoint");
+            sp.put("pH", Numbers.decimals(t.setpointPH().getAsDouble(), 2));
+            sp.put("temperature", Numbers.decimals(Numbers.celsius(t.adjustKelvin()), 2));
+        }
+        t.unreachable().ifPresent(u -> {
+            o.put("unreachable", u.reason());
+            o.put("reachablePH", Numbers.decimals(u.reachablePH(), 2));
+        });
+        return o;
+    }
+
+    private ObjectNode finding(Finding f) {
+        ObjectNode o = mapper.createObjectNode();
+        o.put("rule", f.rule());
+        o.put("severity", f.severity().code());
+        o.put("message", f.message());
+        place(o, f.pointer(), f.location());
+        return o;
+    }
+
+    private static void place(ObjectNode o, Optional<String> pointer, Optional<Location> location) {
+        pointer.ifPresent(p -> o.put("pointer", p));
+        location.ifPresent(l -> {
+            o.put("line", l.line());
+            o.put("column", l.column());
+        });
+    }
+}

@@ -1,0 +1,124 @@
+package org.protolyte.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.protolyte.analysis.ConditionResult;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.TitrantResult;
+import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SpeciesAmount;
+import org.protolyte.document.Formulation;
+import org.protolyte.rules.Finding;
+
+/** The report as a person reads it in a terminal: what to set on the meter first, then the numbers. */
+public final class TextRenderer {
+
+    private static final String NL = System.lineSeparator();
+
+    public String render(RunReport run) {
+        StringBuilder b = new StringBuilder();
+        b.append("Protolyte ").append(run.toolVersion()).append(NL);
+        for (DocumentReport r : run.reports()) {
+            b.append(NL);
+            document(b, r);
+        }
+        b.append(NL).append(String.format(Locale.ROOT, "%d document(s): %d pass, %d fail, %d invalid, %d indeterminate",
+                run.reports().size(), run.count(Status.PASS), run.count(Status.FAIL), run.count(Status.INVALID),
+                run.count(Status.INDETERMINATE)));
+        if (run.count(Status.FAULT) > 0) {
+            b.append(", ").append(run.count(Status.FAULT)).append(" internal fault(s)");
+        }
+        b.append(NL).append(RunReport.CAUTION).append(NL);
+        return b.toString();
+    }
+
+    private void document(StringBuilder b, DocumentReport r) {
+        b.append("== ").append(r.source());
+        r.id().ifPresent(id -> b.append("  [").append(id).append("]"));
+        b.append("  ").append(r.status().code().toUpperCase(Locale.ROOT)).append(NL);
+        r.analysis().ifPresent(a -> analysis(b, a));
+        if (!r.findings().isEmpty()) {
+            b.append("  findings:").append(NL);
+            for (Finding f : r.findings()) {
+                b.append("    ").append(f.severity().code()).append(" ").append(f.rule());
+                f.pointer().ifPresent(p -> b.append("  ").append(p.isEmpty() ? "(document)" : p));
+                f.location().ifPresent(l -> b.append(" (line ").append(l.line()).append(", column ")
+                        .append(l.column()).append(")"));
+                b.append(NL).append("      ").append(f.message()).append(NL);
+            }
+        }
+        if (!r.diagnostics().isEmpty()) {
+            b.append("  diagnostics:").append(NL);
+            for (Diagnostic d : r.diagnostics()) {
+                b.append("    ").append(d.severity().name().toLowerCase(Locale.ROOT)).append(" ").append(d.code());
+                d.condition().ifPresent(c -> b.append(" [").append(c).append("]"));
+                b.append(NL).append("      ").append(d.message()).append(NL);
+            }
+        }
+    }
+
+    private void analysis(StringBuilder b, FormulationAnalysis a) {
+        Formulation f = a.recipe().formulation();
+        f.title().ifPresent(t -> b.append("  ").append(t));
+        f.revision().ifPresent(rev -> b.append(" (revision ").append(rev).append(")"));
+        f.intendedUse().ifPresent(u -> b.append(" — ").append(u));
+        if (f.title().isPresent() || f.revision().isPresent() || f.intendedUse().isPresent()) {
+            b.append(NL);
+        }
+        String basis = f.basis().finalVolume()
+                ? String.format(Locale.ROOT, "per %s L of solution", Numbers.significant(f.basis().amount(), 6))
+                : String.format(Locale.ROOT, "per %s kg of water", Numbers.significant(f.basis().amount(), 6));
+        for (TitrantResult t : a.titrants()) {
+            if (!t.used() || t.unreachable().isPresent()) {
+                continue;
+            }
+            b.append(String.format(Locale.ROOT, "  q.s. %s: %s mmol %s", t.ingredient().substance().name(),
+                    Numbers.significant(t.moles() * 1000, 4).toPlainString(), basis));
+            t.stockMillilitres().ifPresent(ml -> b.append(String.format(Locale.ROOT, " = %s mL of stock",
+                    Numbers.significant(ml, 4).toPlainString())));
+            b.append(NL);
+            t.setpointPH().ifPresent(sp -> b.append(String.format(Locale.ROOT,
+                    "  SETPOINT: adjust to pH %.2f on the meter at %.1f °C (gives pH %.2f at %.1f °C)%n", sp,
+                    Numbers.celsius(t.adjustKelvin()), t.goalPH(), Numbers.celsius(t.goalKelvin()))));
+        }
+        b.append(String.format(Locale.ROOT, "  %-14s %8s %7s %14s %11s%n", "condition", "T (°C)", "pH",
+                "β (mmol/L/pH)", "I (mol/kg)"));
+        Systems systems = new Systems(a.recipe().library());
+        for (ConditionResult c : a.conditions()) {
+            String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
+            if (c.determinate()) {
+                EquilibriumState s = c.state().orElseThrow();
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %7.2f %14s %11s   %s%n", name,
+                        Numbers.celsius(c.condition().kelvin()), s.pH(),
+                        Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
+                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), speciation(s, systems)));
+            } else {
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %7s %14s %11s   (see diagnostics)%n", name,
+                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—"));
+            }
+        }
+        if (a.conditions().stream().anyMatch(c -> c.condition().implicit())) {
+            b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
+        }
+        b.append("  assumed: ").append(String.join("; ", a.assumptions())).append(NL);
+    }
+
+    /** The main forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %". */
+    private static String speciation(EquilibriumState s, Systems systems) {
+        Map<String, List<String>> bySystem = new LinkedHashMap<>();
+        for (SpeciesAmount sp : s.species()) {
+            if (systems.isSystem(sp.component()) && sp.fractionOfComponent() >= 0.05) {
+                bySystem.computeIfAbsent(systems.of(sp.component()), k -> new ArrayList<>())
+                        .add(String.format(Locale.ROOT, "%s %.0f %%", sp.species().name(),
+                                sp.fractionOfComponent() * 100));
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        bySystem.forEach((k, v) -> parts.add(k + ": " + String.join(", ", v)));
+        return String.join("; ", parts);
+    }
+}

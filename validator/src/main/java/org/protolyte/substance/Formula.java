@@ -1,0 +1,114 @@
+package org.protolyte.substance;
+
+import java.util.Collections;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * A chemical formula such as {@code Na2HPO4·7H2O}, {@code C4H11NO3·HCl} or {@code Ca(CH3COO)2}: element
+ * counts, the water of hydration and the molar mass from {@link AtomicWeights}. Parts of an adduct are
+ * separated by '·' (also '.', '*' or a space) and may carry a leading count.
+ */
+public final class Formula {
+
+    private final String text;
+    private final Map<String, Integer> elements;
+    private final int hydrationWater;
+
+    private Formula(String text, Map<String, Integer> elements, int hydrationWater) {
+        this.text = text;
+        this.elements = Collections.unmodifiableMap(elements);
+        this.hydrationWater = hydrationWater;
+    }
+
+    public static Formula parse(String text) {
+        String[] parts = text.strip().split("\\s*[·•.*]\\s*|\\s+");
+        Map<String, Integer> total = new TreeMap<>();
+        int water = 0;
+        for (String part : parts) {
+            if (part.isEmpty()) {
+                throw new IllegalArgumentException("formula '" + text + "' has an empty part");
+            }
+            int i = 0;
+            while (i < part.length() && Character.isDigit(part.charAt(i))) {
+                i++;
+            }
+            int multiplier = i == 0 ? 1 : Integer.parseInt(part.substring(0, i));
+            String body = part.substring(i);
+            if (body.equals("H2O")) {
+                water += multiplier;
+            }
+            Map<String, Integer> counts = new TreeMap<>();
+            int end = parseGroup(text, body, 0, counts);
+            if (end != body.length()) {
+                throw new IllegalArgumentException("formula '" + text + "': unexpected '" + body.charAt(end) + "'");
+            }
+            counts.forEach((el, n) -> total.merge(el, n * multiplier, Integer::sum));
+        }
+        return new Formula(text.strip(), total, water);
+    }
+
+    /** Reads elements and parenthesised groups from {@code pos} until ')' or the end; returns the position. */
+    private static int parseGroup(String text, String s, int pos, Map<String, Integer> into) {
+        int i = pos;
+        while (i < s.length() && s.charAt(i) != ')') {
+            char c = s.charAt(i);
+            Map<String, Integer> group = new TreeMap<>();
+            if (c == '(') {
+                i = parseGroup(text, s, i + 1, group);
+                if (i >= s.length() || s.charAt(i) != ')') {
+                    throw new IllegalArgumentException("formula '" + text + "': unbalanced '('");
+                }
+                i++;
+            } else if (Character.isUpperCase(c)) {
+                int j = i + 1;
+                while (j < s.length() && Character.isLowerCase(s.charAt(j))) {
+                    j++;
+                }
+                String symbol = s.substring(i, j);
+                if (AtomicWeights.of(symbol).isEmpty()) {
+                    throw new IllegalArgumentException("formula '" + text + "': unknown element '" + symbol + "'");
+                }
+                group.put(symbol, 1);
+                i = j;
+            } else {
+                throw new IllegalArgumentException("formula '" + text + "': unexpected '" + c + "'");
+            }
+            int j = i;
+            while (j < s.length() && Character.isDigit(s.charAt(j))) {
+                j++;
+            }
+            int count = j == i ? 1 : Integer.parseInt(s.substring(i, j));
+            i = j;
+            group.forEach((el, n) -> into.merge(el, n * count, Integer::sum));
+        }
+        return i;
+    }
+
+    public String text() {
+        return text;
+    }
+
+    public Map<String, Integer> elements() {
+        return elements;
+    }
+
+    /** Moles of water of hydration per mole (the {@code ·nH2O} parts). */
+    public int hydrationWater() {
+        return hydrationWater;
+    }
+
+    /** g/mol from the IUPAC conventional atomic weights. */
+    public double molarMass() {
+        double m = 0;
+        for (Map.Entry<String, Integer> e : elements.entrySet()) {
+            m += AtomicWeights.of(e.getKey()).orElseThrow() * e.getValue();
+        }
+        return m;
+    }
+
+    @Override
+    public String toString() {
+        return text;
+    }
+}

@@ -1,0 +1,307 @@
+package org.protolyte.substance;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.DissociationStep;
+import org.protolyte.chemistry.TemperatureRange;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.Problem;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.document.SourceDocument;
+
+import tools.jackson.databind.JsonNode;
+
+/**
+ * Builds a {@link SubstanceLibrary} from the shipped library and any user libraries, in order. A user
+ * entry whose name (or a synonym) clashes with an earlier one is an error unless it declares
+ * {@code "replaces": true}. Every entry is checked: electroneutral composition, known systems, ions and
+ * forms, and a declared molar mass that matches the formula.
+ */
+public final class LibraryLoader {
+
+    public static final String SHIPPED = "/org/protolyte/substance/substances.json";
+    public static final String SCHEMA = "substance-library.schema.json";
+    /** A declared molar mass may differ from the formula's by rounding and older atomic-weight tables. */
+    public static final double MOLAR_MASS_TOLERANCE = 0.02;
+
+    private final JsonReader reader = new JsonReader();
+    private final SchemaCatalog schemas;
+
+    private final Map<String, AcidBaseSystem> systems = new LinkedHashMap<>();
+    private final Map<String, String> systemSources = new LinkedHashMap<>();
+    private final Map<String, Component> ions = new LinkedHashMap<>();
+    private final Map<String, Component> solutes = new LinkedHashMap<>();
+    private final Map<String, Substance> substances = new LinkedHashMap<>();
+    private final Map<String, Substance> index = new LinkedHashMap<>();
+    private final Map<String, List<String>> ambiguous = new LinkedHashMap<>();
+
+    public LibraryLoader(SchemaCatalog schemas) {
+        this.schemas = schemas;
+    }
+
+    public static SubstanceLibrary shipped(SchemaCatalog schemas) {
+        return new LibraryLoader(schemas).addShipped().build();
+    }
+
+    public LibraryLoader addShipped() {
+        try (InputStream in = LibraryLoader.class.getResourceAsStream(SHIPPED)) {
+            if (in == null) {
+                throw new IllegalStateException("the shipped substance library is missing from the jar");
+            }
+            return add("shipped library", in.readAllBytes(), false);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** Adds one library file; throws {@link DocumentException} with every problem found in it. */
+    public LibraryLoader add(String source, byte[] content, boolean user) {
+        SourceDocument doc = reader.read(source, content);
+        List<Problem> problems = new ArrayList<>(schemas.validate(doc, SCHEMA));
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        new FileReader(doc, user, problems).read();
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        return this;
+    }
+
+    public SubstanceLibrary build() {
+        return new SubstanceLibrary(systems, systemSources, ions, solutes, substances, index, ambiguous);
+    }
+
+    /** Reads one validated file into the builder's maps, collecting problems. */
+    private final class FileReader {
+        private final SourceDocument doc;
+        private final boolean user;
+        private final List<Problem> problems;
+
+        FileReader(SourceDocument doc, boolean user, List<Problem> problems) {
+            this.doc = doc;
+            this.user = user;
+            this.problems = problems;
+        }
+
+        void read() {
+            JsonNode root = doc.root();
+            each(root, "systems", this::system);
+            each(root, "ions", (n, p) -> named(ions, n, p, new Component(n.get("name").asString(),
+                    n.get("charge").asInt()), "ion"));
+            each(root, "solutes", (n, p) -> named(solutes, n, p, new Component(n.get("name").asString(), 0),
+                    "solute"));
+            each(root, "substances", this::substance);
+            each(root, "ambiguousNames", this::ambiguousName);
+        }
+
+        private void each(JsonNode root, String field, java.util.function.BiConsumer<JsonNode, String> f) {
+            JsonNode arr = root.get(field);
+            if (arr == null) {
+                return;
+            }
+            for (int i = 0; i < arr.size(); i++) {
+                f.accept(arr.get(i), "/" + field + "/" + i);
+            }
+        }
+
+        private <T> void named(Map<String, T> into, JsonNode n, String pointer, T value, String what) {
+            String name = n.get("name").asString();
+            if (into.containsKey(name)) {
+                if (!user || !n.path("replaces").asBoolean(false)) {
+                    problems.add(doc.problem(pointer + "/name", what + " '" + name + "' is already defined"
+                            + (user ? "; declare \"replaces\": true to replace it" : "")));
+                    return;
+                }
+            }
+            into.put(name, value);
+        }
+
+        private void system(JsonNode n, String pointer) {
+            String name = n.get("name").asString();
+            List<AcidBaseSystem.Form> forms = new ArrayList<>();
+            for (JsonNode f : n.get("forms")) {
+                forms.add(new AcidBaseSystem.Form(f.get("name").asString(), f.get("charge").asInt()));
+            }
+            List<DissociationStep> steps = new ArrayList<>();
+            Set<String> sources = new LinkedHashSet<>();
+            for (int i = 0; i < n.get("steps").size(); i++) {
+                JsonNode s = n.get("steps").get(i);
+                double from = s.get("validFrom").asDouble();
+                double to = s.get("validTo").asDouble();
+                if (from > to) {
+                    problems.add(doc.problem(pointer + "/steps/" + i + "/validTo", "validTo is below validFrom"));
+                    return;
+                }
+                steps.add(new DissociationStep(s.get("pKa").asDouble(), s.get("deltaH").asDouble() * 1000,
+                        s.path("deltaCp").asDouble(0), s.get("uncertainty").asDouble(),
+                        TemperatureRange.celsius(from, to)));
+                sources.add(s.get("source").asString());
+            }
+            try {
+                named(systems, n, pointer, new AcidBaseSystem(name, forms, steps), "acid–base system");
+                systemSources.put(name, String.join("; ", sources));
+            } catch (IllegalArgumentException e) {
+                problems.add(doc.problem(pointer, e.getMessage()));
+            }
+        }
+
+        private void substance(JsonNode n, String pointer) {
+            String name = n.get("name").asString();
+            int before = problems.size();
+            Optional<Formula> formula = Optional.empty();
+            if (n.has("formula")) {
+                try {
+                    formula = Optional.of(Formula.parse(n.get("formula").asString()));
+                } catch (IllegalArgumentException e) {
+                    problems.add(doc.problem(pointer + "/formula", e.getMessage()));
+                }
+            }
+            boolean nominal = n.path("nominalMolarMass").asBoolean(false);
+            OptionalDouble declared = n.has("molarMass") ? OptionalDouble.of(n.get("molarMass").asDouble())
+                    : OptionalDouble.empty();
+            OptionalDouble molarMass = declared;
+            if (formula.isPresent() && !nominal) {
+                double computed = formula.get().molarMass();
+                molarMass = OptionalDouble.of(computed);
+                if (declared.isPresent() && Math.abs(declared.getAsDouble() - computed) > MOLAR_MASS_TOLERANCE) {
+                    problems.add(doc.problem(pointer + "/molarMass", String.format(Locale.ROOT,
+                            "declared molar mass %.3f g/mol does not match the formula %s (%.3f g/mol)",
+                            declared.getAsDouble(), formula.get(), computed)));
+                }
+            }
+            Composition composition = composition(n.get("composition"), pointer + "/composition");
+            if (problems.size() > before) {
+                return;
+            }
+            List<String> synonyms = new ArrayList<>();
+            n.path("synonyms").forEach(s -> synonyms.add(s.asString()));
+            Substance s = new Substance(name, synonyms, formula, molarMass, nominal,
+                    n.path("solvent").asBoolean(false), composition,
+                    n.has("apparentMolarVolume") ? OptionalDouble.of(n.get("apparentMolarVolume").asDouble())
+                            : OptionalDouble.empty(),
+                    n.path("apparentMolarVolumeSource").asString(""),
+                    n.has("density") ? OptionalDouble.of(n.get("density").asDouble()) : OptionalDouble.empty(),
+                    n.path("notes").asString(""), doc.source());
+            register(s, n, pointer);
+        }
+
+        private void register(Substance s, JsonNode n, String pointer) {
+            boolean replaces = user && n.path("replaces").asBoolean(false);
+            Substance old = substances.get(s.name());
+            if (old != null && !replaces) {
+                problems.add(doc.problem(pointer + "/name", "substance '" + s.name() + "' is already defined in "
+                        + old.origin() + (user ? "; declare \"replaces\": true to replace it" : "")));
+                return;
+            }
+            if (old != null) {
+                index.values().removeIf(v -> v.name().equals(old.name()));
+            }
+            List<String> keys = new ArrayList<>();
+            keys.add(s.name());
+            keys.addAll(s.synonyms());
+            for (int i = 0; i < keys.size(); i++) {
+                String key = SubstanceLibrary.normalise(keys.get(i));
+                Substance other = index.get(key);
+                if (other != null && !other.name().equals(s.name())) {
+                    String where = i == 0 ? pointer + "/name" : pointer + "/synonyms/" + (i - 1);
+                    problems.add(doc.problem(where, "'" + keys.get(i) + "' already names '" + other.name()
+                            + "'; a name must resolve to one form"));
+                    return;
+                }
+            }
+            substances.put(s.name(), s);
+            for (String k : keys) {
+                index.put(SubstanceLibrary.normalise(k), s);
+            }
+        }
+
+        private Composition composition(JsonNode n, String pointer) {
+            Map<String, Double> ionAmounts = new LinkedHashMap<>();
+            double charge = n.path("protons").asDouble(0);
+            JsonNode ionNode = n.path("ions");
+            for (String name : ionNode.propertyNames()) {
+                Component c = ions.get(name);
+                if (c == null) {
+                    problems.add(doc.problem(pointer + "/ions/" + name, "unknown ion '" + name + "'"));
+                    continue;
+                }
+                double count = ionNode.get(name).asDouble();
+                ionAmounts.put(name, count);
+                charge += c.charge() * count;
+            }
+            List<Composition.SystemPart> parts = new ArrayList<>();
+            JsonNode sys = n.path("systems");
+            for (int i = 0; i < sys.size(); i++) {
+                JsonNode part = sys.get(i);
+                String sysName = part.get("system").asString();
+                AcidBaseSystem system = systems.get(sysName);
+                if (system == null) {
+                    problems.add(doc.problem(pointer + "/systems/" + i + "/system",
+                            "unknown acid–base system '" + sysName + "'"));
+                    continue;
+                }
+                int form = system.indexOf(part.get("form").asString());
+                if (form < 0) {
+                    problems.add(doc.problem(pointer + "/systems/" + i + "/form", "system '" + sysName
+                            + "' has no form '" + part.get("form").asString() + "'; its forms: "
+                            + system.forms().stream().map(AcidBaseSystem.Form::name).toList()));
+                    continue;
+                }
+                double count = part.get("count").asDouble();
+                parts.add(new Composition.SystemPart(sysName, part.get("form").asString(), count));
+                charge += system.forms().get(form).charge() * count;
+            }
+            Map<String, Double> soluteAmounts = new LinkedHashMap<>();
+            JsonNode sol = n.path("solutes");
+            for (String name : sol.propertyNames()) {
+                if (!solutes.containsKey(name)) {
+                    problems.add(doc.problem(pointer + "/solutes/" + name, "unknown solute '" + name + "'"));
+                    continue;
+                }
+                soluteAmounts.put(name, sol.get(name).asDouble());
+            }
+            if (Math.abs(charge) > 1e-9) {
+                problems.add(doc.problem(pointer, String.format(Locale.ROOT,
+                        "composition is not electrically neutral (net charge %+.3f per mole)", charge)));
+            }
+            return new Composition(ionAmounts, parts, soluteAmounts);
+        }
+
+        private void ambiguousName(JsonNode n, String pointer) {
+            List<String> forms = new ArrayList<>();
+            for (int i = 0; i < n.get("forms").size(); i++) {
+                String f = n.get("forms").get(i).asString();
+                if (!substances.containsKey(f)) {
+                    problems.add(doc.problem(pointer + "/forms/" + i, "no substance named '" + f + "'"));
+                }
+                forms.add(f);
+            }
+            String key = SubstanceLibrary.normalise(n.get("name").asString());
+            if (index.containsKey(key)) {
+                problems.add(doc.problem(pointer + "/name", "'" + n.get("name").asString()
+                        + "' already names the substance '" + index.get(key).name() + "'"));
+                return;
+            }
+            ambiguous.merge(key, forms, (a, b) -> {
+                List<String> all = new ArrayList<>(a);
+                b.stream().filter(f -> !all.contains(f)).forEach(all::add);
+                return all;
+            });
+        }
+    }
+}

@@ -1,0 +1,28 @@
+package org.protolyte.substance;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+/**
+ * One library entry: a specific form of a material (glucose monohydrate, not glucose).
+ *
+ * @param molarMass            g/mol: from the formula where there is one, else the declared (nominal) value
+ * @param apparentMolarVolume  cm³/mol at infinite dilution, 25 °C, for the density model
+ * @param density              g/mL of the neat material (liquids), for amounts in mL and % v/v
+ * @param origin               the library file the entry came from
+ */
+public record Substance(String name, List<String> synonyms, Optional<Formula> formula, OptionalDouble molarMass,
+                        boolean nominalMolarMass, boolean solvent, Composition composition,
+                        OptionalDouble apparentMolarVolume, String apparentMolarVolumeSource,
+                        OptionalDouble density, String notes, String origin) {
+
+    public Substance {
+        synonyms = List.copyOf(synonyms);
+    }
+
+    /** Moles of water of hydration per mole of substance. */
+    public int hydrationWater() {
+        return formula.map(Formula::hydrationWater).orElse(0);
+    }
+}

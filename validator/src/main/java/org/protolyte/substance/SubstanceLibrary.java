@@ -1,0 +1,118 @@
+package org.protolyte.substance;
+
+import java.text.Normalizer;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.Component;
+import org.protolyte.document.Suggestions;
+
+/**
+ * The substances a recipe may name, with the acid–base systems, strong ions and neutral solutes they
+ * are made of. Look-up forgives case, spaces, hyphens and '·' versus '.'; it never guesses: an unknown
+ * name gets the nearest names, a name shared by several forms gets the forms.
+ */
+public final class SubstanceLibrary {
+
+    private final Map<String, AcidBaseSystem> systems;
+    private final Map<String, String> systemSources;
+    private final Map<String, Component> ions;
+    private final Map<String, Component> solutes;
+    private final Map<String, Substance> substances;      // by canonical name
+    private final Map<String, Substance> index;           // by normalised name or synonym
+    private final Map<String, List<String>> ambiguous;    // normalised shared name -> forms
+
+    SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, String> systemSources,
+                     Map<String, Component> ions, Map<String, Component> solutes,
+                     Map<String, Substance> substances, Map<String, Substance> index,
+                     Map<String, List<String>> ambiguous) {
+        this.systems = Map.copyOf(systems);
+        this.systemSources = Map.copyOf(systemSources);
+        this.ions = Map.copyOf(ions);
+        this.solutes = Map.copyOf(solutes);
+        this.substances = new LinkedHashMap<>(substances);
+        this.index = Map.copyOf(index);
+        this.ambiguous = Map.copyOf(ambiguous);
+    }
+
+    /** The key names are compared by: lower case, letters and digits only ("Na2HPO4·7H2O" = "na2hpo4 7h2o"). */
+    public static String normalise(String name) {
+        String s = Normalizer.normalize(name, Normalizer.Form.NFKC).toLowerCase(Locale.ROOT);
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (Character.isLetterOrDigit(c)) {
+                b.append(c);
+            }
+        }
+        return b.toString();
+    }
+
+    public Substance lookup(String name) {
+        String key = normalise(name);
+        Substance s = index.get(key);
+        if (s != null) {
+            return s;
+        }
+        List<String> forms = ambiguous.get(key);
+        if (forms != null) {
+            throw new LookupException("'" + name + "' names several forms; name the one that is weighed: "
+                    + String.join(", ", forms), forms);
+        }
+        List<String> near = nearestNames(name);
+        String hint = near.isEmpty() ? "; add it to a user library (--substances FILE)"
+                : "; nearest library names: " + String.join(", ", near);
+        throw new LookupException("unknown substance '" + name + "'" + hint, near);
+    }
+
+    /** Canonical names whose name or synonym is closest to the query, or contains it. */
+    private List<String> nearestNames(String name) {
+        String key = normalise(name);
+        Set<String> out = new LinkedHashSet<>();
+        Map<String, String> keyToCanonical = new LinkedHashMap<>();
+        index.forEach((k, v) -> keyToCanonical.put(k, v.name()));
+        for (String k : Suggestions.nearest(key, keyToCanonical.keySet(), 5)) {
+            out.add(keyToCanonical.get(k));
+        }
+        if (key.length() >= 4) {
+            keyToCanonical.forEach((k, v) -> {
+                if (k.contains(key)) {
+                    out.add(v);
+                }
+            });
+        }
+        return new ArrayList<>(out).subList(0, Math.min(5, out.size()));
+    }
+
+    public Collection<Substance> substances() {
+        return substances.values();
+    }
+
+    public Optional<AcidBaseSystem> system(String name) {
+        return Optional.ofNullable(systems.get(name));
+    }
+
+    public Collection<AcidBaseSystem> systems() {
+        return systems.values();
+    }
+
+    public String systemSource(String name) {
+        return systemSources.getOrDefault(name, "");
+    }
+
+    public Optional<Component> ion(String name) {
+        return Optional.ofNullable(ions.get(name));
+    }
+
+    public Optional<Component> solute(String name) {
+        return Optional.ofNullable(solutes.get(name));
+    }
+}
