@@ -67,6 +67,7 @@ public final class Equilibrium {
      */
     public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin,
                                   double fixedIonicStrength) {
+        frozen(totals, kelvin);
         Problem p = new Problem(species, totals, kelvin);
         List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
         double ionicStrength = Double.isNaN(fixedIonicStrength) ? p.strongIonicStrength() : fixedIonicStrength;
@@ -113,14 +114,22 @@ public final class Equilibrium {
                             + "fastest where ions of charge 2 or more carry the buffering",
                     i, activity.warnAbove(), activity.name())));
         }
-        double tf = Cryoscopy.freezingPointKelvin(s.particleMolality());
-        if (s.kelvin() < tf) {
-            out.add(Caveat.indeterminate("below-freezing-point", String.format(Locale.ROOT,
-                    "%.1f °C is below the estimated freezing point of the solution (%.1f °C): ice forms and a "
-                            + "liquid-state pH means nothing there",
-                    s.kelvin() - Thermo.KELVIN_OFFSET, tf - Thermo.KELVIN_OFFSET)));
-        }
         return out;
+    }
+
+    /**
+     * Below the freezing point ice forms and a liquid-state pH means nothing. With one component per
+     * species the particle molality is Σ T_C whatever the pH, so this is known before solving.
+     */
+    private static void frozen(Map<Component, Double> totals, double kelvin) {
+        double particles = totals.values().stream().mapToDouble(Double::doubleValue).sum();
+        double tf = Cryoscopy.freezingPointKelvin(particles);
+        if (kelvin < tf) {
+            throw new IndeterminateException(Caveat.indeterminate("below-freezing-point", String.format(Locale.ROOT,
+                    "%.1f °C is below the estimated freezing point of the solution (%.2f °C): ice forms and a "
+                            + "liquid-state pH means nothing there",
+                    kelvin - Thermo.KELVIN_OFFSET, tf - Thermo.KELVIN_OFFSET)));
+        }
     }
 
     /** The arrays of one solve: species, their components and constants at the temperature. */

@@ -8,8 +8,11 @@ public final class Water {
 
     /** Molar mass of water used by IAPWS R11-07, g/mol. */
     public static final double MOLAR_MASS = 18.015268;
-    /** Valid range of the formulations below taken together (Malmberg–Maryott: 0–100 °C). */
-    public static final TemperatureRange VALIDITY = TemperatureRange.celsius(0, 100);
+    /**
+     * Range of the formulations below taken together: Malmberg–Maryott is fitted on 0–100 °C; down to −5 °C
+     * (a salt solution that is still liquid) it is a short extrapolation.
+     */
+    public static final TemperatureRange VALIDITY = TemperatureRange.celsius(-5, 100);
 
     private Water() {
     }
@@ -56,6 +59,11 @@ public final class Water {
      * with ρ in g/cm³, taken at 0.1 MPa from {@link #density(double)}.
      */
     public static double pKw(double kelvin) {
+        return pKw(kelvin, density(kelvin) / 1000.0);
+    }
+
+    /** pKw at a temperature and a density of water (g/cm³), as in R11-07's own check table. */
+    public static double pKw(double kelvin, double rho) {
         final double n = 6;
         final double alpha0 = -0.864671;
         final double alpha1 = 8659.19;
@@ -64,7 +72,6 @@ public final class Water {
         final double beta1 = -56.8534;
         final double beta2 = -0.375754;
         double t = kelvin;
-        double rho = density(kelvin) / 1000.0;
         double q = rho * Math.exp(alpha0 + alpha1 / t + alpha2 / (t * t) * Math.pow(rho, 2.0 / 3.0));
         double pKwG = 0.61415 + 48251.33 / t - 67707.93 / (t * t) + 10102100 / (t * t * t);
         return -2 * n * (Math.log10(1 + q) - q / (q + 1) * rho * (beta0 + beta1 / t + beta2 * rho))

@@ -1,0 +1,88 @@
+package org.protolyte.reference;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.protolyte.analysis.ConditionResult;
+
+/**
+ * The pH(PS) of the primary pH standards (Buck et al., "Measurement of pH. Definition, standards, and
+ * procedures", Pure Appl. Chem. 74 (2002) 2169), through the whole flow: document, library, engine. The
+ * values were read in the NBS papers that certified them (cited per case); IUPAC 2002 adopts the same numbers.
+ * The issue's tolerance is ±0.02: Davies versus the Bates–Guggenheim convention, ion pairs not modelled.
+ */
+class PrimaryStandardsTest {
+
+    private static final double TOLERANCE = 0.02;
+
+    /** 0.05 mol/kg potassium hydrogen phthalate: 4.005 at 25 °C (Hamer, Pinching and Acree, J. Res. NBS 36 (1946) 47). */
+    @Test
+    void potassiumHydrogenPhthalate() {
+        double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(25);
+        assertEquals(4.005, pH[0], TOLERANCE);
+    }
+
+    /**
+     * The same standard against Hamer, Pinching and Acree's own fit, pH = 1336.08/T − 5.2678 + 0.016069·T: checks
+     * the temperature dependence of both phthalate steps over 20–40 °C, the range the library claims for them.
+     */
+    @ParameterizedTest(name = "KHP at {0} °C")
+    @ValueSource(doubles = {20, 25, 30, 35, 37, 40})
+    void potassiumHydrogenPhthalateAcrossTemperature(double celsius) {
+        double t = celsius + 273.16;   // the paper's T = t + 273.16
+        double published = 1336.08 / t - 5.2678 + 0.016069 * t;
+        double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(celsius);
+        assertEquals(published, pH[0], TOLERANCE);
+    }
+
+    /**
+     * Outside 20–40 °C the recalled phthalate enthalpies miss the same fit by more than 0.02, so the library limits
+     * their validity and the engine must say indeterminate rather than print a number (seen: 4.061 against 4.013 at
+     * 0 °C before the range was narrowed).
+     */
+    @Test
+    void potassiumHydrogenPhthalateOutsideItsValidatedRangeIsIndeterminate() {
+        ConditionResult cold = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).condition(5);
+        assertFalse(cold.determinate());
+        assertTrue(cold.caveats().stream().anyMatch(c -> c.code().equals("temperature-out-of-range")));
+    }
+
+    /** KH2PO4 0.025 + Na2HPO4 0.025 mol/kg: 6.865 at 25 °C (IUPAC value, as cited by Partanen et al.). */
+    @Test
+    void equimolalPhosphate() {
+        double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen phosphate", 0.025)
+                .with("disodium hydrogen phosphate anhydrous", 0.025).pH(25);
+        assertEquals(6.865, pH[0], TOLERANCE);
+    }
+
+    /**
+     * KH2PO4 0.008695 + Na2HPO4 0.03043 mol/kg: 7.413 at 25 °C (IUPAC) and 7.382 at 38 °C (Bates et al., J. Res.
+     * NBS 65A (1961), abstract).
+     */
+    @Test
+    void physiologicalPhosphateAt25And38Celsius() {
+        double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen phosphate", 0.008695)
+                .with("disodium hydrogen phosphate anhydrous", 0.03043).pH(25, 38);
+        assertEquals(7.413, pH[0], TOLERANCE);
+        assertEquals(7.382, pH[1], TOLERANCE);
+    }
+
+    /** 0.01 mol/kg disodium tetraborate: 9.180 at 25 °C (Bates, Vega and White, J. Res. NBS 73A (1969) 37). */
+    @Test
+    void borax() {
+        double[] pH = ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01).pH(25);
+        assertEquals(9.180, pH[0], TOLERANCE);
+    }
+
+    /** NaHCO3 0.025 + Na2CO3 0.025 mol/kg: 10.012 at 25 °C (Bates, Vega and White 1969). */
+    @Test
+    void carbonate() {
+        double[] pH = ReferenceDocuments.solution().with("sodium hydrogen carbonate", 0.025)
+                .with("sodium carbonate anhydrous", 0.025).pH(25);
+        assertEquals(10.012, pH[0], TOLERANCE);
+    }
+}
