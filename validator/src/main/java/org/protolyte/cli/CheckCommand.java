@@ -54,6 +54,10 @@ public final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
+        if (output != null && !Files.isDirectory(output.toAbsolutePath().getParent())) {
+            err.println("protolyte: cannot write the report to " + output + ": its folder does not exist");
+            return 2;
+        }
         SchemaCatalog schemas = new SchemaCatalog();
         SubstanceLibrary library;
         try {
@@ -79,7 +83,12 @@ public final class CheckCommand implements Callable<Integer> {
             out.print(text);
             out.flush();
         } else {
-            writeAtomically(output, text);
+            try {
+                writeAtomically(output, text);
+            } catch (IOException e) {
+                err.println("protolyte: cannot write the report to " + output + ": " + e.getMessage());
+                return 2;
+            }
         }
         return run.exitCode();
     }

@@ -43,31 +43,50 @@ public final class JsonReader {
                     "file is larger than " + MAX_BYTES / (1024 * 1024) + " MiB"));
         }
         Map<String, Location> locations = new HashMap<>();
-        String last = "";
+        JsonNode root;
         try (JsonParser p = mapper.createParser(content)) {
-            JsonToken t;
-            while ((t = p.nextToken()) != null) {
-                String pointer = p.streamReadContext().pathAsPointer().toString();
-                last = pointer;
-                TokenStreamLocation l = p.currentTokenLocation();
-                Location here = new Location(l.getLineNr(), l.getColumnNr());
-                if (t == JsonToken.PROPERTY_NAME) {
-                    locations.putIfAbsent(pointer, here);
-                } else if (t.isScalarValue() || t.isStructStart()) {
-                    locations.putIfAbsent(pointer, here);
-                    if (t == JsonToken.VALUE_NUMBER_FLOAT && !Double.isFinite(p.getDoubleValue())) {
-                        throw new DocumentException(new Problem(pointer, Optional.of(here),
-                                "the number " + p.getString() + " is outside the range of a finite number"));
-                    }
-                }
+            try {
+                scan(p, locations);
+            } catch (JacksonException e) {
+                // the parser's context at the fault is the place to start looking (e.g. the repeated key)
+                String pointer = p.streamReadContext() == null ? "" : p.streamReadContext().pathAsPointer().toString();
+                throw new DocumentException(new Problem(pointer, locationOf(e), "not valid JSON: "
+                        + e.getOriginalMessage()));
             }
+            root = mapper.readTree(content);
         } catch (JacksonException e) {
-            // the pointer is the last value read before the fault: the place to start looking
-            throw new DocumentException(new Problem(last, locationOf(e), "not valid JSON: "
-                    + e.getOriginalMessage()));
+            throw new DocumentException(new Problem("", locationOf(e), "not valid JSON: " + e.getOriginalMessage()));
         }
-        JsonNode root = mapper.readTree(content);
         return new SourceDocument(source, root, locations);
+    }
+
+    /** One pass over the tokens: where each value begins; numbers must be finite; one root value only. */
+    private static void scan(JsonParser p, Map<String, Location> locations) {
+        JsonToken t;
+        int depth = 0;
+        boolean rootDone = false;
+        while ((t = p.nextToken()) != null) {
+            TokenStreamLocation l = p.currentTokenLocation();
+            Location here = new Location(l.getLineNr(), l.getColumnNr());
+            if (rootDone) {
+                throw new DocumentException(new Problem("", Optional.of(here),
+                        "not valid JSON: content after the end of the document"));
+            }
+            String pointer = p.streamReadContext().pathAsPointer().toString();
+            if (t == JsonToken.PROPERTY_NAME || t.isScalarValue() || t.isStructStart()) {
+                locations.putIfAbsent(pointer, here);
+            }
+            if (t.isNumeric() && !Double.isFinite(p.getDoubleValue())) {
+                throw new DocumentException(new Problem(pointer, Optional.of(here),
+                        "the number " + p.getString() + " is outside the range of a finite number"));
+            }
+            if (t.isStructStart()) {
+                depth++;
+            } else if (t.isStructEnd()) {
+                depth--;
+            }
+            rootDone = depth == 0 && (t.isStructEnd() || t.isScalarValue());
+        }
     }
 
     private static Optional<Location> locationOf(JacksonException e) {

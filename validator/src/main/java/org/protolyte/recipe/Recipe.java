@@ -11,6 +11,7 @@ import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.Water;
+import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
 import org.protolyte.substance.Composition;
 import org.protolyte.substance.Substance;
@@ -42,6 +43,8 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
         double fixedVolume = 0;       // L of solute apparent volume from fixed amounts
         double molalVolume = 0;       // L per kg water from molality amounts
         double extraWater = 0;        // kg of water the ingredients bring (waterMass basis)
+        Ingredient bulkiest = null;
+        double bulkiestVolume = 0;
         for (Ingredient ing : ingredients) {
             double phi = DensityModel.apparentMolarVolume(ing.substance()) / 1000;
             if (ing.kind() == Ingredient.Kind.MOLALITY) {
@@ -55,6 +58,10 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
                 continue;
             }
             fixedVolume += n * phi;
+            if (n * phi > bulkiestVolume) {
+                bulkiest = ing;
+                bulkiestVolume = n * phi;
+            }
             extraWater += n * ing.substance().hydrationWater() * Water.MOLAR_MASS / 1000;
             if (ing.hasStock()) {
                 extraWater += stockWater(ing, n);
@@ -68,7 +75,11 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
             waterKg = basis + extraWater;
         }
         if (!(waterKg > 0)) {
-            throw new IllegalStateException("the solutes fill the whole final volume: no water is left");
+            String pointer = bulkiest == null ? formulation.basis().pointer() : bulkiest.line().pointer() + "/amount";
+            throw new DocumentException(formulation.document().problem(pointer, String.format(java.util.Locale.ROOT,
+                    "the solutes take up %.2f L, more than the final volume of %.3g L, %.2f L of it %s: no water "
+                            + "is left; check the amounts and their units", fixedVolume, basis, bulkiestVolume,
+                    bulkiest == null ? "" : bulkiest.substance().name())));
         }
         Map<Ingredient, Double> moles = new LinkedHashMap<>(fixed);
         for (Ingredient ing : ingredients) {

@@ -49,7 +49,9 @@ public final class RecipeResolver {
         }
         double makeUp = f.conditions().stream().filter(c -> c.name().equals("preparation")).findFirst()
                 .map(Formulation.Condition::kelvin).orElse(DEFAULT_MAKE_UP_KELVIN);
-        return new Recipe(f, library, ingredients, makeUp);
+        Recipe recipe = new Recipe(f, library, ingredients, makeUp);
+        recipe.solution(java.util.Map.of());   // fails here, with its place, if the amounts cannot be made up
+        return recipe;
     }
 
     private static final class AmountException extends RuntimeException {

@@ -1,0 +1,85 @@
+package org.protolyte.document;
+
+import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.TestDocs;
+
+class JsonReaderBadInputTest {
+
+    private final JsonReader reader = new JsonReader();
+
+    private Problem onlyProblem(String json) {
+        DocumentException e = assertThrows(DocumentException.class, () -> reader.read("t.json", TestDocs.bytes(json)));
+        assertEquals(1, e.problems().size(), () -> "problems: " + e.problems());
+        return e.problems().get(0);
+    }
+
+    @Test
+    void missingCommaIsInvalidJsonWithLineAndColumn() {
+        // the comma is missing at the end of line 2; the parser trips on line 3
+        Problem p = onlyProblem("{\n\"document\": \"formulation\"\n\"id\": \"TST-001\"\n}");
+        assertTrue(p.message().startsWith("not valid JSON"), p.message());
+        Location l = p.location().orElseThrow(() -> new AssertionError("no location: " + p));
+        assertEquals(3, l.line());
+        assertTrue(l.column() >= 1, "column " + l.column());
+    }
+
+    private static final String DUPLICATE_ID = "{\n\"id\": \"TST-001\",\n\"title\": \"t\",\n\"id\": \"TST-002\"\n}";
+
+    @Test
+    void duplicateKeyIsRefusedNamingTheKeyAndItsLine() {
+        Problem p = onlyProblem(DUPLICATE_ID);
+        assertTrue(p.message().contains("Duplicate") && p.message().contains("\"id\""), p.message());
+        assertEquals(4, p.location().orElseThrow().line());
+    }
+
+    @Test
+    void duplicateKeyDirectlyAfterTheFirstIsPointedAt() {
+        Problem p = onlyProblem("{\n\"id\": \"TST-001\",\n\"id\": \"TST-002\"\n}");
+        assertEquals("/id", p.pointer());
+    }
+
+    @Test
+    void duplicateKeyIsPointedAtEvenWhenNotAdjacent() {
+        assertEquals("/id", onlyProblem(DUPLICATE_ID).pointer());
+    }
+
+    @Test
+    void nestingDeeperThanMaxDepthIsRefused() {
+        int depth = JsonReader.MAX_DEPTH + 1;
+        Problem p = onlyProblem("[".repeat(depth) + "]".repeat(depth));
+        assertTrue(p.message().contains("depth"), p.message());
+    }
+
+    @Test
+    void nestingExactlyMaxDepthIsRead() {
+        int depth = JsonReader.MAX_DEPTH;
+        assertDoesNotThrow(() -> reader.read("t.json", TestDocs.bytes("[".repeat(depth) + "]".repeat(depth))));
+    }
+
+    @Test
+    void numberBeyondDoubleRangeIsRefusedAsNonFiniteWithItsPointer() {
+        Problem p = onlyProblem("{\n\"components\": [\n{\"amount\": {\"value\": 1e999, \"unit\": \"g\"}}\n]\n}");
+        assertEquals("/components/0/amount/value", p.pointer());
+        assertTrue(p.message().contains("1e999") && p.message().contains("finite"), p.message());
+        assertEquals(3, p.location().orElseThrow().line());
+    }
+
+    @Test
+    void integerBeyondDoubleRangeIsRefusedAsNonFiniteWithItsPointer() {
+        Problem p = onlyProblem("{\"tolerance\": 1" + "0".repeat(400) + "}");
+        assertEquals("/tolerance", p.pointer());
+        assertTrue(p.message().contains("finite"), p.message());
+    }
+
+    @Test
+    void trailingContentAfterTheRootValueIsInvalidJson() {
+        DocumentException e = assertThrows(DocumentException.class,
+                () -> reader.read("t.json", TestDocs.bytes("{\"id\": \"TST-001\"}\n{}")));
+        assertTrue(e.problems().get(0).message().startsWith("not valid JSON"), e.problems().toString());
+    }
+}

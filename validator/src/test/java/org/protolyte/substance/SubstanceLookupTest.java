@@ -1,0 +1,80 @@
+package org.protolyte.substance;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.protolyte.document.SchemaCatalog;
+
+class SubstanceLookupTest {
+
+    private static SubstanceLibrary library;
+
+    @BeforeAll
+    static void load() {
+        library = LibraryLoader.shipped(new SchemaCatalog());
+    }
+
+    @ParameterizedTest(name = "''{0}'' is {1}")
+    @CsvSource(delimiter = '|', value = {
+            "na2hpo4 7h2o|disodium hydrogen phosphate heptahydrate",
+            "Na2HPO4.7H2O|disodium hydrogen phosphate heptahydrate",
+            "NA2HPO4·7H2O|disodium hydrogen phosphate heptahydrate",
+            "tris-hcl|Tris hydrochloride",
+            "TRIS HCL|Tris hydrochloride",
+            "Sodium-Chloride|sodium chloride"})
+    void lookupForgivesCaseSpacesHyphensAndDots(String written, String canonical) {
+        assertEquals(canonical, library.lookup(written).name());
+    }
+
+    @Test
+    void unknownNameOffersTheNearestLibraryNames() {
+        LookupException e = assertThrows(LookupException.class, () -> library.lookup("sodium chlorde"));
+        assertTrue(e.candidates().contains("sodium chloride"), e.candidates().toString());
+        assertTrue(e.getMessage().contains("unknown substance 'sodium chlorde'"), e.getMessage());
+        assertTrue(e.getMessage().contains("sodium chloride"), e.getMessage());
+    }
+
+    @Test
+    void unknownNameCandidatesAreNearNotArbitrary() {
+        LookupException e = assertThrows(LookupException.class, () -> library.lookup("potasium chloride"));
+        assertEquals("potassium chloride", e.candidates().get(0));
+        assertTrue(e.candidates().size() <= 5, e.candidates().toString());
+    }
+
+    @Test
+    void nameFarFromEverythingOffersAUserLibraryInstead() {
+        LookupException e = assertThrows(LookupException.class, () -> library.lookup("TST-zq-9931"));
+        assertTrue(e.candidates().isEmpty(), e.candidates().toString());
+        assertTrue(e.getMessage().contains("--substances"), e.getMessage());
+    }
+
+    @Test
+    void glucoseIsRefusedWithItsFormsListed() {
+        LookupException e = assertThrows(LookupException.class, () -> library.lookup("glucose"));
+        assertEquals(Set.of("glucose anhydrous", "glucose monohydrate"), new HashSet<>(e.candidates()));
+        assertTrue(e.getMessage().contains("several forms"), e.getMessage());
+        e.candidates().forEach(f -> assertTrue(e.getMessage().contains(f), f));
+    }
+
+    @Test
+    void sodiumPhosphateIsRefusedWithEveryFormListed() {
+        LookupException e = assertThrows(LookupException.class, () -> library.lookup("Sodium Phosphate"));
+        List<String> expected = List.of("sodium dihydrogen phosphate anhydrous",
+                "sodium dihydrogen phosphate monohydrate", "sodium dihydrogen phosphate dihydrate",
+                "disodium hydrogen phosphate anhydrous", "disodium hydrogen phosphate dihydrate",
+                "disodium hydrogen phosphate heptahydrate", "disodium hydrogen phosphate dodecahydrate");
+        assertEquals(new HashSet<>(expected), new HashSet<>(e.candidates()));
+        for (String form : e.candidates()) {
+            assertEquals(form, library.lookup(form).name(), "a listed form must itself resolve");
+        }
+    }
+}
