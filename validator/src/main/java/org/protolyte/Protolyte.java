@@ -93,7 +93,12 @@ public final class Protolyte {
             if (doc.root().path("id").isString()) {
                 id = Optional.of(doc.root().path("id").asString());
             }
-            Formulation f = reader.read(doc);
+            Formulation f;
+            try {
+                f = reader.read(doc);
+            } catch (DocumentException e) {
+                throw new DocumentException(withNameProblems(doc, e.problems()));
+            }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
             List<Finding> findings = checker.check(analysis);
@@ -104,6 +109,19 @@ public final class Protolyte {
             return DocumentReport.fault(source, "internal fault while checking this document ("
                     + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
         }
+    }
+
+    /** Adds the substance names that do not resolve, so that one pass reports everything a reviewer must fix. */
+    private List<Problem> withNameProblems(SourceDocument doc, List<Problem> problems) {
+        List<Problem> all = new ArrayList<>(problems);
+        for (Problem p : resolver.unresolvedNames(doc)) {
+            if (all.stream().noneMatch(q -> q.pointer().equals(p.pointer()))) {
+                all.add(p);
+            }
+        }
+        all.sort(java.util.Comparator.comparing((Problem p) -> p.location().map(l -> l.line()).orElse(0))
+                .thenComparing(p -> p.location().map(l -> l.column()).orElse(0)));
+        return all;
     }
 
     private static DocumentReport invalid(String source, Optional<String> id, List<Problem> problems) {

@@ -82,6 +82,17 @@ public final class SchemaCatalog {
                 message = unknownProperty(e, schemaFile);
             } else if (keyword.equals("required") && e.getProperty() != null) {
                 message = "required property '" + e.getProperty() + "' is missing";
+            } else if (keyword.equals("dependentRequired") && args(e) >= 2) {
+                message = "'" + e.getArguments()[0] + "' is required when '" + e.getArguments()[1] + "' is given";
+            } else if (keyword.equals("const") && args(e) >= 1) {
+                message = "must be " + e.getArguments()[0];
+            } else if (keyword.equals("enum") && args(e) >= 1) {
+                message = "must be one of " + e.getArguments()[0];
+            } else if (keyword.equals("type") && args(e) >= 2) {
+                message = "is " + article(String.valueOf(e.getArguments()[0])) + ", expected "
+                        + String.valueOf(e.getArguments()[1]).replace("[", "").replace("]", "").replace(", ", " or ");
+            } else if (keyword.equals("pattern") && e.getSchemaLocation().toString().contains("/quantity/")) {
+                message = "'" + e.getInstanceNode().asString() + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"";
             } else {
                 message = stripPath(e.getMessage());
             }
@@ -93,6 +104,14 @@ public final class SchemaCatalog {
         out.sort(Comparator.comparing((Problem p) -> p.location().map(Location::line).orElse(0))
                 .thenComparing(p -> p.location().map(Location::column).orElse(0)));
         return out;
+    }
+
+    private static int args(Error e) {
+        return e.getArguments() == null ? 0 : e.getArguments().length;
+    }
+
+    private static String article(String type) {
+        return ("aeiou".indexOf(type.isEmpty() ? 'x' : type.charAt(0)) >= 0 ? "an " : "a ") + type;
     }
 
     private String unknownProperty(Error e, String schemaFile) {

@@ -7,10 +7,13 @@ import java.util.Optional;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
 import org.protolyte.document.Problem;
+import org.protolyte.document.SourceDocument;
 import org.protolyte.substance.LookupException;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
 import org.protolyte.units.Quantity;
+
+import tools.jackson.databind.JsonNode;
 
 /**
  * Resolves each component line to a library substance and its amount to moles (or mol/kg) per basis.
@@ -52,6 +55,23 @@ public final class RecipeResolver {
         Recipe recipe = new Recipe(f, library, ingredients, makeUp);
         recipe.solution(java.util.Map.of());   // fails here, with its place, if the amounts cannot be made up
         return recipe;
+    }
+
+    /** Names under /components/N/substance that the library does not resolve, read straight from the tree. */
+    public List<Problem> unresolvedNames(SourceDocument doc) {
+        List<Problem> out = new ArrayList<>();
+        JsonNode comps = doc.root().path("components");
+        for (int i = 0; i < comps.size(); i++) {
+            JsonNode name = comps.get(i).path("substance");
+            if (name.isString()) {
+                try {
+                    library.lookup(name.asString());
+                } catch (LookupException e) {
+                    out.add(doc.problem("/components/" + i + "/substance", e.getMessage()));
+                }
+            }
+        }
+        return out;
     }
 
     private static final class AmountException extends RuntimeException {
