@@ -12,7 +12,6 @@ import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.protolyte.chemistry.Caveat;
-import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.IndeterminateException;
@@ -74,11 +73,10 @@ public final class Analyzer {
 
     /** Acid or base: the pH of a 0.01 mol/kg solution of the titrant alone at 25 °C, below or above neutral. */
     TitrantResult.Role role(Recipe recipe, Ingredient titrant) {
-        Solution alone = new Recipe(recipe.formulation(), recipe.library(), List.of(titrant), recipe.makeUpKelvin())
-                .solution(Map.of(titrant, 0.01 * recipe.solution(Map.of()).waterKg()));
-        Map<Component, Double> totals = alone.totals();
-        EquilibriumState s = equilibrium.solve(alone.species(), totals, Thermo.T_REF);
-        return s.pH() < 7 ? TitrantResult.Role.ACID : TitrantResult.Role.BASE;
+        Recipe alone = new Recipe(recipe.formulation(), recipe.library(), List.of(titrant), recipe.makeUpKelvin());
+        Solution s = alone.solution(Map.of(titrant, 0.01 * alone.solution(Map.of()).waterKg()));
+        return equilibrium.solve(s.species(), s.totals(), Thermo.T_REF).pH() < 7
+                ? TitrantResult.Role.ACID : TitrantResult.Role.BASE;
     }
 
     private List<TitrantResult> adjust(Recipe recipe, List<Caveat> caveats) {

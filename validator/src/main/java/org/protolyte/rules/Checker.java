@@ -15,7 +15,7 @@ public final class Checker {
     }
 
     public static Checker builtIn() {
-        return new Checker(List.of(new PhWithinTarget(), new TitrantReachesGoal()));
+        return new Checker(List.of(new PhWithinTarget(), new TitrantReachesGoal(), new RevisionStated()));
     }
 
     public List<Finding> check(FormulationAnalysis analysis) {
