@@ -95,15 +95,12 @@ public final class Equilibrium {
                     "the ionic strength did not converge with the " + activity.name() + " activity model"));
         }
         p.setActivityCoefficients(ionicStrength);
-        EquilibriumState s = p.state(pH, ionicStrength, caveats);
-        caveats.addAll(validityCaveats(s));
-        return new EquilibriumState(s.kelvin(), s.pH(), s.ionicStrength(), s.bufferCapacity(), s.pKw(),
-                s.hydrogenMolality(), s.hydroxideMolality(), s.particleMolality(), s.species(), caveats);
+        caveats.addAll(ionicStrengthCaveats(ionicStrength));
+        return p.state(pH, ionicStrength, caveats);
     }
 
-    private List<Caveat> validityCaveats(EquilibriumState s) {
+    private List<Caveat> ionicStrengthCaveats(double i) {
         List<Caveat> out = new ArrayList<>();
-        double i = s.ionicStrength();
         if (i > activity.indeterminateAbove()) {
             out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
                     "ionic strength %.3f mol/kg is above %.1f mol/kg, where the %s equation cannot be trusted",
