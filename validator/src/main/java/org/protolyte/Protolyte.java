@@ -25,7 +25,9 @@ import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.report.DocumentReport;
 import org.protolyte.report.RunReport;
+import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
+import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.Finding;
 import org.protolyte.rules.Severity;
 import org.protolyte.substance.SubstanceLibrary;
@@ -43,11 +45,17 @@ public final class Protolyte {
     private final FormulationReader reader;
     private final RecipeResolver resolver;
     private final Analyzer analyzer = new Analyzer(new Equilibrium(Davies.INSTANCE));
-    private final Checker checker = Checker.builtIn();
+    private final Checker checker;
 
+    /** Judged by the shipped packs that apply to each document's intended use. */
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
+        this(schemas, library, Checker.byIntendedUse(RuleBook.shipped(schemas, CheckKinds.load())));
+    }
+
+    public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker) {
         this.reader = new FormulationReader(schemas);
         this.resolver = new RecipeResolver(library);
+        this.checker = checker;
     }
 
     public static String version() {
@@ -101,8 +109,7 @@ public final class Protolyte {
             }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
-            List<Finding> findings = checker.check(analysis);
-            return DocumentReport.of(analysis, findings);
+            return DocumentReport.of(analysis, checker.check(analysis));
         } catch (DocumentException e) {
             return invalid(source, id, e.problems());
         } catch (RuntimeException e) {

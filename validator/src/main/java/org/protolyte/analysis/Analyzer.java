@@ -11,10 +11,13 @@ import java.util.OptionalDouble;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
+import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Caveat;
+import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.IndeterminateException;
+import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
@@ -50,20 +53,50 @@ public final class Analyzer {
         Solution solution = recipe.solution(doses);
         List<ConditionResult> results = new ArrayList<>();
         for (Formulation.Condition c : recipe.formulation().conditions()) {
-            results.add(condition(solution, c));
+            results.add(condition(recipe, solution, c));
         }
         return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe));
     }
 
-    private ConditionResult condition(Solution solution, Formulation.Condition c) {
+    private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c) {
         double volume = solution.volumeLitres(c.kelvin());
         try {
             EquilibriumState s = equilibrium.solve(solution.species(), solution.totals(), c.kelvin());
-            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * solution.waterKg() / volume,
-                    volume);
+            double perLitre = solution.waterKg() / volume;
+            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre, volume,
+                    buffers(recipe, solution, s, perLitre));
         } catch (IndeterminateException e) {
-            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume);
+            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume, List.of());
         }
+    }
+
+    /**
+     * Each system's term of β = ln10·Σ_C Σ_s m_s (p_s − p̄_C)², the same sum the chemistry reports, split by
+     * component; and the pKa(T) of the system's step nearest the pH.
+     */
+    private static List<BufferContribution> buffers(Recipe recipe, Solution solution, EquilibriumState s,
+                                                    double perLitre) {
+        List<BufferContribution> out = new ArrayList<>();
+        for (AcidBaseSystem system : recipe.library().systems()) {
+            Component basis = system.basis();
+            double total = solution.totals().getOrDefault(basis, 0.0);
+            if (total <= 0) {
+                continue;
+            }
+            List<SpeciesAmount> forms = s.species().stream().filter(x -> x.component().equals(basis)).toList();
+            double mean = forms.stream().mapToDouble(x -> x.species().protons() * x.molality()).sum() / total;
+            double variance = forms.stream().mapToDouble(x -> {
+                double d = x.species().protons() - mean;
+                return x.molality() * d * d;
+            }).sum();
+            double beta = Thermo.LN10 * variance * perLitre;
+            double nearest = system.steps().stream().mapToDouble(st -> st.pKa(s.kelvin()))
+                    .boxed().min(java.util.Comparator.comparingDouble(pk -> Math.abs(pk - s.pH()))).orElseThrow();
+            out.add(new BufferContribution(system.name(), beta, beta / (s.bufferCapacity() * perLitre), nearest,
+                    total * solution.waterKg()));
+        }
+        out.sort(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre).reversed());
+        return out;
     }
 
     private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin) {

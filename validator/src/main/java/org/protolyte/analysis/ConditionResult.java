@@ -12,12 +12,20 @@ import org.protolyte.document.Formulation;
  * is present but a caveat is indeterminate, its numbers must not be shown as results.
  *
  * @param bufferCapacityPerLitre mol per litre of solution per pH unit, at the condition's temperature
+ * @param buffers                each acid–base system's part of it, largest first
  */
 public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
-                              List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres) {
+                              List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres,
+                              List<BufferContribution> buffers) {
 
     public ConditionResult {
         caveats = List.copyOf(caveats);
+        buffers = List.copyOf(buffers);
+    }
+
+    /** The system that carries most of the buffer capacity, if any system buffers at all. */
+    public Optional<BufferContribution> mainBuffer() {
+        return buffers.stream().max(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre));
     }
 
     public boolean determinate() {

@@ -26,8 +26,15 @@ public final class JsonReader {
     private static final long MAX_BYTES = 16L * 1024 * 1024;
 
     private final JsonMapper mapper;
+    private final long maxBytes;
 
     public JsonReader() {
+        this(MAX_BYTES);
+    }
+
+    /** A reader that refuses files larger than {@code maxBytes}. */
+    public JsonReader(long maxBytes) {
+        this.maxBytes = maxBytes;
         JsonFactory factory = JsonFactory.builder()
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
                 .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
@@ -38,9 +45,10 @@ public final class JsonReader {
     }
 
     public SourceDocument read(String source, byte[] content) {
-        if (content.length > MAX_BYTES) {
+        if (content.length > maxBytes) {
             throw new DocumentException(new Problem("", Optional.empty(),
-                    "file is larger than " + MAX_BYTES / (1024 * 1024) + " MiB"));
+                    "file is larger than " + (maxBytes >= 1024 * 1024 ? maxBytes / (1024 * 1024) + " MiB"
+                            : maxBytes / 1024 + " KiB")));
         }
         Map<String, Location> locations = new HashMap<>();
         JsonNode root;

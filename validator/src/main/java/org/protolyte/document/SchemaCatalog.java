@@ -70,10 +70,15 @@ public final class SchemaCatalog {
 
     /** Validates, returning problems in document order, each naming its place. */
     public List<Problem> validate(SourceDocument doc, String schemaFile) {
-        List<Error> errors = schema(schemaFile).validate(doc.root());
+        return validate(doc, "", doc.root(), schemaFile);
+    }
+
+    /** Validates the part of {@code doc} at {@code at} (its node {@code node}); places are named in {@code doc}. */
+    public List<Problem> validate(SourceDocument doc, String at, JsonNode node, String schemaFile) {
+        List<Error> errors = schema(schemaFile).validate(node);
         List<Problem> out = new ArrayList<>();
         for (Error e : errors) {
-            String pointer = pointer(e.getInstanceLocation());
+            String pointer = at + pointer(e.getInstanceLocation());
             String keyword = e.getKeyword() == null ? "" : e.getKeyword();
             String message;
             if ((keyword.equals("additionalProperties") || keyword.equals("unevaluatedProperties"))

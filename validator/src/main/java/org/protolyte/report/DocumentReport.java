@@ -8,31 +8,35 @@ import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.document.Formulation;
+import org.protolyte.rules.Checker;
 import org.protolyte.rules.Finding;
+import org.protolyte.rules.RulePack;
 import org.protolyte.rules.Severity;
 
 /** What a run says about one input file. */
 public record DocumentReport(String source, Optional<String> id, Status status,
                              Optional<FormulationAnalysis> analysis, List<Finding> findings,
-                             List<Diagnostic> diagnostics) {
+                             List<Diagnostic> diagnostics, List<RulePack> packs) {
 
     public DocumentReport {
         findings = List.copyOf(findings);
         diagnostics = List.copyOf(diagnostics);
+        packs = List.copyOf(packs);
     }
 
     public static DocumentReport invalid(String source, Optional<String> id, List<Finding> problems) {
-        return new DocumentReport(source, id, Status.INVALID, Optional.empty(), problems, List.of());
+        return new DocumentReport(source, id, Status.INVALID, Optional.empty(), problems, List.of(), List.of());
     }
 
     public static DocumentReport fault(String source, String message) {
         return new DocumentReport(source, Optional.empty(), Status.FAULT, Optional.empty(), List.of(),
                 List.of(new Diagnostic("internal-fault", Caveat.Severity.INDETERMINATE, message, Optional.empty(),
-                        Optional.empty(), Optional.empty())));
+                        Optional.empty(), Optional.empty())), List.of());
     }
 
     /** Status from the analysis: indeterminate outranks fail, an error finding fails. */
-    public static DocumentReport of(FormulationAnalysis a, List<Finding> findings) {
+    public static DocumentReport of(FormulationAnalysis a, Checker.Verdict verdict) {
+        List<Finding> findings = verdict.findings();
         Formulation f = a.recipe().formulation();
         List<Diagnostic> diagnostics = new ArrayList<>();
         for (Caveat c : a.caveats()) {
@@ -52,6 +56,6 @@ public record DocumentReport(String source, Optional<String> id, Status status,
         boolean failed = findings.stream().anyMatch(x -> x.severity() == Severity.ERROR);
         Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
         return new DocumentReport(f.document().source(), Optional.of(f.id()), s, Optional.of(a), findings,
-                diagnostics);
+                diagnostics, verdict.packs());
     }
 }

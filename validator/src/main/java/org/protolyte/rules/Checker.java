@@ -2,27 +2,53 @@ package org.protolyte.rules;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.protolyte.analysis.FormulationAnalysis;
 
-/** Runs the checks on an analysis. Until rule packs exist, the built-in checks are the rules. */
+/**
+ * Runs the rules of the selected packs on an analysis. The selection is the packs that apply to the
+ * document's intended use, unless the run replaces it ({@code --rules PACK}) or adds to it
+ * ({@code --rules +PACK}).
+ */
 public final class Checker {
 
-    private final List<CheckKind> checks;
-
-    public Checker(List<CheckKind> checks) {
-        this.checks = List.copyOf(checks);
-    }
-
-    public static Checker builtIn() {
-        return new Checker(List.of(new PhWithinTarget(), new TitrantReachesGoal(), new RevisionStated()));
-    }
-
-    public List<Finding> check(FormulationAnalysis analysis) {
-        List<Finding> out = new ArrayList<>();
-        for (CheckKind c : checks) {
-            out.addAll(c.check(analysis));
+    /** The packs a document was judged by, and what they found. */
+    public record Verdict(List<RulePack> packs, List<Finding> findings) {
+        public Verdict {
+            packs = List.copyOf(packs);
+            findings = List.copyOf(findings);
         }
-        return out;
+    }
+
+    private final RuleBook book;
+    private final List<String> replace;
+    private final List<String> add;
+
+    public Checker(RuleBook book, List<String> replace, List<String> add) {
+        this.book = book;
+        this.replace = List.copyOf(replace);
+        this.add = List.copyOf(add);
+    }
+
+    public static Checker byIntendedUse(RuleBook book) {
+        return new Checker(book, List.of(), List.of());
+    }
+
+    public List<String> selection(Optional<String> intendedUse) {
+        List<String> chosen = new ArrayList<>(replace.isEmpty() ? book.defaultSelection(intendedUse) : replace);
+        add.stream().filter(p -> !chosen.contains(p)).forEach(chosen::add);
+        return chosen;
+    }
+
+    public Verdict check(FormulationAnalysis analysis) {
+        List<String> selected = selection(analysis.recipe().formulation().intendedUse());
+        List<Finding> out = new ArrayList<>();
+        for (Rule rule : book.rules(selected)) {
+            if (rule.enabled()) {
+                out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
+            }
+        }
+        return new Verdict(book.withAncestors(selected), out);
     }
 }

@@ -1,7 +1,6 @@
 package org.protolyte.rules;
 
 import java.util.List;
-import java.util.Optional;
 
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.document.Formulation;
@@ -20,12 +19,9 @@ public final class RevisionStated implements CheckKind {
     }
 
     @Override
-    public List<Finding> check(FormulationAnalysis a) {
+    public List<Finding> check(FormulationAnalysis a, Rule rule) {
         Formulation f = a.recipe().formulation();
-        if (f.revision().isPresent()) {
-            return List.of();
-        }
-        return List.of(new Finding(id(), Severity.NOTE, "the document states no revision; add \"revision\" so that "
-                + "reviews and waivers can refer to the version they judged", Optional.of(""), f.document().locate("")));
+        return f.revision().isPresent() ? List.of()
+                : List.of(rule.finding(f, "", "the document states no revision"));
     }
 }

@@ -2,7 +2,6 @@ package org.protolyte.rules;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
@@ -21,14 +20,13 @@ public final class TitrantReachesGoal implements CheckKind {
     }
 
     @Override
-    public List<Finding> check(FormulationAnalysis a) {
+    public List<Finding> check(FormulationAnalysis a, Rule rule) {
         List<Finding> out = new ArrayList<>();
-        boolean anyUsed = a.titrants().stream().anyMatch(t -> t.used() && t.unreachable().isEmpty());
+        boolean anyDosed = a.titrants().stream().anyMatch(t -> t.used() && t.unreachable().isEmpty());
         for (TitrantResult t : a.titrants()) {
-            if (t.unreachable().isPresent() && !anyUsed) {
-                String pointer = t.ingredient().line().pointer() + "/adjustTo";
-                out.add(new Finding(id(), Severity.ERROR, t.unreachable().get().reason(), Optional.of(pointer),
-                        a.recipe().formulation().document().locate(pointer)));
+            if (t.unreachable().isPresent() && !anyDosed) {
+                out.add(rule.finding(a.recipe().formulation(), t.ingredient().line().pointer() + "/adjustTo",
+                        t.unreachable().get().reason()));
             }
         }
         return out;

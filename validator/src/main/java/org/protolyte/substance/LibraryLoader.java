@@ -196,8 +196,19 @@ public final class LibraryLoader {
                             : OptionalDouble.empty(),
                     n.path("apparentMolarVolumeSource").asString(""),
                     n.has("density") ? OptionalDouble.of(n.get("density").asDouble()) : OptionalDouble.empty(),
-                    n.path("notes").asString(""), doc.source());
+                    n.path("notes").asString(""), handling(n), doc.source());
             register(s, n, pointer);
+        }
+
+        private Handling handling(JsonNode n) {
+            List<Handling.Hazard> hazards = new ArrayList<>();
+            for (JsonNode h : n.path("hazards")) {
+                hazards.add(new Handling.Hazard(h.get("classification").asString(), h.get("statement").asString(),
+                        h.path("appliesTo").asString("the substance as supplied"), h.get("source").asString()));
+            }
+            JsonNode light = n.get("lightSensitivity");
+            return new Handling(hazards, light == null ? Optional.empty()
+                    : Optional.of(new Handling.Sourced(light.get("text").asString(), light.get("source").asString())));
         }
 
         private void register(Substance s, JsonNode n, String pointer) {

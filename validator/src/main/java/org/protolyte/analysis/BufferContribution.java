@@ -1,0 +1,12 @@
+package org.protolyte.analysis;
+
+/**
+ * What one acid–base system contributes to the buffer capacity at a condition: its share of β, and
+ * its thermodynamic pKa at the condition's temperature nearest the pH.
+ *
+ * @param bufferCapacityPerLitre mol per litre of solution per pH unit
+ * @param molesPerBasis          the system's total amount in the recipe, mol per basis
+ */
+public record BufferContribution(String system, double bufferCapacityPerLitre, double share, double nearestPKa,
+                                 double molesPerBasis) {
+}

@@ -1,0 +1,42 @@
+package org.protolyte.rules;
+
+import java.util.List;
+import java.util.Optional;
+
+import org.protolyte.analysis.ConditionResult;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.document.Formulation;
+
+/** Which condition a rule judges: the one its parameters name, else "use", else every determinate one. */
+final class Conditions {
+    private Conditions() {
+    }
+
+    static List<ConditionResult> judged(FormulationAnalysis a, Rule rule) {
+        Optional<String> named = rule.text("condition");
+        List<ConditionResult> determinate = a.conditions().stream().filter(ConditionResult::determinate).toList();
+        if (named.isPresent()) {
+            return determinate.stream().filter(c -> c.condition().name().equals(named.get())).toList();
+        }
+        List<ConditionResult> use = determinate.stream().filter(c -> c.condition().name().equals("use")).toList();
+        return use.isEmpty() ? determinate : use;
+    }
+
+    /** The determinate condition at the pH target's temperature. */
+    static Optional<ConditionResult> atTarget(FormulationAnalysis a) {
+        Optional<Formulation.PhTarget> target = a.recipe().formulation().pHTarget();
+        if (target.isEmpty()) {
+            return Optional.empty();
+        }
+        return a.conditions().stream().filter(c -> Math.abs(c.condition().kelvin() - target.get().kelvin()) < 0.005)
+                .filter(ConditionResult::determinate).findFirst();
+    }
+
+    static String pointer(ConditionResult c) {
+        return c.condition().pointer();
+    }
+
+    static double celsius(ConditionResult c) {
+        return c.condition().kelvin() - 273.15;
+    }
+}
