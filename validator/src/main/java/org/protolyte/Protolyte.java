@@ -14,6 +14,7 @@ import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
 import org.protolyte.document.FormulationReader;
@@ -46,16 +47,20 @@ public final class Protolyte {
     private final RecipeResolver resolver;
     private final Analyzer analyzer = new Analyzer(new Equilibrium(Davies.INSTANCE));
     private final Checker checker;
+    private final Severity failOn;
+    private final SubstanceLibrary library;
 
-    /** Judged by the shipped packs that apply to each document's intended use. */
+    /** Judged by the shipped packs that apply to each document's intended use; errors fail. */
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
-        this(schemas, library, Checker.byIntendedUse(RuleBook.shipped(schemas, CheckKinds.load())));
+        this(schemas, library, Checker.byIntendedUse(RuleBook.shipped(schemas, CheckKinds.load())), Severity.ERROR);
     }
 
-    public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker) {
+    public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn) {
         this.reader = new FormulationReader(schemas);
         this.resolver = new RecipeResolver(library);
         this.checker = checker;
+        this.failOn = failOn;
+        this.library = library;
     }
 
     public static String version() {
@@ -70,12 +75,38 @@ public final class Protolyte {
         }
     }
 
+    /** A file to check; {@code foundInFolder} when a folder was named, so that non-documents are skipped. */
+    public record Input(Path path, boolean foundInFolder) {
+    }
+
     public RunReport check(List<Path> files) {
+        return checkInputs(files.stream().map(p -> new Input(p, false)).toList());
+    }
+
+    public RunReport checkInputs(List<Input> inputs) {
         List<DocumentReport> reports = new ArrayList<>();
-        for (Path p : files) {
-            reports.add(check(p));
+        List<String> skipped = new ArrayList<>();
+        for (Input in : inputs) {
+            if (in.foundInFolder() && !isFormulation(in.path())) {
+                skipped.add(in.path().toString());
+                continue;
+            }
+            reports.add(check(in.path()));
         }
-        return new RunReport(version(), reports);
+        return new RunReport(version(), java.time.Instant.now(), library.files(), reports, skipped);
+    }
+
+    /**
+     * A file found in a folder is checked when its top-level "document" says formulation; one that cannot
+     * be read as JSON is checked too, so that it is reported invalid rather than passed over.
+     */
+    private boolean isFormulation(Path p) {
+        try {
+            SourceDocument doc = json.read(p.toString(), Files.readAllBytes(p));
+            return "formulation".equals(doc.root().path("document").asString(""));
+        } catch (DocumentException | IOException e) {
+            return true;
+        }
     }
 
     public DocumentReport check(Path file) {
@@ -83,12 +114,12 @@ public final class Protolyte {
         byte[] content;
         try {
             if (!Files.isRegularFile(file)) {
-                return invalid(source, Optional.empty(), List.of(new Problem("", Optional.empty(),
+                return invalid(source, Optional.empty(), Optional.empty(), List.of(new Problem("", Optional.empty(),
                         Files.exists(file) ? "not a regular file" : "file not found")));
             }
             content = Files.readAllBytes(file);
         } catch (IOException e) {
-            return invalid(source, Optional.empty(), List.of(new Problem("", Optional.empty(),
+            return invalid(source, Optional.empty(), Optional.empty(), List.of(new Problem("", Optional.empty(),
                     "cannot read the file: " + e.getMessage())));
         }
         return check(source, content);
@@ -96,6 +127,7 @@ public final class Protolyte {
 
     public DocumentReport check(String source, byte[] content) {
         Optional<String> id = Optional.empty();
+        String sha256 = Digests.sha256(content);
         try {
             SourceDocument doc = json.read(source, content);
             if (doc.root().path("id").isString()) {
@@ -109,11 +141,11 @@ public final class Protolyte {
             }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
-            return DocumentReport.of(analysis, checker.check(analysis));
+            return DocumentReport.of(analysis, sha256, checker.check(analysis), failOn);
         } catch (DocumentException e) {
-            return invalid(source, id, e.problems());
+            return invalid(source, Optional.of(sha256), id, e.problems());
         } catch (RuntimeException e) {
-            return DocumentReport.fault(source, "internal fault while checking this document ("
+            return DocumentReport.fault(source, Optional.of(sha256), "internal fault while checking this document ("
                     + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
         }
     }
@@ -131,9 +163,10 @@ public final class Protolyte {
         return all;
     }
 
-    private static DocumentReport invalid(String source, Optional<String> id, List<Problem> problems) {
+    private static DocumentReport invalid(String source, Optional<String> sha256, Optional<String> id,
+                                          List<Problem> problems) {
         List<Finding> findings = problems.stream().map(p -> new Finding(INVALID_DOCUMENT, Severity.ERROR,
                 p.message(), Optional.of(p.pointer()), p.location())).toList();
-        return DocumentReport.invalid(source, id, findings);
+        return DocumentReport.invalid(source, sha256, id, findings);
     }
 }

@@ -9,44 +9,48 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.protolyte.Protolyte;
-import org.protolyte.document.DocumentException;
-import org.protolyte.document.Problem;
-import org.protolyte.document.SchemaCatalog;
 import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunReport;
 import org.protolyte.report.TextRenderer;
-import org.protolyte.substance.LibraryLoader;
-import org.protolyte.substance.SubstanceLibrary;
+import org.protolyte.rules.RuleBook;
+import org.protolyte.rules.Severity;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
-/** {@code protolyte check FILE...}: checks formulation documents and reports. */
+/** {@code protolyte check FILE_OR_FOLDER...}: checks formulation documents and reports. */
 @Command(name = "check", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
-        description = "Checks formulation documents.%nExit codes: 0 pass, 1 fail, 2 invalid input or usage, "
-                + "3 indeterminate, 4 internal fault; with several files, the highest.")
+        description = "Checks formulation documents. A folder means every *.json file below it, in order of "
+                + "relative path; files there that are not formulation documents are skipped with a note.%n"
+                + "Exit codes: 0 pass, 1 fail, 2 invalid input or usage, 3 indeterminate, 4 internal fault; "
+                + "with several files, the highest.")
 public final class CheckCommand implements Callable<Integer> {
 
     enum Format { text, json }
 
-    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Formulation documents (JSON).")
+    @Parameters(arity = "1..*", paramLabel = "FILE", description = "Formulation documents (JSON), or folders.")
     List<Path> files = new ArrayList<>();
 
     @Option(names = "--format", paramLabel = "FORMAT", description = "text (default) or json.")
     Format format = Format.text;
 
-    @Option(names = "--substances", paramLabel = "FILE",
-            description = "A user substance library that extends the shipped one (repeatable).")
-    List<Path> substances = new ArrayList<>();
+    @Option(names = "--fail-on", paramLabel = "SEVERITY",
+            description = "Lowest finding severity that fails a document: error (default), warning or note.")
+    String failOn = "error";
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE",
             description = "Write the report to FILE (atomically) instead of standard output.")
     Path output;
+
+    @Mixin
+    Setup setup;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
@@ -54,29 +58,25 @@ public final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
+        Severity threshold;
+        try {
+            threshold = Severity.valueOf(failOn.toUpperCase(Locale.ROOT));
+        } catch (IllegalArgumentException e) {
+            err.println("protolyte: --fail-on takes error, warning or note, not '" + failOn + "'");
+            return 2;
+        }
         if (output != null && !Files.isDirectory(output.toAbsolutePath().getParent())) {
             err.println("protolyte: cannot write the report to " + output + ": its folder does not exist");
             return 2;
         }
-        SchemaCatalog schemas = new SchemaCatalog();
-        SubstanceLibrary library;
+        Protolyte protolyte;
         try {
-            LibraryLoader loader = new LibraryLoader(schemas).addShipped();
-            for (Path p : substances) {
-                if (!Files.isRegularFile(p)) {
-                    err.println("protolyte: substance library " + p + ": file not found");
-                    return 2;
-                }
-                loader.add(p.toString(), Files.readAllBytes(p), true);
-            }
-            library = loader.build();
-        } catch (DocumentException e) {
-            for (Problem p : e.problems()) {
-                err.println("protolyte: substance library: " + p);
-            }
-            return 2;
+            RuleBook book = setup.ruleBook();
+            protolyte = new Protolyte(setup.schemas, setup.library(), setup.checker(book), threshold);
+        } catch (Setup.UsageException e) {
+            return Setup.usage(err, e);
         }
-        RunReport run = new Protolyte(schemas, library).check(files);
+        RunReport run = protolyte.checkInputs(Inputs.expand(files));
         String text = format == Format.json ? new JsonRenderer().render(run) : new TextRenderer().render(run);
         if (output == null) {
             PrintWriter out = spec.commandLine().getOut();

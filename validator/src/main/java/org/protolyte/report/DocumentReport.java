@@ -14,7 +14,7 @@ import org.protolyte.rules.RulePack;
 import org.protolyte.rules.Severity;
 
 /** What a run says about one input file. */
-public record DocumentReport(String source, Optional<String> id, Status status,
+public record DocumentReport(String source, Optional<String> sha256, Optional<String> id, Status status,
                              Optional<FormulationAnalysis> analysis, List<Finding> findings,
                              List<Diagnostic> diagnostics, List<RulePack> packs) {
 
@@ -24,18 +24,19 @@ public record DocumentReport(String source, Optional<String> id, Status status,
         packs = List.copyOf(packs);
     }
 
-    public static DocumentReport invalid(String source, Optional<String> id, List<Finding> problems) {
-        return new DocumentReport(source, id, Status.INVALID, Optional.empty(), problems, List.of(), List.of());
+    public static DocumentReport invalid(String source, Optional<String> sha256, Optional<String> id,
+                                         List<Finding> problems) {
+        return new DocumentReport(source, sha256, id, Status.INVALID, Optional.empty(), problems, List.of(), List.of());
     }
 
-    public static DocumentReport fault(String source, String message) {
-        return new DocumentReport(source, Optional.empty(), Status.FAULT, Optional.empty(), List.of(),
+    public static DocumentReport fault(String source, Optional<String> sha256, String message) {
+        return new DocumentReport(source, sha256, Optional.empty(), Status.FAULT, Optional.empty(), List.of(),
                 List.of(new Diagnostic("internal-fault", Caveat.Severity.INDETERMINATE, message, Optional.empty(),
                         Optional.empty(), Optional.empty())), List.of());
     }
 
-    /** Status from the analysis: indeterminate outranks fail, an error finding fails. */
-    public static DocumentReport of(FormulationAnalysis a, Checker.Verdict verdict) {
+    /** Status from the analysis: indeterminate outranks fail; a finding at or above {@code failOn} fails. */
+    public static DocumentReport of(FormulationAnalysis a, String sha256, Checker.Verdict verdict, Severity failOn) {
         List<Finding> findings = verdict.findings();
         Formulation f = a.recipe().formulation();
         List<Diagnostic> diagnostics = new ArrayList<>();
@@ -53,9 +54,9 @@ public record DocumentReport(String source, Optional<String> id, Status status,
         }
         boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE)
                 || a.conditions().stream().anyMatch(r -> !r.determinate());
-        boolean failed = findings.stream().anyMatch(x -> x.severity() == Severity.ERROR);
+        boolean failed = findings.stream().anyMatch(x -> x.severity().compareTo(failOn) >= 0);
         Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
-        return new DocumentReport(f.document().source(), Optional.of(f.id()), s, Optional.of(a), findings,
-                diagnostics, verdict.packs());
+        return new DocumentReport(f.document().source(), Optional.of(sha256), Optional.of(f.id()), s, Optional.of(a),
+                findings, diagnostics, verdict.packs());
     }
 }

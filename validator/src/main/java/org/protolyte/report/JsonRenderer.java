@@ -33,10 +33,15 @@ public final class JsonRenderer {
         tool.put("caution", RunReport.CAUTION);
         tool.put("pHConvention", "conventional pH scale (Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. "
                 + "74 (2002) 2169): pH = −log10(γH·mH) with γH from the Davies equation");
+        tool.put("generatedAt", run.generatedAt().toString());
+        ArrayNode library = tool.putArray("substanceLibrary");
+        run.libraryFiles().forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));
         ArrayNode reports = root.putArray("reports");
         for (DocumentReport r : run.reports()) {
             reports.add(document(r));
         }
+        ArrayNode skipped = root.putArray("skipped");
+        run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "not a formulation document"));
         ObjectNode summary = root.putObject("summary");
         summary.put("documents", run.reports().size());
         for (Status s : Status.values()) {
@@ -49,8 +54,12 @@ public final class JsonRenderer {
     private ObjectNode document(DocumentReport r) {
         ObjectNode n = mapper.createObjectNode();
         n.put("source", r.source());
+        r.sha256().ifPresent(h -> n.put("sha256", h));
         r.id().ifPresent(id -> n.put("id", id));
         n.put("status", r.status().code());
+        ArrayNode packs = n.putArray("rulePacks");
+        r.packs().forEach(p -> packs.addObject().put("name", p.name()).put("version", p.version())
+                .put("source", p.document().source()).put("sha256", p.sha256()));
         r.analysis().ifPresent(a -> analysis(n, a));
         ArrayNode findings = n.putArray("findings");
         r.findings().forEach(f -> findings.add(finding(f)));
@@ -165,6 +174,15 @@ public final class JsonRenderer {
         o.put("severity", f.severity().code());
         o.put("message", f.message());
         place(o, f.pointer(), f.location());
+        f.definition().ifPresent(d -> {
+            o.put("summary", d.summary());
+            o.put("explanation", d.explanation());
+            d.remedy().ifPresent(x -> o.put("remedy", x));
+            d.safety().ifPresent(x -> o.put("safety", x));
+            ArrayNode refs = o.putArray("references");
+            d.references().forEach(refs::add);
+            o.put("pack", d.pack());
+        });
         return o;
     }
 

@@ -1,15 +1,25 @@
 package org.protolyte.report;
 
+import java.time.Instant;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
-/** One run over several inputs. */
-public record RunReport(String toolVersion, List<DocumentReport> reports) {
+/**
+ * One run over several inputs, with what it was computed from: the tool version, the substance library
+ * files and their SHA-256 (each document records its own hash and its packs'), and when.
+ */
+public record RunReport(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
+                        List<DocumentReport> reports, List<String> skipped) {
 
     public static final String CAUTION = "Protolyte is a decision aid. Release decisions rest on measured values, "
             + "the applicable pharmacopoeia, local SOPs and qualified QA review.";
 
     public RunReport {
         reports = List.copyOf(reports);
+        skipped = List.copyOf(skipped);
+        libraryFiles = Collections.unmodifiableMap(new LinkedHashMap<>(libraryFiles));
     }
 
     public int exitCode() {

@@ -26,6 +26,12 @@ public final class TextRenderer {
             b.append(NL);
             document(b, r);
         }
+        for (String skipped : run.skipped()) {
+            b.append(NL).append("skipped ").append(skipped).append(": not a formulation document");
+        }
+        if (!run.skipped().isEmpty()) {
+            b.append(NL);
+        }
         b.append(NL).append(String.format(Locale.ROOT, "%d document(s): %d pass, %d fail, %d invalid, %d indeterminate",
                 run.reports().size(), run.count(Status.PASS), run.count(Status.FAIL), run.count(Status.INVALID),
                 run.count(Status.INDETERMINATE)));

@@ -28,6 +28,6 @@ public final class CheckKinds {
     }
 
     public Map<String, CheckKind> all() {
-        return Map.copyOf(kinds);
+        return java.util.Collections.unmodifiableMap(kinds);
     }
 }

@@ -4,10 +4,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -15,6 +12,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
+import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.JsonReader;
 import org.protolyte.document.Problem;
@@ -105,7 +103,7 @@ public final class RuleBook {
         }
         RulePack pack = new RulePack(name, root.get("version").asString(),
                 root.has("title") ? Optional.of(root.get("title").asString()) : Optional.empty(), applies, parent,
-                root.path("documentWaivers").asBoolean(false), doc, sha256(content), shipped);
+                root.path("documentWaivers").asBoolean(false), doc, Digests.sha256(content), shipped);
         packs.put(name, pack);
         try {
             rules(List.of(name));   // checks the whole chain now, with places
@@ -241,13 +239,5 @@ public final class RuleBook {
 
     static Severity severity(String code) {
         return Severity.valueOf(code.toUpperCase(java.util.Locale.ROOT));
-    }
-
-    public static String sha256(byte[] content) {
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(content));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
-        }
     }
 }

@@ -17,6 +17,7 @@ import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.TemperatureRange;
+import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.JsonReader;
 import org.protolyte.document.Problem;
@@ -48,6 +49,7 @@ public final class LibraryLoader {
     private final Map<String, Substance> substances = new LinkedHashMap<>();
     private final Map<String, Substance> index = new LinkedHashMap<>();
     private final Map<String, List<String>> ambiguous = new LinkedHashMap<>();
+    private final Map<String, String> files = new LinkedHashMap<>();   // source -> SHA-256 of its bytes
 
     public LibraryLoader(SchemaCatalog schemas) {
         this.schemas = schemas;
@@ -79,11 +81,12 @@ public final class LibraryLoader {
         if (!problems.isEmpty()) {
             throw new DocumentException(problems);
         }
+        files.put(source, Digests.sha256(content));
         return this;
     }
 
     public SubstanceLibrary build() {
-        return new SubstanceLibrary(systems, systemSources, ions, solutes, substances, index, ambiguous);
+        return new SubstanceLibrary(systems, systemSources, ions, solutes, substances, index, ambiguous, files);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */

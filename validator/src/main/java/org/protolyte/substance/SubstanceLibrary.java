@@ -29,11 +29,12 @@ public final class SubstanceLibrary {
     private final Map<String, Substance> substances;      // by canonical name
     private final Map<String, Substance> index;           // by normalised name or synonym
     private final Map<String, List<String>> ambiguous;    // normalised shared name -> forms
+    private final Map<String, String> files;              // library file -> SHA-256 of its bytes
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, String> systemSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
                      Map<String, Substance> substances, Map<String, Substance> index,
-                     Map<String, List<String>> ambiguous) {
+                     Map<String, List<String>> ambiguous, Map<String, String> files) {
         this.systems = Map.copyOf(systems);
         this.systemSources = Map.copyOf(systemSources);
         this.ions = Map.copyOf(ions);
@@ -41,6 +42,12 @@ public final class SubstanceLibrary {
         this.substances = new LinkedHashMap<>(substances);
         this.index = Map.copyOf(index);
         this.ambiguous = Map.copyOf(ambiguous);
+        this.files = new LinkedHashMap<>(files);
+    }
+
+    /** The files this library was built from, in order, with the SHA-256 of each file's bytes. */
+    public Map<String, String> files() {
+        return java.util.Collections.unmodifiableMap(files);
     }
 
     /** The key names are compared by: lower case, letters and digits only ("Na2HPO4·7H2O" = "na2hpo4 7h2o"). */
