@@ -76,6 +76,12 @@ public final class CheckCommand implements Callable<Integer> {
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
         }
+        for (Path p : files) {
+            if (Files.isDirectory(p) && Inputs.expand(List.of(p)).isEmpty()) {
+                err.println("protolyte: " + p + ": no *.json files below this folder");
+                return 2;
+            }
+        }
         RunReport run = protolyte.checkInputs(Inputs.expand(files));
         String text = format == Format.json ? new JsonRenderer().render(run) : new TextRenderer().render(run);
         if (output == null) {

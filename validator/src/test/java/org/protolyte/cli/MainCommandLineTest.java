@@ -256,10 +256,10 @@ class MainCommandLineTest {
     }
 
     @Test
-    void directoryGivenAsFileIsReportedInvalid(@TempDir Path dir) {
+    void folderWithoutDocumentsIsAUsageError(@TempDir Path dir) {
         Result r = run("check", dir.toString());
         assertEquals(2, r.exitCode(), r::all);
-        assertTrue(r.out().contains("not a regular file"), r.out());
+        assertTrue(r.err().contains("no *.json files"), r.err());
     }
 
     @Test
