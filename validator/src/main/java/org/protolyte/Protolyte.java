@@ -31,6 +31,7 @@ import org.protolyte.rules.Checker;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.Finding;
 import org.protolyte.rules.Severity;
+import org.protolyte.rules.Waivers;
 import org.protolyte.substance.SubstanceLibrary;
 
 /**
@@ -50,17 +51,25 @@ public final class Protolyte {
     private final Severity failOn;
     private final SubstanceLibrary library;
 
-    /** Judged by the shipped packs that apply to each document's intended use; errors fail. */
+    private final Waivers waivers;
+
+    /** Judged by the shipped packs that apply to each document's intended use; errors fail; no waivers. */
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
         this(schemas, library, Checker.byIntendedUse(RuleBook.shipped(schemas, CheckKinds.load())), Severity.ERROR);
     }
 
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn) {
+        this(schemas, library, checker, failOn, Waivers.none(java.time.LocalDate.now()));
+    }
+
+    public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn,
+                     Waivers waivers) {
         this.reader = new FormulationReader(schemas);
         this.resolver = new RecipeResolver(library);
         this.checker = checker;
         this.failOn = failOn;
         this.library = library;
+        this.waivers = waivers;
     }
 
     public static String version() {
@@ -141,7 +150,10 @@ public final class Protolyte {
             }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
-            return DocumentReport.of(analysis, sha256, checker.check(analysis), failOn);
+            Checker.Verdict verdict = checker.check(analysis);
+            boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
+            List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
+            return DocumentReport.of(analysis, sha256, new Checker.Verdict(verdict.packs(), findings), failOn);
         } catch (DocumentException e) {
             return invalid(source, Optional.of(sha256), id, e.problems());
         } catch (RuntimeException e) {

@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -14,6 +15,8 @@ import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.RulePack;
+import org.protolyte.rules.WaiverFile;
+import org.protolyte.rules.Waivers;
 import org.protolyte.substance.LibraryLoader;
 import org.protolyte.substance.SubstanceLibrary;
 
@@ -115,6 +118,17 @@ final class Setup {
                     .append(p);
         }
         return b.toString();
+    }
+
+    Waivers waivers(Path file, LocalDate today) throws UsageException, IOException {
+        if (file == null) {
+            return Waivers.none(today);
+        }
+        try {
+            return new Waivers(WaiverFile.read(schemas, file.toString(), read(file, "waiver file")), today);
+        } catch (DocumentException e) {
+            throw new UsageException(describe("waiver file " + file, e));
+        }
     }
 
     static int usage(PrintWriter err, UsageException e) {

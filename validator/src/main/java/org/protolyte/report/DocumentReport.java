@@ -54,7 +54,7 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
         }
         boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE)
                 || a.conditions().stream().anyMatch(r -> !r.determinate());
-        boolean failed = findings.stream().anyMatch(x -> x.severity().compareTo(failOn) >= 0);
+        boolean failed = findings.stream().anyMatch(x -> x.active() && x.severity().compareTo(failOn) >= 0);
         Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
         return new DocumentReport(f.document().source(), Optional.of(sha256), Optional.of(f.id()), s, Optional.of(a),
                 findings, diagnostics, verdict.packs());

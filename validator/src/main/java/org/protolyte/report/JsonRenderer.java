@@ -183,6 +183,15 @@ public final class JsonRenderer {
             d.references().forEach(refs::add);
             o.put("pack", d.pack());
         });
+        f.waivedBy().ifPresent(w -> {
+            ObjectNode x = o.putObject("waived");
+            x.put("reason", w.reason());
+            x.put("approver", w.approver());
+            x.put("approved", w.approved().toString());
+            x.put("expires", w.expires().toString());
+            x.put("grantedIn", w.origin());
+            x.put("authorGranted", w.authorGranted());
+        });
         return o;
     }
 

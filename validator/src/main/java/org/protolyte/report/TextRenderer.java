@@ -55,6 +55,12 @@ public final class TextRenderer {
                 f.location().ifPresent(l -> b.append(" (line ").append(l.line()).append(", column ")
                         .append(l.column()).append(")"));
                 b.append(NL).append("      ").append(f.message()).append(NL);
+                f.waivedBy().ifPresent(w -> b.append("      WAIVED by ").append(w.approver())
+                        .append(w.authorGranted() ? " (granted in the document by its author)" : "")
+                        .append(" until ").append(w.expires()).append(": ").append(w.reason()).append(NL));
+                f.definition().filter(d -> f.severity() != org.protolyte.rules.Severity.NOTE)
+                        .flatMap(org.protolyte.rules.Rule::remedy)
+                        .ifPresent(rem -> b.append("      what to do: ").append(rem).append(NL));
             }
         }
         if (!r.diagnostics().isEmpty()) {
