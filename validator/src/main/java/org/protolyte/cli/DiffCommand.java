@@ -1,0 +1,81 @@
+package org.protolyte.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.protolyte.Protolyte;
+import org.protolyte.report.DiffRenderer;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.report.RevisionDiff;
+import org.protolyte.report.Status;
+import org.protolyte.rules.Severity;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code protolyte diff OLD NEW}: what changed between two revisions of a formulation. */
+@Command(name = "diff", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Compares two revisions of a formulation: components, predicted values per condition, "
+                + "findings.%nExit codes: 0 no new failing finding, 1 the new revision fails on a finding the old "
+                + "one did not, 2 invalid input or usage.")
+public final class DiffCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "OLD")
+    Path before;
+
+    @Parameters(index = "1", paramLabel = "NEW")
+    Path after;
+
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text (default) or json.")
+    String format = "text";
+
+    @Option(names = "--fail-on", paramLabel = "SEVERITY", description = "error (default), warning or note.")
+    String failOn = "error";
+
+    @Mixin
+    Setup setup;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter err = spec.commandLine().getErr();
+        Severity threshold;
+        try {
+            threshold = Severity.valueOf(failOn.toUpperCase(Locale.ROOT));
+        } catch (IllegalArgumentException e) {
+            err.println("protolyte: --fail-on takes error, warning or note, not '" + failOn + "'");
+            return 2;
+        }
+        if (!format.equals("text") && !format.equals("json")) {
+            err.println("protolyte: --format takes text or json, not '" + format + "'");
+            return 2;
+        }
+        Protolyte protolyte;
+        try {
+            protolyte = new Protolyte(setup.schemas, setup.library(), setup.checker(setup.ruleBook()), threshold);
+        } catch (Setup.UsageException e) {
+            return Setup.usage(err, e);
+        }
+        DocumentReport old = protolyte.check(before);
+        DocumentReport now = protolyte.check(after);
+        RevisionDiff diff = RevisionDiff.compare(old, now);
+        int exit = old.status() == Status.INVALID || now.status() == Status.INVALID ? 2
+                : diff.newFailure(threshold) ? 1 : 0;
+        PrintWriter out = spec.commandLine().getOut();
+        out.print(format.equals("json") ? new DiffRenderer().json(diff, exit) : new DiffRenderer().text(diff));
+        if (exit == 2) {
+            err.println("protolyte: " + (old.status() == Status.INVALID ? before : after)
+                    + " is not a valid formulation document; 'protolyte check' names its problems");
+        }
+        out.flush();
+        return exit;
+    }
+}

@@ -1,0 +1,72 @@
+package org.protolyte.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.Protolyte;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.rules.Severity;
+import org.protolyte.substance.LibraryLoader;
+
+/** Comparing two revisions: what changed in the recipe, in the predictions and in the findings. */
+class RevisionDiffTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+    private static final Protolyte PROTOLYTE = new Protolyte(SCHEMAS, LibraryLoader.shipped(SCHEMAS));
+
+    private static DocumentReport doc(String revision, String components) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-DIFF\", \"revision\": \""
+                + revision + "\", \"intendedUse\": \"parenteral\", \"basis\": {\"finalVolume\": \"1 L\"},"
+                + " \"components\": [" + components + "],"
+                + " \"targets\": {\"pH\": {\"value\": 6.9, \"tolerance\": 0.2, \"temperature\": \"25 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        return PROTOLYTE.check("r" + revision + ".json", json.getBytes(StandardCharsets.UTF_8));
+    }
+
+    private static final String PHOSPHATE = "{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"10 mmol/L\"},"
+            + "{\"substance\": \"disodium hydrogen phosphate dihydrate\", \"amount\": \"10 mmol/L\"}";
+
+    @Test
+    void identicalRevisionsShowNoChange() {
+        RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("A", PHOSPHATE));
+        assertEquals(0, d.components().size());
+        assertEquals(0, d.values().size());
+        assertEquals(0, d.findings().size());
+        assertFalse(d.newFailure(Severity.ERROR));
+    }
+
+    @Test
+    void anAmountGivenInOtherUnitsComparesByMoles() {
+        // 10 mmol of KH2PO4 is 1.3609 g (molar mass 136.09 g/mol, Ph. Eur.): the same amount, written differently
+        String grams = PHOSPHATE.replace("\"10 mmol/L\"}," , "\"1.3609 g\"},");
+        RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("B", grams));
+        RevisionDiff.ComponentChange c = d.components().get(0);
+        assertEquals(RevisionDiff.Kind.CHANGED, c.kind());
+        assertEquals(c.mmolBefore(), c.mmolAfter(), 0.001);
+        assertTrue(d.values().stream().allMatch(v -> Math.abs(v.delta()) < 1e-3));
+    }
+
+    @Test
+    void addedComponentMovedValuesAndANewFailureAreReported() {
+        String withKcl = PHOSPHATE + ",{\"substance\": \"potassium chloride\", \"amount\": \"60 mmol/L\"}";
+        RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("B", withKcl));
+        assertTrue(d.components().stream().anyMatch(c -> c.kind() == RevisionDiff.Kind.ADDED
+                && c.substance().equals("potassium chloride")));
+        assertTrue(d.values().stream().anyMatch(v -> v.quantity().equals("ionic strength") && v.delta() > 0.05));
+        assertTrue(d.findings().stream().anyMatch(f -> f.rule().equals("parenteral-potassium-chloride-dilute")
+                && f.kind() == RevisionDiff.Kind.ADDED));
+        assertTrue(d.newFailure(Severity.ERROR));
+    }
+
+    @Test
+    void aClearedFindingIsNotANewFailure() {
+        String withKcl = PHOSPHATE + ",{\"substance\": \"potassium chloride\", \"amount\": \"60 mmol/L\"}";
+        RevisionDiff d = RevisionDiff.compare(doc("A", withKcl), doc("B", PHOSPHATE));
+        assertTrue(d.findings().stream().anyMatch(f -> f.kind() == RevisionDiff.Kind.REMOVED));
+        assertFalse(d.newFailure(Severity.ERROR));
+    }
+}
