@@ -55,7 +55,45 @@ public final class Analyzer {
         for (Formulation.Condition c : recipe.formulation().conditions()) {
             results.add(condition(recipe, solution, c));
         }
-        return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe));
+        return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe),
+                sensitivities(recipe, doses, results));
+    }
+
+    /** dpH at the target's temperature per +1 % of each weighed component, titrants held at their q.s. */
+    private List<Sensitivity> sensitivities(Recipe recipe, Map<Ingredient, Double> doses, List<ConditionResult> results) {
+        Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
+        if (target.isEmpty()) {
+            return List.of();
+        }
+        Optional<ConditionResult> at = results.stream().filter(ConditionResult::determinate)
+                .filter(c -> Math.abs(c.condition().kelvin() - target.get().kelvin()) < 0.005).findFirst();
+        if (at.isEmpty()) {
+            return List.of();
+        }
+        double base = at.get().state().orElseThrow().pH();
+        double kelvin = at.get().condition().kelvin();
+        List<Sensitivity> out = new ArrayList<>();
+        for (Ingredient ing : recipe.ingredients()) {
+            if (ing.kind() == Ingredient.Kind.TITRANT || ing.substance().solvent() || !ing.substance().composition()
+                    .isIonizable()) {
+                continue;
+            }
+            List<Ingredient> changed = new ArrayList<>(recipe.ingredients());
+            Ingredient more = new Ingredient(ing.line(), ing.substance(), ing.kind(), ing.value() * 1.01,
+                    ing.stockMolarity(), ing.stockDensity());
+            changed.set(changed.indexOf(ing), more);
+            Recipe r = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
+            Map<Ingredient, Double> titrants = new HashMap<>(doses);
+            try {
+                Solution s = r.solution(titrants);
+                double pH = equilibrium.solve(s.species(), s.totals(), kelvin).pH();
+                out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
+            } catch (IndeterminateException e) {
+                // a component whose 1 % change cannot be solved has no sensitivity to report
+            }
+        }
+        out.sort(java.util.Comparator.comparingDouble((Sensitivity x) -> -Math.abs(x.dpHPerPercent())));
+        return out;
     }
 
     private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c) {

@@ -6,11 +6,16 @@ import org.protolyte.chemistry.Caveat;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
 
-/** Everything computed for one formulation: per condition, the q.s. titrants, and what was assumed. */
+/**
+ * Everything computed for one formulation: per condition, the q.s. titrants, what was assumed, and the
+ * sensitivity of the pH at the target's temperature to each component (largest first).
+ */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
-                                  List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions) {
+                                  List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
+                                  List<Sensitivity> targetSensitivities) {
 
     public FormulationAnalysis {
+        targetSensitivities = List.copyOf(targetSensitivities);
         conditions = List.copyOf(conditions);
         titrants = List.copyOf(titrants);
         caveats = List.copyOf(caveats);

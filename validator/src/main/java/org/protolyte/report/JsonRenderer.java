@@ -103,6 +103,9 @@ public final class JsonRenderer {
         for (TitrantResult t : a.titrants()) {
             titrants.add(titrant(t, f));
         }
+        ArrayNode sens = n.putArray("targetSensitivities");
+        a.targetSensitivities().forEach(x -> sens.addObject().put("substance", x.substance()).put("pointer", x.pointer())
+                .put("dpHPerPercent", Numbers.significant(x.dpHPerPercent(), 3)));
         ArrayNode assumptions = n.putArray("assumptions");
         a.assumptions().forEach(assumptions::add);
     }

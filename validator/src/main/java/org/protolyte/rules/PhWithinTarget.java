@@ -42,7 +42,10 @@ public final class PhWithinTarget implements CheckKind {
                 : String.format(Locale.ROOT, "%.2f to %.2f", target.min(), target.max());
         String main = at.get().mainBuffer().map(b -> String.format(Locale.ROOT, "; %s carries %.0f %% of the buffering",
                 b.system(), b.share() * 100)).orElse("");
+        String lever = a.targetSensitivities().stream().findFirst().filter(x -> x.dpHPerPercent() != 0)
+                .map(x -> String.format(Locale.ROOT, "; the pH moves most with %s (%+.3f per +1 %%)", x.substance(),
+                        x.dpHPerPercent())).orElse("");
         return List.of(rule.finding(f, target.pointer(), String.format(Locale.ROOT,
-                "pH at %.0f °C is %.2f, target %s%s", t, pH, range, main)));
+                "pH at %.0f °C is %.2f, target %s%s%s", t, pH, range, main, lever)));
     }
 }
