@@ -19,7 +19,8 @@ class SensitivityTest {
 
     /**
      * Equimolal phosphate: by Henderson–Hasselbalch, +1 % of the base form raises the pH by log10(1.01) = 0.0043,
-     * +1 % of the acid form lowers it by as much (derived; ionic strength changes it by a few per cent).
+     * +1 % of the acid form lowers it by as much (derived). The added salt also raises the ionic strength, which by
+     * the Davies slope at I = 0.1 takes up to 0.0007 off the base's shift and adds 0.0002 to the acid's: within 20 %.
      */
     @Test
     void onePercentMoreOfEachBufferFormMovesThePHByHendersonHasselbalch() {
@@ -34,8 +35,8 @@ class SensitivityTest {
         double hh = Math.log10(1.01);
         Sensitivity base = s.stream().filter(x -> x.substance().startsWith("disodium")).findFirst().orElseThrow();
         Sensitivity acid = s.stream().filter(x -> x.substance().startsWith("potassium")).findFirst().orElseThrow();
-        assertEquals(hh, base.dpHPerPercent(), 0.1 * hh);
-        assertEquals(-hh, acid.dpHPerPercent(), 0.1 * hh);
+        assertEquals(hh, base.dpHPerPercent(), 0.2 * hh);
+        assertEquals(-hh, acid.dpHPerPercent(), 0.2 * hh);
         assertTrue(s.stream().noneMatch(x -> x.substance().equals("sucrose")), "a non-electrolyte is not listed");
     }
 }
