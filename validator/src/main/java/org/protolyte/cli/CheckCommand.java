@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
+import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -15,6 +16,7 @@ import java.util.concurrent.Callable;
 import org.protolyte.Protolyte;
 import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunReport;
+import org.protolyte.report.SarifRenderer;
 import org.protolyte.report.TextRenderer;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.Severity;
@@ -33,12 +35,12 @@ import picocli.CommandLine.Parameters;
                 + "with several files, the highest.")
 public final class CheckCommand implements Callable<Integer> {
 
-    enum Format { text, json }
+    enum Format { text, json, sarif }
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Formulation documents (JSON), or folders.")
     List<Path> files = new ArrayList<>();
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text (default) or json.")
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text (default), json, or sarif (SARIF 2.1.0, for code-review platforms).")
     Format format = Format.text;
 
     @Option(names = "--fail-on", paramLabel = "SEVERITY",
@@ -48,6 +50,10 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = {"-o", "--output"}, paramLabel = "FILE",
             description = "Write the report to FILE (atomically) instead of standard output.")
     Path output;
+
+    @Option(names = "--waivers", paramLabel = "FILE",
+            description = "The waiver file QA holds: accepted findings, per document revision.")
+    Path waivers;
 
     @Mixin
     Setup setup;
@@ -72,7 +78,8 @@ public final class CheckCommand implements Callable<Integer> {
         Protolyte protolyte;
         try {
             RuleBook book = setup.ruleBook();
-            protolyte = new Protolyte(setup.schemas, setup.library(), setup.checker(book), threshold);
+            protolyte = new Protolyte(setup.schemas, setup.library(), setup.checker(book), threshold,
+                    setup.waivers(waivers, LocalDate.now()));
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
         }
@@ -83,7 +90,11 @@ public final class CheckCommand implements Callable<Integer> {
             }
         }
         RunReport run = protolyte.checkInputs(Inputs.expand(files));
-        String text = format == Format.json ? new JsonRenderer().render(run) : new TextRenderer().render(run);
+        String text = switch (format) {
+            case json -> new JsonRenderer().render(run);
+            case sarif -> new SarifRenderer().render(run);
+            case text -> new TextRenderer().render(run);
+        };
         if (output == null) {
             PrintWriter out = spec.commandLine().getOut();
             out.print(text);

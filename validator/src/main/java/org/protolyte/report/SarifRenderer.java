@@ -18,6 +18,7 @@ import org.protolyte.document.Location;
 import org.protolyte.rules.Finding;
 import org.protolyte.rules.Rule;
 import org.protolyte.rules.Severity;
+import org.protolyte.rules.Waiver;
 
 import tools.jackson.databind.SerializationFeature;
 import tools.jackson.databind.json.JsonMapper;
@@ -95,6 +96,7 @@ public final class SarifRenderer {
             for (Finding f : r.findings()) {
                 ObjectNode res = result(f.rule(), ruleIndex, level(f.severity()), f.message());
                 res.putArray("locations").add(location(r.source(), artifact, f.pointer(), f.location()));
+                f.waivedBy().ifPresent(w -> suppression(res, w));
                 results.add(res);
             }
             for (Diagnostic d : r.diagnostics()) {
@@ -181,6 +183,22 @@ public final class SarifRenderer {
         res.put("level", level);
         res.putObject("message").put("text", message);
         return res;
+    }
+
+    /**
+     * A waived finding stays a result, suppressed (SARIF 2.1.0 §3.35): "inSource" when the document itself
+     * grants it, "external" for the QA waiver file; "accepted" because QA approved it.
+     */
+    private static void suppression(ObjectNode res, Waiver w) {
+        ObjectNode s = res.putArray("suppressions").addObject();
+        s.put("kind", w.authorGranted() ? "inSource" : "external");
+        s.put("status", "accepted");
+        s.put("justification", w.reason());
+        ObjectNode props = s.putObject("properties");
+        props.put("approver", w.approver());
+        props.put("approved", w.approved().toString());
+        props.put("expires", w.expires().toString());
+        props.put("grantedIn", w.origin());
     }
 
     private ObjectNode location(String source, int artifact, Optional<String> pointer, Optional<Location> at) {
