@@ -150,7 +150,12 @@ public final class Protolyte {
             }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
-            Checker.Verdict verdict = checker.check(analysis);
+            Checker.Verdict verdict;
+            try {
+                verdict = checker.check(analysis);
+            } catch (DocumentException e) {
+                throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
+            }
             boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
             List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
             return DocumentReport.of(analysis, sha256, new Checker.Verdict(verdict.packs(), findings), failOn);

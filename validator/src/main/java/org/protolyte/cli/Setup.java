@@ -76,7 +76,11 @@ final class Setup {
             String name = packName(book, adds ? r.substring(1) : r);
             (adds ? add : replace).add(name);
         }
-        return new Checker(book, replace, add);
+        try {
+            return new Checker(book, replace, add);
+        } catch (DocumentException e) {
+            throw new UsageException(describe("rule packs " + String.join(", ", rules) + " cannot be combined", e));
+        }
     }
 
     private static String packName(RuleBook book, String nameOrFile) throws UsageException {

@@ -10,6 +10,7 @@ import tools.jackson.core.JsonToken;
 import tools.jackson.core.StreamReadConstraints;
 import tools.jackson.core.StreamReadFeature;
 import tools.jackson.core.TokenStreamLocation;
+import tools.jackson.core.exc.StreamConstraintsException;
 import tools.jackson.core.json.JsonFactory;
 import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
@@ -55,6 +56,11 @@ public final class JsonReader {
         try (JsonParser p = mapper.createParser(content)) {
             try {
                 scan(p, locations);
+            } catch (StreamConstraintsException e) {
+                String pointer = p.streamReadContext() == null ? "" : p.streamReadContext().pathAsPointer().toString();
+                TokenStreamLocation l = p.currentTokenLocation();
+                throw new DocumentException(new Problem(pointer, Optional.of(new Location(l.getLineNr(), l.getColumnNr())),
+                        "nesting deeper than " + MAX_DEPTH + " levels is refused"));
             } catch (JacksonException e) {
                 // the parser's context at the fault is the place to start looking (e.g. the repeated key)
                 String pointer = p.streamReadContext() == null ? "" : p.streamReadContext().pathAsPointer().toString();

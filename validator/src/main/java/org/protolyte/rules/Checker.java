@@ -25,11 +25,27 @@ public final class Checker {
     private final List<String> replace;
     private final List<String> add;
 
+    /**
+     * @throws IllegalArgumentException for a pack name the book does not hold
+     * @throws org.protolyte.document.DocumentException when the chosen packs cannot be combined (naming the pack)
+     */
     public Checker(RuleBook book, List<String> replace, List<String> add) {
         this.book = book;
         this.replace = List.copyOf(replace);
         this.add = List.copyOf(add);
+        for (String name : java.util.stream.Stream.concat(this.replace.stream(), this.add.stream()).toList()) {
+            if (book.pack(name).isEmpty()) {
+                throw new IllegalArgumentException("no rule pack named '" + name + "'");
+            }
+        }
+        for (String use : USES) {
+            book.rules(selection(use.isEmpty() ? Optional.empty() : Optional.of(use)));
+        }
     }
+
+    /** Every intendedUse (and none): a combination of packs is checked for each before any document is. */
+    private static final List<String> USES = List.of("", "parenteral", "ophthalmic", "cell-culture", "bioprocess",
+            "oral", "topical", "laboratory", "other");
 
     public static Checker byIntendedUse(RuleBook book) {
         return new Checker(book, List.of(), List.of());

@@ -66,7 +66,7 @@ public final class ConcentrationLimit implements CheckKind {
         if (value <= max.base()) {
             return List.of();
         }
-        String what = system.map(x -> "total " + x).orElse(substance.get().name());
+        String what = system.isPresent() ? "total " + system.get() : substance.orElseThrow().name();
         String shown = perMole ? String.format(Locale.ROOT, "%.3g mmol/L", value * 1000)
                 : String.format(Locale.ROOT, "%.3g g/L", value);
         return List.of(rule.finding(a.recipe().formulation(), first.line().pointer(), String.format(Locale.ROOT,

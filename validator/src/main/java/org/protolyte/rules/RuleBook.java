@@ -186,7 +186,9 @@ public final class RuleBook {
             }
         }
         if (!problems.isEmpty()) {
-            throw new DocumentException(problems);
+            // name the pack: when packs are combined the problem belongs to this file, not to the one being added
+            throw new DocumentException(problems.stream().map(p -> new Problem(p.pointer(), p.location(),
+                    p.message() + " (in rule pack " + pack.name() + ", " + doc.source() + ")")).toList());
         }
     }
 

@@ -52,7 +52,7 @@ class JsonReaderBadInputTest {
     void nestingDeeperThanMaxDepthIsRefused() {
         int depth = JsonReader.MAX_DEPTH + 1;
         Problem p = onlyProblem("[".repeat(depth) + "]".repeat(depth));
-        assertTrue(p.message().contains("depth"), p.message());
+        assertTrue(p.message().contains("nesting deeper than " + JsonReader.MAX_DEPTH), p.message());
     }
 
     @Test
