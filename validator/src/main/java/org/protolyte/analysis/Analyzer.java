@@ -2,6 +2,7 @@ package org.protolyte.analysis;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -12,11 +13,13 @@ import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.CarbonDioxide;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.IndeterminateException;
+import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.DocumentException;
@@ -35,6 +38,8 @@ public final class Analyzer {
 
     /** Upper limit of a q.s. search, mol of titrant per kg of water: far beyond any buffer's need. */
     static final double MAX_TITRANT_MOLALITY = 2.0;
+    /** Name of the library system that a CO2 condition opens. */
+    static final String CARBONATE = "carbonate";
 
     private final Equilibrium equilibrium;
 
@@ -86,7 +91,7 @@ public final class Analyzer {
             Map<Ingredient, Double> titrants = new HashMap<>(doses);
             try {
                 Solution s = r.solution(titrants);
-                double pH = equilibrium.solve(s.species(), s.totals(), kelvin).pH();
+                double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal(), Map.of()).pH();
                 out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
             } catch (IndeterminateException e) {
                 // a component whose 1 % change cannot be solved has no sensitivity to report
@@ -96,10 +101,40 @@ public final class Analyzer {
         return out;
     }
 
+    /**
+     * The equilibrium of a solution at a temperature, closed or open to a CO2 partial pressure (Pa), with
+     * extra strong ions (mol/kg) where a load is being tried.
+     */
+    EquilibriumState solve(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
+                           Map<Component, Double> extra) {
+        List<Species> species = new ArrayList<>(solution.species());
+        Map<Component, Double> totals = new LinkedHashMap<>(solution.totals());
+        extra.forEach((c, m) -> {
+            totals.merge(c, m, Double::sum);
+            if (!species.contains(Species.free(c))) {
+                species.add(Species.free(c));
+            }
+        });
+        if (co2.isEmpty()) {
+            return equilibrium.solve(species, totals, kelvin);
+        }
+        AcidBaseSystem carbonate = recipe.library().system(CARBONATE).orElseThrow(() -> new IndeterminateException(
+                Caveat.indeterminate("no-carbonate-system", "the library has no 'carbonate' system for a CO2 condition")));
+        for (Species x : carbonate.species()) {
+            if (!species.contains(x)) {
+                species.add(x);
+            }
+        }
+        totals.putIfAbsent(carbonate.basis(), 0.0);
+        Species dissolved = carbonate.species().get(0);
+        return equilibrium.solve(species, totals, kelvin, Double.NaN,
+                Map.of(dissolved, CarbonDioxide.dissolvedMolality(kelvin, co2.getAsDouble())));
+    }
+
     private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c) {
         double volume = solution.volumeLitres(c.kelvin());
         try {
-            EquilibriumState s = equilibrium.solve(solution.species(), solution.totals(), c.kelvin());
+            EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
             double perLitre = solution.waterKg() / volume;
             return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre, volume,
                     buffers(recipe, solution, s, perLitre));
@@ -117,11 +152,11 @@ public final class Analyzer {
         List<BufferContribution> out = new ArrayList<>();
         for (AcidBaseSystem system : recipe.library().systems()) {
             Component basis = system.basis();
-            double total = solution.totals().getOrDefault(basis, 0.0);
+            List<SpeciesAmount> forms = s.species().stream().filter(x -> x.component().equals(basis)).toList();
+            double total = forms.stream().mapToDouble(SpeciesAmount::molality).sum();   // open systems too
             if (total <= 0) {
                 continue;
             }
-            List<SpeciesAmount> forms = s.species().stream().filter(x -> x.component().equals(basis)).toList();
             double mean = forms.stream().mapToDouble(x -> x.species().protons() * x.molality()).sum() / total;
             double variance = forms.stream().mapToDouble(x -> {
                 double d = x.species().protons() - mean;
@@ -137,9 +172,15 @@ public final class Analyzer {
         return out;
     }
 
-    private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin) {
+    private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin, OptionalDouble co2) {
         Solution s = recipe.solution(moles > 0 ? Map.of(titrant, moles) : Map.of());
-        return equilibrium.solve(s.species(), s.totals(), kelvin).pH();
+        return solve(recipe, s, kelvin, co2, Map.of()).pH();
+    }
+
+    /** The CO2 state of the condition at a temperature (the first one there), closed if none matches. */
+    private static OptionalDouble co2At(Recipe recipe, double kelvin) {
+        return recipe.formulation().conditions().stream().filter(c -> Math.abs(c.kelvin() - kelvin) < 0.005)
+                .findFirst().map(Formulation.Condition::co2Pascal).orElse(OptionalDouble.empty());
     }
 
     /** Acid or base: the pH of a 0.01 mol/kg solution of the titrant alone at 25 °C, below or above neutral. */
@@ -187,7 +228,7 @@ public final class Analyzer {
         }
         double startPH;
         try {
-            startPH = pH(recipe, lines.get(0), 0, goalK);
+            startPH = pH(recipe, lines.get(0), 0, goalK, goalCo2(recipe, explicit, goalK));
         } catch (IndeterminateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. could not be computed: " + e.getMessage()));
             return lines.stream().map(t -> new TitrantResult(t, roles.get(t), 0, false, OptionalDouble.empty(),
@@ -219,7 +260,8 @@ public final class Analyzer {
                                double goalK, double adjustK, boolean explicit, List<Caveat> caveats) {
         double water = recipe.solution(Map.of()).waterKg();
         double max = MAX_TITRANT_MOLALITY * water;
-        UnivariateFunction g = n -> pH(recipe, t, n, goalK) - goalPH;
+        OptionalDouble co2 = goalCo2(recipe, explicit, goalK);
+        UnivariateFunction g = n -> pH(recipe, t, n, goalK, co2) - goalPH;
         double moles;
         try {
             double atMax = g.value(max);
@@ -241,7 +283,7 @@ public final class Analyzer {
         }
         OptionalDouble setpoint;
         try {
-            setpoint = OptionalDouble.of(explicit ? goalPH : pH(recipe, t, moles, adjustK));
+            setpoint = OptionalDouble.of(explicit ? goalPH : pH(recipe, t, moles, adjustK, OptionalDouble.empty()));
         } catch (IndeterminateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the setpoint at the adjustment temperature "
                     + "could not be computed: " + e.getMessage()));
@@ -250,9 +292,20 @@ public final class Analyzer {
         return new TitrantResult(t, role, moles, true, setpoint, adjustK, goalPH, goalK, Optional.empty());
     }
 
+    /** The meter reads a closed sample while adjusting; the target holds in the CO2 state of its condition. */
+    private static OptionalDouble goalCo2(Recipe recipe, boolean explicitAdjustment, double goalK) {
+        return explicitAdjustment ? OptionalDouble.empty() : co2At(recipe, goalK);
+    }
+
     private List<String> assumptions(Recipe recipe) {
         List<String> out = new ArrayList<>();
-        out.add("closed system, free of CO2 as made (no exchange with air)");
+        for (Formulation.Condition c : recipe.formulation().conditions()) {
+            c.co2Pascal().ifPresent(p -> out.add(String.format(Locale.ROOT, "%s: open to CO2 at %.3g kPa (Henry's law, "
+                    + "Sander 2015)", c.name(), p / 1000)));
+        }
+        out.add(recipe.formulation().conditions().stream().allMatch(c -> c.co2Pascal().isPresent())
+                ? "no condition is closed" : "conditions without a CO2 level: closed, free of CO2 as made "
+                + "(no exchange with air)");
         out.add("activity coefficients from the " + equilibrium.activityModel().name()
                 + " equation; pH on the conventional (Bates–Guggenheim) scale");
         Formulation.Basis b = recipe.formulation().basis();

@@ -34,6 +34,8 @@ import org.apache.commons.math3.exception.MathIllegalStateException;
  * <pre>
  *   β = dC_base/dpH = ln10 · (mH + mOH + Σ_C [Σ_s p_s² m_s − (Σ_s p_s m_s)²/T_C])
  * </pre>
+ * For a component open to a gas phase (CO2(aq) held by Henry's law, species f fixed) its term is
+ * ln10 · Σ_s z_s (p_s − p_f) m_s, which for carbonate is ln10 · (m_HCO3 + 4 m_CO3).
  */
 public final class Equilibrium {
 
@@ -67,8 +69,18 @@ public final class Equilibrium {
      */
     public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin,
                                   double fixedIonicStrength) {
+        return solve(species, totals, kelvin, fixedIonicStrength, Map.of());
+    }
+
+    /**
+     * Solves with some species held at a fixed molality by exchange with a gas phase (CO2(aq) under a stated
+     * CO2 partial pressure): their component is then open, its total follows from the pH, and the
+     * component's entry in {@code totals} is ignored.
+     */
+    public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin,
+                                  double fixedIonicStrength, Map<Species, Double> fixedSpecies) {
         frozen(totals, kelvin);
-        Problem p = new Problem(species, totals, kelvin);
+        Problem p = new Problem(species, totals, kelvin, fixedSpecies);
         List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
         double ionicStrength = Double.isNaN(fixedIonicStrength) ? p.strongIonicStrength() : fixedIonicStrength;
         double pH = Double.NaN;
@@ -146,7 +158,11 @@ public final class Equilibrium {
         double log10GammaH;
         double log10GammaOH;
 
-        Problem(List<Species> species, Map<Component, Double> totals, double kelvin) {
+        /** Per component: index of the species held fixed (open component), or −1 (closed). */
+        final int[] fixedIndex;
+        final double[] fixedMolality;
+
+        Problem(List<Species> species, Map<Component, Double> totals, double kelvin, Map<Species, Double> fixed) {
             this.kelvin = kelvin;
             Map<Component, Integer> index = new LinkedHashMap<>();
             for (Component c : totals.keySet()) {
@@ -193,6 +209,21 @@ public final class Equilibrium {
             kw = Math.pow(10, -Water.pKw(kelvin));
             a = Water.debyeHuckelA(kelvin);
             log10Gamma = new double[n];
+            fixedIndex = new int[components.length];
+            fixedMolality = new double[components.length];
+            java.util.Arrays.fill(fixedIndex, -1);
+            for (Map.Entry<Species, Double> e : fixed.entrySet()) {
+                int i = used.indexOf(e.getKey());
+                if (i < 0) {
+                    throw new IllegalArgumentException("fixed species " + e.getKey().name() + " is not in the problem");
+                }
+                fixedIndex[comp[i]] = i;
+                fixedMolality[comp[i]] = e.getValue();
+            }
+        }
+
+        boolean open(int component) {
+            return fixedIndex[component] >= 0;
         }
 
         List<Caveat> temperatureCaveats() {
@@ -205,7 +236,7 @@ public final class Equilibrium {
             }
             for (int i = 0; i < n; i++) {
                 TemperatureRange v = sp[i].formation().validity();
-                if (total[comp[i]] > 0 && !v.contains(kelvin)) {
+                if ((total[comp[i]] > 0 || open(comp[i])) && !v.contains(kelvin)) {
                     out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
                             "%.1f °C is outside %s, where the constants of %s are valid", t, v, sp[i].name())));
                 }
@@ -246,7 +277,9 @@ public final class Equilibrium {
                 sum[comp[i]] += w[i];
             }
             for (int i = 0; i < n; i++) {
-                m[i] = total[comp[i]] * w[i] / sum[comp[i]];
+                int j = comp[i];
+                // closed: the component's total is shared out; open: scaled from the species held fixed
+                m[i] = open(j) ? fixedMolality[j] * w[i] / w[fixedIndex[j]] : total[j] * w[i] / sum[j];
             }
             return m;
         }
@@ -289,20 +322,30 @@ public final class Equilibrium {
             double[] m = molalities(pH);
             double mH = Math.pow(10, -pH - log10GammaH);
             double mOH = kw * Math.pow(10, pH - log10GammaOH);
+            double[] sum = new double[components.length];
+            for (int i = 0; i < n; i++) {
+                sum[comp[i]] += m[i];
+            }
             double[] meanP = new double[components.length];
             double particles = 0;
             List<SpeciesAmount> out = new ArrayList<>();
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                meanP[j] += total[j] > 0 ? protons[i] * m[i] / total[j] : 0;
+                meanP[j] += sum[j] > 0 ? protons[i] * m[i] / sum[j] : 0;
                 particles += m[i];
                 out.add(new SpeciesAmount(sp[i], components[j], m[i], Math.pow(10, log10Gamma[i]),
-                        total[j] > 0 ? m[i] / total[j] : 0));
+                        sum[j] > 0 ? m[i] / sum[j] : 0));
             }
-            double variance = 0;   // Σ_C Σ_s m_s (p_s − p̄_C)², the centred form of the sum above
+            // closed: Σ m_s (p_s − p̄)²; open (fixed species f): Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves
+            double variance = 0;
             for (int i = 0; i < n; i++) {
-                double d = protons[i] - meanP[comp[i]];
-                variance += m[i] * d * d;
+                int j = comp[i];
+                if (open(j)) {
+                    variance += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                } else {
+                    double d = protons[i] - meanP[j];
+                    variance += m[i] * d * d;
+                }
             }
             double beta = Thermo.LN10 * (mH + mOH + variance);
             return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,

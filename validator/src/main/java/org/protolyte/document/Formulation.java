@@ -54,7 +54,17 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
         }
     }
 
-    /** A named state of the solution; {@code implicit} when the reader added it. */
-    public record Condition(String name, double kelvin, boolean implicit, String pointer) {
+    /**
+     * A named state of the solution; {@code implicit} when the reader added it. {@code co2Pascal}: the CO2
+     * partial pressure of the gas phase it is open to, absent for a closed solution.
+     */
+    public record Condition(String name, double kelvin, boolean implicit, String pointer, OptionalDouble co2Pascal) {
+        public Condition(String name, double kelvin, boolean implicit, String pointer) {
+            this(name, kelvin, implicit, pointer, OptionalDouble.empty());
+        }
+
+        public Condition withCo2(OptionalDouble pascal) {
+            return new Condition(name, kelvin, implicit, pointer, pascal);
+        }
     }
 }

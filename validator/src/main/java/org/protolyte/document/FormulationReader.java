@@ -21,6 +21,10 @@ public final class FormulationReader {
 
     public static final String SCHEMA = "formulation.schema.json";
     static final double DEFAULT_TEMPERATURE = 298.15;
+    /** CO2 in dry air, mole fraction: about 420 ppm (NOAA global mean for 2023, from memory). */
+    public static final double AIR_CO2_FRACTION = 4.2e-4;
+    /** Pa: the gas pressure assumed where a condition states a CO2 fraction but no pressure. */
+    public static final double STANDARD_PRESSURE = 101325;
 
     private final SchemaCatalog schemas;
 
@@ -160,6 +164,32 @@ public final class FormulationReader {
             return new Formulation.Line(i, substance, amount, stock, adjust, density, p);
         }
 
+        /** CO2 partial pressure in Pa: "air", a fraction of the (stated or standard) pressure, or a pressure. */
+        private OptionalDouble co2(JsonNode c, String p) {
+            JsonNode co2 = c.get("co2");
+            if (co2 == null) {
+                return OptionalDouble.empty();
+            }
+            double pressure = STANDARD_PRESSURE;
+            if (c.has("pressure")) {
+                Optional<Quantity> q = positive(c.get("pressure"), p + "/pressure", "a pressure", Dimension.PRESSURE);
+                pressure = q.map(Quantity::base).orElse(pressure);
+            }
+            if (co2.isString() && co2.asString().equals("air")) {
+                return OptionalDouble.of(AIR_CO2_FRACTION * pressure);
+            }
+            Optional<Quantity> q = quantity(co2, p + "/co2", "a CO2 level", Dimension.GAS_FRACTION, Dimension.PRESSURE);
+            if (q.isEmpty()) {
+                return OptionalDouble.empty();
+            }
+            double v = q.get().dimension() == Dimension.GAS_FRACTION ? q.get().base() * pressure : q.get().base();
+            if (!(v >= 0) || q.get().dimension() == Dimension.GAS_FRACTION && q.get().base() > 1) {
+                problems.add(doc.problem(p + "/co2", "a CO2 level must lie between 0 and 100 % of the gas phase"));
+                return OptionalDouble.empty();
+            }
+            return OptionalDouble.of(v);
+        }
+
         private Formulation.PhTarget target(JsonNode n) {
             String p = "/targets/pH";
             double min = Double.NEGATIVE_INFINITY;
@@ -193,7 +223,7 @@ public final class FormulationReader {
                     problems.add(doc.problem(p + "/name", "condition name '" + name + "' is used twice"));
                 }
                 OptionalDouble t = temperature(n.get(i).get("temperature"), p + "/temperature");
-                out.add(new Formulation.Condition(name, t.orElse(DEFAULT_TEMPERATURE), false, p));
+                out.add(new Formulation.Condition(name, t.orElse(DEFAULT_TEMPERATURE), false, p, co2(n.get(i), p)));
             }
             if (out.isEmpty()) {
                 out.add(new Formulation.Condition("use", DEFAULT_TEMPERATURE, true, ""));
