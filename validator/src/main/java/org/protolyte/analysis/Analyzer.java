@@ -24,6 +24,7 @@ import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
+import org.protolyte.document.FormulationReader;
 import org.protolyte.recipe.DensityModel;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
@@ -60,8 +61,149 @@ public final class Analyzer {
         for (Formulation.Condition c : recipe.formulation().conditions()) {
             results.add(condition(recipe, solution, c));
         }
+        titrants.replaceAll(t -> explicitSetpointForTarget(recipe, t));
         return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, results));
+                sensitivities(recipe, doses, results), drifts(recipe, results),
+                titratableAcidity(recipe, solution));
+    }
+
+    /** Where adjustTo states its own pH and the target is missed: the setpoint that would meet the target. */
+    private TitrantResult explicitSetpointForTarget(Recipe recipe, TitrantResult t) {
+        Formulation f = recipe.formulation();
+        boolean explicit = t.ingredient().line().adjustTo().map(a -> a.pH().isPresent()).orElse(false);
+        if (!explicit || !t.used() || t.unreachable().isPresent() || f.pHTarget().isEmpty()
+                || !Double.isFinite(f.pHTarget().get().midpoint())) {
+            return t;
+        }
+        Formulation.PhTarget target = f.pHTarget().get();
+        try {
+            double atTarget = pH(recipe, t.ingredient(), t.moles(), target.kelvin(), co2At(recipe, target.kelvin()));
+            if (target.contains(atTarget)) {
+                return t;
+            }
+            double goal = target.midpoint();
+            double max = MAX_TITRANT_MOLALITY * recipe.solution(Map.of()).waterKg();
+            UnivariateFunction g = n -> pH(recipe, t.ingredient(), n, target.kelvin(), co2At(recipe, target.kelvin()))
+                    - goal;
+            double n = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty()));
+        } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
+            return t;   // no setpoint can be stood behind; the pH finding stands on its own
+        }
+    }
+
+    /** pH change between every pair of conditions, in document order, with its main cause. */
+    private static List<Drift> drifts(Recipe recipe, List<ConditionResult> results) {
+        List<Drift> out = new ArrayList<>();
+        for (int i = 0; i < results.size(); i++) {
+            for (int j = i + 1; j < results.size(); j++) {
+                ConditionResult a = results.get(i);
+                ConditionResult b = results.get(j);
+                if (!a.determinate() || !b.determinate()) {
+                    continue;
+                }
+                double ta = a.condition().kelvin();
+                double tb = b.condition().kelvin();
+                double mid = (ta + tb) / 2;
+                Optional<String> cause = Optional.empty();
+                double slope = 0;
+                double share = 0;
+                double weight = -1;
+                for (BufferContribution bc : a.buffers()) {
+                    AcidBaseSystem sys = recipe.library().system(bc.system()).orElseThrow();
+                    double nearest = bc.nearestPKa();
+                    // the step whose pKa is nearest the pH carries the buffering; its slope at the mean temperature
+                    DissociationStepSlope d = DissociationStepSlope.of(sys, nearest, ta, mid);
+                    if (bc.share() * Math.abs(d.slope()) > weight) {
+                        weight = bc.share() * Math.abs(d.slope());
+                        cause = Optional.of(bc.system());
+                        slope = d.slope();
+                        share = bc.share();
+                    }
+                }
+                OptionalDouble ca = a.condition().co2Pascal();
+                OptionalDouble cb = b.condition().co2Pascal();
+                Optional<String> co2 = ca.equals(cb) ? Optional.empty()
+                        : Optional.of("CO2 " + co2Text(ca) + " → " + co2Text(cb));
+                out.add(new Drift(a.condition().name(), b.condition().name(), ta - Thermo.KELVIN_OFFSET,
+                        tb - Thermo.KELVIN_OFFSET, b.state().orElseThrow().pH() - a.state().orElseThrow().pH(), cause,
+                        slope, share, co2));
+            }
+        }
+        return out;
+    }
+
+    private static String co2Text(OptionalDouble pascal) {
+        return pascal.isPresent() ? String.format(Locale.ROOT, "%.3g kPa", pascal.getAsDouble() / 1000) : "closed";
+    }
+
+    /** Strong base (or acid, negative) per litre and per dose to bring the recipe to pH 7.4 at 37 °C, closed. */
+    private Optional<TitratableAcidity> titratableAcidity(Recipe recipe, Solution solution) {
+        try {
+            double perLitre = load(recipe, solution, TitratableAcidity.BODY_KELVIN, OptionalDouble.empty(),
+                    TitratableAcidity.PHYSIOLOGICAL_PH);
+            OptionalDouble perDose = recipe.formulation().doseLitres().isPresent()
+                    ? OptionalDouble.of(perLitre * recipe.formulation().doseLitres().get()) : OptionalDouble.empty();
+            return Optional.of(new TitratableAcidity(perLitre, perDose));
+        } catch (IndeterminateException | MathIllegalStateException e) {
+            return Optional.empty();
+        }
+    }
+
+    /**
+     * mmol per litre of solution of strong base (positive) or strong acid (negative) that brings the pH at a
+     * temperature to {@code goal}: Brent's method on the added sodium or chloride (the strong ions of NaOH, HCl).
+     */
+    private double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
+        double start = solve(recipe, solution, kelvin, co2, Map.of()).pH();
+        if (Math.abs(start - goal) < 1e-9) {
+            return 0;
+        }
+        boolean base = start < goal;
+        Component ion = recipe.library().ion(base ? "Na+" : "Cl-").orElseThrow();
+        UnivariateFunction f = x -> solve(recipe, solution, kelvin, co2, Map.of(ion, x)).pH() - goal;
+        double molal = new BrentSolver(1e-13, 1e-15, 1e-10).solve(1000, f, 0, MAX_TITRANT_MOLALITY);
+        double mmolPerLitre = molal * solution.waterKg() / solution.volumeLitres(kelvin) * 1000;
+        return base ? mmolPerLitre : -mmolPerLitre;
+    }
+
+    private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH) {
+        Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
+        if (target.isEmpty()) {
+            return Optional.empty();
+        }
+        try {
+            double min = target.get().min();
+            double max = target.get().max();
+            OptionalDouble acid = Double.isInfinite(min) ? OptionalDouble.empty()
+                    : OptionalDouble.of(pH <= min ? 0 : -load(recipe, solution, c.kelvin(), c.co2Pascal(), min));
+            OptionalDouble base = Double.isInfinite(max) ? OptionalDouble.empty()
+                    : OptionalDouble.of(pH >= max ? 0 : load(recipe, solution, c.kelvin(), c.co2Pascal(), max));
+            return Optional.of(new Loads(acid, base));
+        } catch (IndeterminateException | MathIllegalStateException e) {
+            return Optional.empty();
+        }
+    }
+
+    /** For a CO2 condition at the target's temperature: the CO2 partial pressure giving the target's midpoint. */
+    private OptionalDouble co2ForTarget(Recipe recipe, Solution solution, Formulation.Condition c) {
+        Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
+        if (c.co2Pascal().isEmpty() || target.isEmpty() || Math.abs(target.get().kelvin() - c.kelvin()) > 0.005
+                || !Double.isFinite(target.get().midpoint())) {
+            return OptionalDouble.empty();
+        }
+        double goal = target.get().midpoint();
+        // pH falls as CO2 rises; search log10 of the partial pressure between 1 Pa and 50 kPa
+        UnivariateFunction f = lg -> solve(recipe, solution, c.kelvin(), OptionalDouble.of(Math.pow(10, lg)), Map.of())
+                .pH() - goal;
+        try {
+            if (f.value(0) < 0 || f.value(Math.log10(5e4)) > 0) {
+                return OptionalDouble.empty();
+            }
+            return OptionalDouble.of(Math.pow(10, new BrentSolver(1e-12, 1e-9).solve(200, f, 0, Math.log10(5e4))));
+        } catch (IndeterminateException | MathIllegalStateException e) {
+            return OptionalDouble.empty();
+        }
     }
 
     /** dpH at the target's temperature per +1 % of each weighed component, titrants held at their q.s. */
@@ -136,10 +278,15 @@ public final class Analyzer {
         try {
             EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
             double perLitre = solution.waterKg() / volume;
+            boolean determinate = s.determinate();
             return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre, volume,
-                    buffers(recipe, solution, s, perLitre));
+                    buffers(recipe, solution, s, perLitre),
+                    determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
+                    determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
+                    determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty());
         } catch (IndeterminateException e) {
-            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume, List.of());
+            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume, List.of(),
+                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty());
         }
     }
 
@@ -170,6 +317,19 @@ public final class Analyzer {
         }
         out.sort(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre).reversed());
         return out;
+    }
+
+    /** A closed condition's pH once equilibrated with room air (CO2 at its fraction of standard pressure). */
+    private OptionalDouble inAir(Recipe recipe, Solution solution, Formulation.Condition c) {
+        if (c.co2Pascal().isPresent()) {
+            return OptionalDouble.empty();
+        }
+        try {
+            double air = FormulationReader.AIR_CO2_FRACTION * FormulationReader.STANDARD_PRESSURE;
+            return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air), Map.of()).pH());
+        } catch (IndeterminateException e) {
+            return OptionalDouble.empty();
+        }
     }
 
     private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin, OptionalDouble co2) {

@@ -2,6 +2,7 @@ package org.protolyte.analysis;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.EquilibriumState;
@@ -13,10 +14,15 @@ import org.protolyte.document.Formulation;
  *
  * @param bufferCapacityPerLitre mol per litre of solution per pH unit, at the condition's temperature
  * @param buffers                each acid–base system's part of it, largest first
+ * @param pHInAir                for a closed condition: the pH after equilibrating with room air
+ * @param loads                  strong acid and base it takes before leaving the pH target
+ * @param co2ForTarget           for a CO2 condition at the target temperature: the CO2 partial pressure (Pa)
+ *                               at which the pH would be the target's midpoint
  */
 public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
                               List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres,
-                              List<BufferContribution> buffers) {
+                              List<BufferContribution> buffers, OptionalDouble pHInAir, Optional<Loads> loads,
+                              OptionalDouble co2ForTarget) {
 
     public ConditionResult {
         caveats = List.copyOf(caveats);

@@ -1,6 +1,7 @@
 package org.protolyte.analysis;
 
 import java.util.List;
+import java.util.Optional;
 
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.recipe.Recipe;
@@ -12,9 +13,11 @@ import org.protolyte.recipe.Solution;
  */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
-                                  List<Sensitivity> targetSensitivities) {
+                                  List<Sensitivity> targetSensitivities, List<Drift> drifts,
+                                  Optional<TitratableAcidity> titratableAcidity) {
 
     public FormulationAnalysis {
+        drifts = List.copyOf(drifts);
         targetSensitivities = List.copyOf(targetSensitivities);
         conditions = List.copyOf(conditions);
         titrants = List.copyOf(titrants);

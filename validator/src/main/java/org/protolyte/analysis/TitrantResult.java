@@ -11,10 +11,22 @@ import org.protolyte.recipe.Ingredient;
  * @param moles         mol per basis (0 for the one of an acid/base pair that is not needed)
  * @param setpointPH    the pH the meter must read at the adjustment temperature
  * @param unreachable   why the goal cannot be met, with the pH the titrant can reach, if so
+ * @param setpointForTarget where adjustTo states its own pH: the setpoint that would have met the pH target
  */
 public record TitrantResult(Ingredient ingredient, Role role, double moles, boolean used,
                             OptionalDouble setpointPH, double adjustKelvin, double goalPH, double goalKelvin,
-                            Optional<Unreachable> unreachable) {
+                            Optional<Unreachable> unreachable, OptionalDouble setpointForTarget) {
+
+    public TitrantResult(Ingredient ingredient, Role role, double moles, boolean used, OptionalDouble setpointPH,
+                         double adjustKelvin, double goalPH, double goalKelvin, Optional<Unreachable> unreachable) {
+        this(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin, unreachable,
+                OptionalDouble.empty());
+    }
+
+    public TitrantResult withSetpointForTarget(double pH) {
+        return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
+                unreachable, OptionalDouble.of(pH));
+    }
 
     public enum Role { ACID, BASE }
 

@@ -12,7 +12,7 @@ import org.protolyte.units.Quantity;
  */
 public record Formulation(SourceDocument document, String id, Optional<String> title, Optional<String> revision,
                           Optional<String> intendedUse, Basis basis, List<Line> components,
-                          Optional<PhTarget> pHTarget, List<Condition> conditions) {
+                          Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres) {
 
     public Formulation {
         components = List.copyOf(components);

@@ -68,8 +68,13 @@ public final class FormulationReader {
             if (!problems.isEmpty()) {
                 throw new DocumentException(problems);
             }
+            Optional<Double> dose = root.has("dose") ? positive(root.get("dose").get("volume"), "/dose/volume",
+                    "a dose volume", Dimension.VOLUME).map(Quantity::base) : Optional.empty();
+            if (!problems.isEmpty()) {
+                throw new DocumentException(problems);
+            }
             return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
-                    text(root, "intendedUse"), basis, lines, target, conditions);
+                    text(root, "intendedUse"), basis, lines, target, conditions, dose);
         }
 
         private static Optional<String> text(JsonNode n, String field) {

@@ -103,6 +103,18 @@ public final class JsonRenderer {
         for (TitrantResult t : a.titrants()) {
             titrants.add(titrant(t, f));
         }
+        ArrayNode drifts = n.putArray("drifts");
+        for (var d : a.drifts()) {
+            ObjectNode o = drifts.addObject().put("from", d.from()).put("to", d.to())
+                    .put("change", Numbers.decimals(d.change(), 3));
+            d.system().ifPresent(x -> o.put("mainCause", x).put("dpKadT", Numbers.significant(d.dpKadT(), 3))
+                    .put("share", Numbers.significant(d.share(), 3)));
+            d.co2Change().ifPresent(x -> o.put("co2Change", x));
+        }
+        a.titratableAcidity().ifPresent(t -> {
+            ObjectNode o = n.putObject("titratableAcidity").put("mmolPerLitre", Numbers.significant(t.mmolPerLitre(), 4));
+            t.mmolPerDose().ifPresent(x -> o.put("mmolPerDose", Numbers.significant(x, 4)));
+        });
         ArrayNode sens = n.putArray("targetSensitivities");
         a.targetSensitivities().forEach(x -> sens.addObject().put("substance", x.substance()).put("pointer", x.pointer())
                 .put("dpHPerPercent", Numbers.significant(x.dpHPerPercent(), 3)));
@@ -116,6 +128,7 @@ public final class JsonRenderer {
         o.put("implicit", c.condition().implicit());
         o.put("temperature", Numbers.decimals(Numbers.celsius(c.condition().kelvin()), 2));
         o.put("determinate", c.determinate());
+        c.condition().co2Pascal().ifPresent(p -> o.put("co2", Numbers.significant(p / 1000, 4)));
         if (c.determinate()) {
             EquilibriumState s = c.state().orElseThrow();
             o.put("pH", Numbers.decimals(s.pH(), 3));
@@ -125,6 +138,13 @@ public final class JsonRenderer {
             }
             o.put("ionicStrength", Numbers.significant(s.ionicStrength(), 4));
             o.put("pKw", Numbers.decimals(s.pKw(), 3));
+            c.pHInAir().ifPresent(x -> o.put("pHInAir", Numbers.decimals(x, 3)));
+            c.co2ForTarget().ifPresent(x -> o.put("co2ForTarget", Numbers.significant(x / 1000, 3)));
+            c.loads().ifPresent(l -> {
+                ObjectNode lo = o.putObject("loads");
+                l.acidToLeaveTarget().ifPresent(x -> lo.put("acid", Numbers.significant(x, 3)));
+                l.baseToLeaveTarget().ifPresent(x -> lo.put("base", Numbers.significant(x, 3)));
+            });
             ArrayNode species = o.putArray("species");
             for (SpeciesAmount sp : s.species()) {
                 if (!systems.isSystem(sp.component())) {

@@ -113,10 +113,39 @@ public final class TextRenderer {
                         Numbers.celsius(c.condition().kelvin()), "—", "—", "—"));
             }
         }
+        for (var d : a.drifts()) {
+            String cause = d.co2Change().map(x -> ", mostly the change of " + x).orElseGet(() -> d.system()
+                    .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", x, d.dpKadT())).orElse(""));
+            b.append(String.format(Locale.ROOT, "  drift %s → %s: %+.2f pH%s%n", d.from(), d.to(), d.change(), cause));
+        }
+        for (ConditionResult c : a.conditions()) {
+            List<String> extra = new ArrayList<>();
+            if (c.determinate() && c.pHInAir().isPresent()) {
+                extra.add(String.format(Locale.ROOT, "in room air pH %.2f", c.pHInAir().getAsDouble()));
+            }
+            c.loads().ifPresent(l -> extra.add("leaves the target after " + load(l.acidToLeaveTarget(), "acid") + " or "
+                    + load(l.baseToLeaveTarget(), "base")));
+            if (c.co2ForTarget().isPresent()) {
+                extra.add(String.format(Locale.ROOT, "CO2 for the target's midpoint: %.3g kPa",
+                        c.co2ForTarget().getAsDouble() / 1000));
+            }
+            if (!extra.isEmpty()) {
+                b.append("  ").append(c.condition().name()).append(": ").append(String.join("; ", extra)).append(NL);
+            }
+        }
+        a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
+                "  titratable %s to pH 7.4 at 37 °C: %.3g mmol/L%s%n", t.mmolPerLitre() >= 0 ? "acidity" : "alkalinity",
+                Math.abs(t.mmolPerLitre()), t.mmolPerDose().isPresent() ? String.format(Locale.ROOT, " (%.3g mmol per dose)",
+                        Math.abs(t.mmolPerDose().getAsDouble())) : "")));
         if (a.conditions().stream().anyMatch(c -> c.condition().implicit())) {
             b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
         }
         b.append("  assumed: ").append(String.join("; ", a.assumptions())).append(NL);
+    }
+
+    private static String load(java.util.OptionalDouble mmol, String what) {
+        return mmol.isPresent() ? String.format(Locale.ROOT, "%.3g mmol/L of strong %s", mmol.getAsDouble(), what)
+                : "(no limit) " + what;
     }
 
     /** The main forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %". */

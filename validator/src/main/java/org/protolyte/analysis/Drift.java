@@ -1,0 +1,13 @@
+package org.protolyte.analysis;
+
+import java.util.Optional;
+
+/**
+ * The pH change between two conditions and what causes most of it: the acid–base system whose pKa moves
+ * most with temperature, weighted by its share of the buffering, with its dpKa/dT (per kelvin). Where no
+ * system buffers, the cause is water's own ionisation. Where the two conditions differ in CO2, that
+ * exchange is named in {@code co2Change}: it usually moves the pH more than temperature does.
+ */
+public record Drift(String from, String to, double fromCelsius, double toCelsius, double change,
+                    Optional<String> system, double dpKadT, double share, Optional<String> co2Change) {
+}
