@@ -86,7 +86,8 @@ public final class Analyzer {
             UnivariateFunction g = n -> pH(recipe, t.ingredient(), n, target.kelvin(), co2At(recipe, target.kelvin()))
                     - goal;
             double n = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
-            return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty()));
+            double part = t.ingredient().line().adjustTo().orElseThrow().atVolume();
+            return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty(), part));
         } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
             return t;   // no setpoint can be stood behind; the pH finding stands on its own
         }
@@ -290,30 +291,22 @@ public final class Analyzer {
         }
     }
 
-    /**
-     * Each system's term of β = ln10·Σ_C Σ_s m_s (p_s − p̄_C)², the same sum the chemistry reports, split by
-     * component; and the pKa(T) of the system's step nearest the pH.
-     */
+    /** Each system's term of β as the chemistry reports it, and its pKa(T) nearest the pH. */
     private static List<BufferContribution> buffers(Recipe recipe, Solution solution, EquilibriumState s,
                                                     double perLitre) {
         List<BufferContribution> out = new ArrayList<>();
         for (AcidBaseSystem system : recipe.library().systems()) {
             Component basis = system.basis();
-            List<SpeciesAmount> forms = s.species().stream().filter(x -> x.component().equals(basis)).toList();
-            double total = forms.stream().mapToDouble(SpeciesAmount::molality).sum();   // open systems too
+            double total = s.species().stream().filter(x -> x.component().equals(basis))
+                    .mapToDouble(SpeciesAmount::molality).sum();   // open systems too
             if (total <= 0) {
                 continue;
             }
-            double mean = forms.stream().mapToDouble(x -> x.species().protons() * x.molality()).sum() / total;
-            double variance = forms.stream().mapToDouble(x -> {
-                double d = x.species().protons() - mean;
-                return x.molality() * d * d;
-            }).sum();
-            double beta = Thermo.LN10 * variance * perLitre;
+            double beta = s.componentBufferCapacity().getOrDefault(basis, 0.0) * perLitre;
             double nearest = system.steps().stream().mapToDouble(st -> st.pKa(s.kelvin()))
                     .boxed().min(java.util.Comparator.comparingDouble(pk -> Math.abs(pk - s.pH()))).orElseThrow();
             out.add(new BufferContribution(system.name(), beta, beta / (s.bufferCapacity() * perLitre), nearest,
-                    total * solution.waterKg()));
+                    total * solution.waterKg(), s.openComponents().contains(basis)));
         }
         out.sort(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre).reversed());
         return out;
@@ -333,7 +326,13 @@ public final class Analyzer {
     }
 
     private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin, OptionalDouble co2) {
-        Solution s = recipe.solution(moles > 0 ? Map.of(titrant, moles) : Map.of());
+        return pH(recipe, titrant, moles, kelvin, co2, 1);
+    }
+
+    /** pH with {@code moles} of titrant, at a fraction of the final volume (1: made up). */
+    private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin, OptionalDouble co2,
+                      double volumeFraction) {
+        Solution s = recipe.solution(moles > 0 ? Map.of(titrant, moles) : Map.of(), volumeFraction);
         return solve(recipe, s, kelvin, co2, Map.of()).pH();
     }
 
@@ -366,6 +365,7 @@ public final class Analyzer {
         }
         Formulation.Adjustment adj = lines.get(0).line().adjustTo().orElseThrow();
         double adjustK = adj.kelvin();
+        double part = adj.atVolume();
         double goalPH;
         double goalK;
         boolean explicit = adj.pH().isPresent();
@@ -388,7 +388,7 @@ public final class Analyzer {
         }
         double startPH;
         try {
-            startPH = pH(recipe, lines.get(0), 0, goalK, goalCo2(recipe, explicit, goalK));
+            startPH = pH(recipe, lines.get(0), 0, goalK, goalCo2(recipe, explicit, goalK), explicit ? part : 1);
         } catch (IndeterminateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. could not be computed: " + e.getMessage()));
             return lines.stream().map(t -> new TitrantResult(t, roles.get(t), 0, false, OptionalDouble.empty(),
@@ -410,18 +410,24 @@ public final class Analyzer {
                 out.add(new TitrantResult(t, roles.get(t), 0, false, OptionalDouble.empty(), adjustK, goalPH, goalK,
                         why));
             } else {
-                out.add(dose(recipe, t, needed, startPH, goalPH, goalK, adjustK, explicit, caveats));
+                out.add(dose(recipe, t, needed, startPH, goalPH, goalK, adjustK, explicit, part, caveats));
             }
         }
         return out;
     }
 
+    /**
+     * The q.s. amount. An explicit adjustTo.pH is what the meter reads at the adjustment temperature and
+     * part volume; otherwise the target must hold after making up, at its temperature and CO2 state, and the
+     * setpoint is the meter reading at part volume.
+     */
     private TitrantResult dose(Recipe recipe, Ingredient t, TitrantResult.Role role, double startPH, double goalPH,
-                               double goalK, double adjustK, boolean explicit, List<Caveat> caveats) {
+                               double goalK, double adjustK, boolean explicit, double part, List<Caveat> caveats) {
         double water = recipe.solution(Map.of()).waterKg();
         double max = MAX_TITRANT_MOLALITY * water;
         OptionalDouble co2 = goalCo2(recipe, explicit, goalK);
-        UnivariateFunction g = n -> pH(recipe, t, n, goalK, co2) - goalPH;
+        double goalVolume = explicit ? part : 1;
+        UnivariateFunction g = n -> pH(recipe, t, n, goalK, co2, goalVolume) - goalPH;
         double moles;
         try {
             double atMax = g.value(max);
@@ -443,13 +449,23 @@ public final class Analyzer {
         }
         OptionalDouble setpoint;
         try {
-            setpoint = OptionalDouble.of(explicit ? goalPH : pH(recipe, t, moles, adjustK, OptionalDouble.empty()));
+            setpoint = OptionalDouble.of(explicit ? goalPH
+                    : pH(recipe, t, moles, adjustK, OptionalDouble.empty(), part));
         } catch (IndeterminateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the setpoint at the adjustment temperature "
                     + "could not be computed: " + e.getMessage()));
             setpoint = OptionalDouble.empty();
         }
-        return new TitrantResult(t, role, moles, true, setpoint, adjustK, goalPH, goalK, Optional.empty());
+        TitrantResult result = new TitrantResult(t, role, moles, true, setpoint, adjustK, goalPH, goalK, Optional.empty());
+        if (part < 1) {
+            try {
+                result = result.withMakingUp(part, pH(recipe, t, moles, adjustK, OptionalDouble.empty(), 1));
+            } catch (IndeterminateException e) {
+                caveats.add(Caveat.indeterminate("qs-indeterminate", "the pH after making up could not be computed: "
+                        + e.getMessage()));
+            }
+        }
+        return result;
     }
 
     /** The meter reads a closed sample while adjusting; the target holds in the CO2 state of its condition. */

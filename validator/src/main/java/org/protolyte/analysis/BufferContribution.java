@@ -6,7 +6,9 @@ package org.protolyte.analysis;
  *
  * @param bufferCapacityPerLitre mol per litre of solution per pH unit
  * @param molesPerBasis          the system's total amount in the recipe, mol per basis
+ * @param open                   exchanging with a gas phase (bicarbonate under CO2): it then buffers well
+ *                               above its pKa, and the usual "within one unit" rule does not apply
  */
 public record BufferContribution(String system, double bufferCapacityPerLitre, double share, double nearestPKa,
-                                 double molesPerBasis) {
+                                 double molesPerBasis, boolean open) {
 }

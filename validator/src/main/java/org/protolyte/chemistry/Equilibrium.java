@@ -337,19 +337,29 @@ public final class Equilibrium {
                         sum[j] > 0 ? m[i] / sum[j] : 0));
             }
             // closed: Σ m_s (p_s − p̄)²; open (fixed species f): Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves
-            double variance = 0;
+            double[] term = new double[components.length];
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
                 if (open(j)) {
-                    variance += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                    term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
                 } else {
                     double d = protons[i] - meanP[j];
-                    variance += m[i] * d * d;
+                    term[j] += m[i] * d * d;
+                }
+            }
+            double variance = 0;
+            Map<Component, Double> byComponent = new LinkedHashMap<>();
+            java.util.Set<Component> openSet = new java.util.HashSet<>();
+            for (int j = 0; j < components.length; j++) {
+                variance += term[j];
+                byComponent.put(components[j], Thermo.LN10 * term[j]);
+                if (open(j)) {
+                    openSet.add(components[j]);
                 }
             }
             double beta = Thermo.LN10 * (mH + mOH + variance);
             return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,
-                    particles + mH + mOH, out, caveats);
+                    particles + mH + mOH, out, caveats, byComponent, openSet);
         }
     }
 }

@@ -39,8 +39,11 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
     public record Stock(Quantity concentration, Optional<Double> density, String pointer) {
     }
 
-    /** q.s. to a pH at a temperature; without a pH the document's pH target is meant. */
-    public record Adjustment(OptionalDouble pH, double kelvin, String pointer) {
+    /**
+     * q.s. to a pH at a temperature; without a pH the document's pH target is meant. {@code atVolume}: the
+     * fraction of the final volume at which the meter is read before making up to volume (1 = at volume).
+     */
+    public record Adjustment(OptionalDouble pH, double kelvin, String pointer, double atVolume) {
     }
 
     /** pH between min and max (value ± tolerance is stored as such) at a temperature. */

@@ -21,8 +21,8 @@ public final class FormulationReader {
 
     public static final String SCHEMA = "formulation.schema.json";
     static final double DEFAULT_TEMPERATURE = 298.15;
-    /** CO2 in dry air, mole fraction: about 420 ppm (NOAA global mean for 2023, from memory). */
-    public static final double AIR_CO2_FRACTION = 4.2e-4;
+    /** CO2 in dry air, mole fraction: 419.3 ppm, the NOAA global mean for 2023 (NOAA release of 2024, read). */
+    public static final double AIR_CO2_FRACTION = 4.193e-4;
     /** Pa: the gas pressure assumed where a condition states a CO2 fraction but no pressure. */
     public static final double STANDARD_PRESSURE = 101325;
 
@@ -49,6 +49,8 @@ public final class FormulationReader {
     private static final class Parse {
         private final SourceDocument doc;
         private final List<Problem> problems = new ArrayList<>();
+        private boolean basisIsFinalVolume;
+        private double finalLitres;
 
         Parse(SourceDocument doc) {
             this.doc = doc;
@@ -57,6 +59,8 @@ public final class FormulationReader {
         Formulation formulation() {
             JsonNode root = doc.root();
             Formulation.Basis basis = basis(root.get("basis"));
+            basisIsFinalVolume = basis.finalVolume();
+            finalLitres = basis.amount();
             List<Formulation.Line> lines = new ArrayList<>();
             JsonNode comps = root.get("components");
             for (int i = 0; i < comps.size(); i++) {
@@ -161,7 +165,24 @@ public final class FormulationReader {
                 JsonNode a = n.get("adjustTo");
                 OptionalDouble t = temperature(a.get("temperature"), p + "/adjustTo/temperature");
                 OptionalDouble pH = a.has("pH") ? OptionalDouble.of(a.get("pH").asDouble()) : OptionalDouble.empty();
-                adjust = Optional.of(new Formulation.Adjustment(pH, t.orElse(DEFAULT_TEMPERATURE), p + "/adjustTo"));
+                double atVolume = 1;
+                if (a.has("atVolume")) {
+                    JsonNode v = a.get("atVolume");
+                    String at = p + "/adjustTo/atVolume";
+                    if (!basisIsFinalVolume) {
+                        problems.add(doc.problem(at, "atVolume needs a finalVolume basis: there is no volume to make up to"));
+                    } else if (v.isNumber()) {
+                        atVolume = v.asDouble();
+                    } else {
+                        atVolume = positive(v, at, "a part volume", Dimension.VOLUME).map(q -> q.base() / finalLitres)
+                                .orElse(1.0);
+                        if (atVolume > 1) {
+                            problems.add(doc.problem(at, "the part volume is larger than the final volume"));
+                        }
+                    }
+                }
+                adjust = Optional.of(new Formulation.Adjustment(pH, t.orElse(DEFAULT_TEMPERATURE), p + "/adjustTo",
+                        atVolume));
             }
             Optional<Double> density = n.has("density")
                     ? positive(n.get("density"), p + "/density", "a density", Dimension.DENSITY).map(Quantity::base)

@@ -36,8 +36,16 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
 
     /** Makes the solution with the given moles (per basis) of each titrant; absent titrants are zero. */
     public Solution solution(Map<Ingredient, Double> titrantMoles) {
+        return solution(titrantMoles, 1);
+    }
+
+    /**
+     * The solution at a fraction of its final volume, before making up (finalVolume basis): the same solutes
+     * in less water, as the meter sees it when the pH is adjusted at part volume.
+     */
+    public Solution solution(Map<Ingredient, Double> titrantMoles, double volumeFraction) {
         boolean finalVolume = formulation.basis().finalVolume();
-        double basis = formulation.basis().amount();
+        double basis = formulation.basis().amount() * (finalVolume ? volumeFraction : 1);
         double rho = DensityModel.waterDensity(makeUpKelvin);
         Map<Ingredient, Double> fixed = new LinkedHashMap<>();
         double fixedVolume = 0;       // L of solute apparent volume from fixed amounts

@@ -183,7 +183,10 @@ public final class JsonRenderer {
             ObjectNode sp = o.putObject("setpoint");
             sp.put("pH", Numbers.decimals(t.setpointPH().getAsDouble(), 2));
             sp.put("temperature", Numbers.decimals(Numbers.celsius(t.adjustKelvin()), 2));
+            sp.put("atVolume", Numbers.significant(t.atVolume(), 4));
         }
+        t.pHAfterMakingUp().ifPresent(x -> o.put("pHAfterMakingUp", Numbers.decimals(x, 3)));
+        t.setpointForTarget().ifPresent(x -> o.put("setpointForTarget", Numbers.decimals(x, 2)));
         t.unreachable().ifPresent(u -> {
             o.put("unreachable", u.reason());
             o.put("reachablePH", Numbers.decimals(u.reachablePH(), 2));

@@ -10,14 +10,16 @@ final class Numbers {
     }
 
     static BigDecimal decimals(double x, int places) {
-        return BigDecimal.valueOf(x).setScale(places, RoundingMode.HALF_EVEN).stripTrailingZeros();
+        BigDecimal b = BigDecimal.valueOf(x).setScale(places, RoundingMode.HALF_EVEN).stripTrailingZeros();
+        return b.scale() < 0 ? b.setScale(0) : b;
     }
 
     static BigDecimal significant(double x, int digits) {
         if (x == 0) {
             return BigDecimal.ZERO;
         }
-        return new BigDecimal(x).round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        BigDecimal b = new BigDecimal(x).round(new MathContext(digits, RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        return b.scale() < 0 ? b.setScale(0) : b;   // 10, not 1E+1
     }
 
     static double celsius(double kelvin) {

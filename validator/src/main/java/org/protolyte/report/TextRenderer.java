@@ -93,9 +93,15 @@ public final class TextRenderer {
             t.stockMillilitres().ifPresent(ml -> b.append(String.format(Locale.ROOT, " = %s mL of stock",
                     Numbers.significant(ml, 4).toPlainString())));
             b.append(NL);
+            boolean explicit = t.ingredient().line().adjustTo().map(x -> x.pH().isPresent()).orElse(false);
+            String part = t.atVolume() < 1 ? String.format(Locale.ROOT, " at %.0f %% of the final volume", t.atVolume() * 100)
+                    : "";
             t.setpointPH().ifPresent(sp -> b.append(String.format(Locale.ROOT,
-                    "  SETPOINT: adjust to pH %.2f on the meter at %.1f °C (gives pH %.2f at %.1f °C)%n", sp,
-                    Numbers.celsius(t.adjustKelvin()), t.goalPH(), Numbers.celsius(t.goalKelvin()))));
+                    "  SETPOINT: adjust to pH %.2f on the meter at %.1f °C%s%s%n", sp, Numbers.celsius(t.adjustKelvin()),
+                    part, explicit ? " (as the document states)" : String.format(Locale.ROOT, " (gives pH %.2f at %.1f °C)",
+                            t.goalPH(), Numbers.celsius(t.goalKelvin())))));
+            t.pHAfterMakingUp().ifPresent(x -> b.append(String.format(Locale.ROOT,
+                    "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
         b.append(String.format(Locale.ROOT, "  %-14s %8s %7s %14s %11s%n", "condition", "T (°C)", "pH",
                 "β (mmol/L/pH)", "I (mol/kg)"));
@@ -144,8 +150,11 @@ public final class TextRenderer {
     }
 
     private static String load(java.util.OptionalDouble mmol, String what) {
-        return mmol.isPresent() ? String.format(Locale.ROOT, "%.3g mmol/L of strong %s", mmol.getAsDouble(), what)
-                : "(no limit) " + what;
+        if (mmol.isEmpty()) {
+            return "(no limit) " + what;
+        }
+        return mmol.getAsDouble() == 0 ? "no " + what + " (already outside on that side)"
+                : String.format(Locale.ROOT, "%.3g mmol/L of strong %s", mmol.getAsDouble(), what);
     }
 
     /** The main forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %". */

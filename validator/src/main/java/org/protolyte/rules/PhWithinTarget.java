@@ -45,7 +45,14 @@ public final class PhWithinTarget implements CheckKind {
         String lever = a.targetSensitivities().stream().findFirst().filter(x -> x.dpHPerPercent() != 0)
                 .map(x -> String.format(Locale.ROOT, "; the pH moves most with %s (%+.3f per +1 %%)", x.substance(),
                         x.dpHPerPercent())).orElse("");
+        String setpoint = a.titrants().stream().filter(x -> x.setpointForTarget().isPresent()).findFirst()
+                .map(x -> String.format(Locale.ROOT, "; adjusting to pH %.2f at %.0f °C instead of %.2f would meet it",
+                        x.setpointForTarget().getAsDouble(), x.adjustKelvin() - 273.15, x.goalPH())).orElse("");
+        String co2 = at.get().co2ForTarget().isPresent() ? String.format(Locale.ROOT,
+                "; a CO2 level of %.3g kPa (%.2g %% at standard pressure) would give pH %.2f with this bicarbonate",
+                at.get().co2ForTarget().getAsDouble() / 1000, at.get().co2ForTarget().getAsDouble() / 1013.25,
+                target.midpoint()) : "";
         return List.of(rule.finding(f, target.pointer(), String.format(Locale.ROOT,
-                "pH at %.0f °C is %.2f, target %s%s%s", t, pH, range, main, lever)));
+                "pH at %.0f °C is %.2f, target %s%s%s%s%s", t, pH, range, main, lever, setpoint, co2)));
     }
 }

@@ -36,6 +36,9 @@ public final class PkaNearTarget implements CheckKind {
         double target = f.pHTarget().orElseThrow().midpoint();
         double max = rule.number("maxDistance", 1.0);
         BufferContribution b = at.get().mainBuffer().get();
+        if (b.open()) {
+            return List.of();   // an open system (bicarbonate under CO2) buffers on above its pKa
+        }
         double distance = Math.abs(b.nearestPKa() - target);
         if (distance <= max) {
             return List.of();
