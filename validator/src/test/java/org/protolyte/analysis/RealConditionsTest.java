@@ -1,0 +1,120 @@
+package org.protolyte.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.util.Locale;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.Protolyte;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.substance.LibraryLoader;
+
+/** Temperature drift, part-volume adjustment, loads and titratable acidity. */
+class RealConditionsTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+    private static final Protolyte PROTOLYTE = new Protolyte(SCHEMAS, LibraryLoader.shipped(SCHEMAS));
+
+    private static FormulationAnalysis analyse(String body) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-REAL\", \"revision\": \"A\","
+                + " \"basis\": {\"finalVolume\": \"1 L\"}, " + body + "}";
+        DocumentReport r = PROTOLYTE.check("t.json", json.getBytes(StandardCharsets.UTF_8));
+        return r.analysis().orElseThrow(() -> new AssertionError(r.findings().toString()));
+    }
+
+    private static double pH(FormulationAnalysis a, String condition) {
+        return a.conditions().stream().filter(c -> c.condition().name().equals(condition)).findFirst().orElseThrow()
+                .state().orElseThrow().pH();
+    }
+
+    private static final String TRIS = "\"components\": [{\"substance\": \"Tris\", \"amount\": \"50 mmol/L\"},"
+            + " {\"substance\": \"Tris hydrochloride\", \"amount\": \"50 mmol/L\"}]";
+
+    /**
+     * Tris: dpH/dT ≈ −0.028 per K near 25 °C (from Goldberg et al. 2002's ΔH° = 47.45 kJ/mol, as quoted; and the
+     * supplier tables' −0.028). From 25 to 37 °C an equimolar Tris buffer drifts by about −0.34.
+     */
+    @Test
+    void trisDriftsByItsTemperatureCoefficientAndIsNamedAsTheCause() {
+        FormulationAnalysis a = analyse(TRIS + ", \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"25 Cel\"},"
+                + " {\"name\": \"use\", \"temperature\": \"37 Cel\"}]");
+        Drift d = a.drifts().get(0);
+        assertEquals(-0.028 * 12, d.change(), 0.03);
+        assertEquals("Tris", d.system().orElseThrow());
+        assertEquals(-0.028, d.dpKadT(), 0.002);
+    }
+
+    /**
+     * Titratable acidity of 10 mmol/L acetate buffer at pH ≈ 5 (acid 3.6, salt 6.4 mmol/L): to reach pH 7.4 nearly all
+     * the acetic acid must be neutralised, 3.6 mmol/L of base (Henderson–Hasselbalch, derived; the acid left at 7.4
+     * is 0.2 % of the total).
+     */
+    @Test
+    void titratableAcidityIsTheBaseThatNeutralisesTheWeakAcid() {
+        FormulationAnalysis a = analyse("\"components\": [{\"substance\": \"acetic acid\", \"amount\": \"3.6 mmol/L\"},"
+                + " {\"substance\": \"sodium acetate anhydrous\", \"amount\": \"6.4 mmol/L\"}],"
+                + " \"dose\": {\"volume\": \"2 mL\"}");
+        TitratableAcidity t = a.titratableAcidity().orElseThrow();
+        assertEquals(3.6, t.mmolPerLitre(), 0.15);
+        assertEquals(t.mmolPerLitre() * 0.002, t.mmolPerDose().getAsDouble(), 1e-9);
+    }
+
+    /** For a small step, the acid load to leave the target is about β·ΔpH (the definition of β, derived). */
+    @Test
+    void acidLoadMatchesBufferCapacityTimesTheDistanceToTheTargetEdge() {
+        FormulationAnalysis a = analyse("\"components\": [{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": "
+                + "\"50 mmol/L\"}, {\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"50 mmol/L\"}],"
+                + " \"targets\": {\"pH\": {\"min\": 6.78, \"max\": 6.86, \"temperature\": \"25 Cel\"}}");
+        var c = a.conditions().get(0);
+        double distance = c.state().orElseThrow().pH() - 6.78;
+        double expected = c.bufferCapacityPerLitre() * 1000 * distance;
+        assertTrue(distance > 0 && distance < 0.05, "pH " + c.state().orElseThrow().pH());
+        assertEquals(expected, c.loads().orElseThrow().acidToLeaveTarget().getAsDouble(), 0.1 * expected);
+    }
+
+    private static final String PHOSPHATE_SALINE = "{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": "
+            + "\"40 mmol/L\"}, {\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"10 mmol/L\"},"
+            + " {\"substance\": \"sodium chloride\", \"amount\": \"150 mmol/L\"}";
+
+    /** At part volume the ionic strength is higher, so a phosphate buffer reads lower than after making up. */
+    @Test
+    void aStatedPHAtPartVolumeIsReadThereAndMovesOnMakingUp() {
+        FormulationAnalysis a = analyse("\"components\": [" + PHOSPHATE_SALINE + ", {\"substance\": \"sodium hydroxide\","
+                + " \"stock\": {\"concentration\": \"1 mol/L\"}, \"adjustTo\": {\"pH\": 7.0, \"temperature\": \"20 Cel\","
+                + " \"atVolume\": 0.8}}], \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"20 Cel\"}]");
+        TitrantResult t = a.titrants().get(0);
+        assertEquals(0.8, t.atVolume());
+        double madeUp = t.pHAfterMakingUp().getAsDouble();
+        assertEquals(madeUp, pH(a, "preparation"), 1e-9);
+        assertTrue(madeUp > 7.0 && madeUp < 7.05, "phosphate, charges −2/−1: dilution raises the pH a little: " + madeUp);
+    }
+
+    /** Adjusting at part volume for a target after making up: the setpoint differs from the target, the result meets it. */
+    @Test
+    void theSetpointAtPartVolumeGivesTheTargetAfterMakingUp() {
+        FormulationAnalysis a = analyse("\"components\": [" + PHOSPHATE_SALINE + ", {\"substance\": \"sodium hydroxide\","
+                + " \"stock\": {\"concentration\": \"1 mol/L\"}, \"adjustTo\": {\"temperature\": \"20 Cel\","
+                + " \"atVolume\": 0.8}}], \"targets\": {\"pH\": {\"value\": 7.0, \"tolerance\": 0.05, \"temperature\": "
+                + "\"20 Cel\"}}, \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"20 Cel\"}]");
+        TitrantResult t = a.titrants().get(0);
+        assertEquals(7.0, pH(a, "preparation"), 1e-6);
+        assertTrue(t.setpointPH().getAsDouble() < 7.0, "reads lower at part volume: " + t.setpointPH());
+    }
+
+    /** The setpoint the finding proposes, written back as adjustTo.pH, does meet the target (self-consistency). */
+    @Test
+    void theProposedSetpointMeetsTheTarget() {
+        String body = "\"components\": [{\"substance\": \"Tris\", \"amount\": \"25 mmol/L\"}, {\"substance\": \"hydrochloric "
+                + "acid\", \"stock\": {\"concentration\": \"1 mol/L\"}, \"adjustTo\": {\"pH\": %s, \"temperature\": "
+                + "\"30 Cel\"}}], \"targets\": {\"pH\": {\"value\": 7.5, \"tolerance\": 0.1, \"temperature\": \"4 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"30 Cel\"}, {\"name\": \"use\","
+                + " \"temperature\": \"4 Cel\"}]";
+        FormulationAnalysis first = analyse(String.format(Locale.ROOT, body, "7.5"));
+        double proposed = first.titrants().get(0).setpointForTarget().getAsDouble();
+        FormulationAnalysis second = analyse(String.format(Locale.ROOT, body, String.valueOf(proposed)));
+        assertEquals(7.5, pH(second, "use"), 0.01);
+    }
+}
