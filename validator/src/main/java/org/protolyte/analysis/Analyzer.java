@@ -62,9 +62,95 @@ public final class Analyzer {
             results.add(condition(recipe, solution, c));
         }
         titrants.replaceAll(t -> explicitSetpointForTarget(recipe, t));
+        results = withUncertainty(recipe, solution, results);
         return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe),
                 sensitivities(recipe, doses, results), drifts(recipe, results),
                 titratableAcidity(recipe, solution));
+    }
+
+    /**
+     * Linear propagation of the constants' standard uncertainties: each pKa used (and pKw) moved by its
+     * uncertainty, the q.s. and every condition solved again, the changes added in quadrature.
+     */
+    private List<ConditionResult> withUncertainty(Recipe recipe, Solution solution, List<ConditionResult> results) {
+        record Perturbation(String name, double u, Equilibrium equilibrium) {
+        }
+        List<Perturbation> perturbations = new ArrayList<>();
+        boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
+        for (AcidBaseSystem sys : recipe.library().systems()) {
+            boolean used = solution.totals().getOrDefault(sys.basis(), 0.0) > 0 || anyCo2 && sys.name().equals(CARBONATE);
+            for (int k = 0; used && k < sys.steps().size(); k++) {
+                double u = sys.steps().get(k).uncertainty();
+                if (u > 0) {
+                    String name = sys.name() + (sys.steps().size() > 1 ? " pKa" + (k + 1) : " pKa");
+                    perturbations.add(new Perturbation(name, u, equilibrium.withPKaShift(sys, k, u)));
+                }
+            }
+        }
+        perturbations.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
+                equilibrium.withPKwShift(Equilibrium.PKW_UNCERTAINTY)));
+        int n = results.size();
+        double[] pH2 = new double[n];
+        double[] beta2 = new double[n];
+        List<List<Uncertainty.Contribution>> parts = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            parts.add(new ArrayList<>());
+        }
+        boolean[] failed = new boolean[n];
+        for (Perturbation p : perturbations) {
+            double[][] moved = new Analyzer(p.equilibrium()).core(recipe);
+            for (int i = 0; i < n; i++) {
+                ConditionResult r = results.get(i);
+                if (!r.determinate() || moved == null || Double.isNaN(moved[0][i])) {
+                    failed[i] = true;
+                    continue;
+                }
+                double dpH = moved[0][i] - r.state().orElseThrow().pH();
+                double dBeta = moved[1][i] - r.bufferCapacityPerLitre();
+                pH2[i] += dpH * dpH;
+                beta2[i] += dBeta * dBeta;
+                parts.get(i).add(new Uncertainty.Contribution(p.name(), p.u(), dpH));
+            }
+        }
+        List<ConditionResult> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (failed[i]) {
+                out.add(results.get(i));
+                continue;
+            }
+            List<Uncertainty.Contribution> c = new ArrayList<>(parts.get(i));
+            c.sort(java.util.Comparator.comparingDouble((Uncertainty.Contribution x) -> -Math.abs(x.pHChange())));
+            out.add(results.get(i).withUncertainty(new Uncertainty(Math.sqrt(pH2[i]), Math.sqrt(beta2[i]), c)));
+        }
+        return out;
+    }
+
+    /** pH and buffer capacity (mol/L per pH) of every condition, q.s. included; NaN where not determinate. */
+    private double[][] core(Recipe recipe) {
+        List<Caveat> ignored = new ArrayList<>();
+        Map<Ingredient, Double> doses = new HashMap<>();
+        try {
+            if (!recipe.titrants().isEmpty()) {
+                adjust(recipe, ignored).forEach(t -> doses.put(t.ingredient(), t.moles()));
+            }
+        } catch (DocumentException e) {
+            return null;
+        }
+        Solution solution = recipe.solution(doses);
+        List<Formulation.Condition> conditions = recipe.formulation().conditions();
+        double[][] out = new double[2][conditions.size()];
+        for (int i = 0; i < conditions.size(); i++) {
+            Formulation.Condition c = conditions.get(i);
+            try {
+                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
+                out[0][i] = s.pH();
+                out[1][i] = s.bufferCapacity() * solution.waterKg() / solution.volumeLitres(c.kelvin());
+            } catch (IndeterminateException e) {
+                out[0][i] = Double.NaN;
+                out[1][i] = Double.NaN;
+            }
+        }
+        return out;
     }
 
     /** Where adjustTo states its own pH and the target is missed: the setpoint that would meet the target. */
@@ -284,10 +370,10 @@ public final class Analyzer {
                     buffers(recipe, solution, s, perLitre),
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
                     determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
-                    determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty());
+                    determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty());
         } catch (IndeterminateException e) {
             return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume, List.of(),
-                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty());
+                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty());
         }
     }
 

@@ -18,15 +18,21 @@ import org.protolyte.document.Formulation;
  * @param loads                  strong acid and base it takes before leaving the pH target
  * @param co2ForTarget           for a CO2 condition at the target temperature: the CO2 partial pressure (Pa)
  *                               at which the pH would be the target's midpoint
+ * @param uncertainty            from the constants' uncertainties (see {@link Uncertainty})
  */
 public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
                               List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres,
                               List<BufferContribution> buffers, OptionalDouble pHInAir, Optional<Loads> loads,
-                              OptionalDouble co2ForTarget) {
+                              OptionalDouble co2ForTarget, Optional<Uncertainty> uncertainty) {
 
     public ConditionResult {
         caveats = List.copyOf(caveats);
         buffers = List.copyOf(buffers);
+    }
+
+    public ConditionResult withUncertainty(Uncertainty u) {
+        return new ConditionResult(condition, state, caveats, bufferCapacityPerLitre, volumeLitres, buffers, pHInAir,
+                loads, co2ForTarget, Optional.of(u));
     }
 
     /** The system that carries most of the buffer capacity, if any system buffers at all. */

@@ -43,10 +43,39 @@ public final class Equilibrium {
     private static final double PH_HIGH = 16;
     private static final int MAX_ITERATIONS = 200;
 
+    /** Standard uncertainty of pKw from IAPWS R11-07 near ambient conditions, about 0.01 (from memory). */
+    public static final double PKW_UNCERTAINTY = 0.01;
+
     private final ActivityModel activity;
+    private final Map<Species, Double> logBetaShifts;
+    private final double pKwShift;
 
     public Equilibrium(ActivityModel activity) {
+        this(activity, Map.of(), 0);
+    }
+
+    private Equilibrium(ActivityModel activity, Map<Species, Double> logBetaShifts, double pKwShift) {
         this.activity = activity;
+        this.logBetaShifts = Map.copyOf(logBetaShifts);
+        this.pKwShift = pKwShift;
+    }
+
+    /**
+     * The same equilibrium with one dissociation step's pKa raised by {@code delta}: every species that
+     * carries that step's proton has its log β raised by delta. For propagating a constant's uncertainty.
+     */
+    public Equilibrium withPKaShift(AcidBaseSystem system, int step, double delta) {
+        Map<Species, Double> shifts = new java.util.HashMap<>(logBetaShifts);
+        List<Species> species = system.species();
+        for (int i = 0; i <= step; i++) {
+            shifts.merge(species.get(i), delta, Double::sum);
+        }
+        return new Equilibrium(activity, shifts, pKwShift);
+    }
+
+    /** The same equilibrium with pKw raised by {@code delta}. */
+    public Equilibrium withPKwShift(double delta) {
+        return new Equilibrium(activity, logBetaShifts, pKwShift + delta);
     }
 
     public ActivityModel activityModel() {
@@ -188,7 +217,7 @@ public final class Equilibrium {
                 comp[i] = index.get(sp[i].components().keySet().iterator().next());
                 protons[i] = sp[i].protons();
                 charge[i] = sp[i].charge();
-                log10Beta[i] = sp[i].formation().log10K(kelvin);
+                log10Beta[i] = sp[i].formation().log10K(kelvin) + logBetaShifts.getOrDefault(sp[i], 0.0);
             }
             components = index.keySet().toArray(new Component[0]);
             total = new double[components.length];
@@ -206,7 +235,7 @@ public final class Equilibrium {
                     throw new IllegalArgumentException("component " + components[j].name() + " has no species");
                 }
             }
-            kw = Math.pow(10, -Water.pKw(kelvin));
+            kw = Math.pow(10, -(Water.pKw(kelvin) + pKwShift));
             a = Water.debyeHuckelA(kelvin);
             log10Gamma = new double[n];
             fixedIndex = new int[components.length];

@@ -33,6 +33,10 @@ public final class JsonRenderer {
         tool.put("caution", RunReport.CAUTION);
         tool.put("pHConvention", "conventional pH scale (Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. "
                 + "74 (2002) 2169): pH = −log10(γH·mH) with γH from the Davies equation");
+        tool.put("uncertainty", "pHUncertainty and bufferCapacityUncertainty are standard uncertainties from the "
+                + "published constants (each pKa used and pKw, taken as independent), by linear propagation; they do "
+                + "not cover batch-to-batch variation, the activity model, or the uncertainty of ΔH° and ΔCp° (not yet in "
+                + "the library)");
         tool.put("generatedAt", run.generatedAt().toString());
         ArrayNode library = tool.putArray("substanceLibrary");
         run.libraryFiles().forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));
@@ -132,6 +136,14 @@ public final class JsonRenderer {
         if (c.determinate()) {
             EquilibriumState s = c.state().orElseThrow();
             o.put("pH", Numbers.decimals(s.pH(), 3));
+            c.uncertainty().ifPresent(u -> {
+                o.put("pHUncertainty", Numbers.significant(u.pH(), 2));
+                o.put("bufferCapacityUncertainty", Numbers.significant(u.bufferCapacityPerLitre() * 1000, 2));
+                ArrayNode parts = o.putArray("uncertaintyContributions");
+                u.contributions().forEach(x -> parts.addObject().put("constant", x.constant())
+                        .put("standardUncertainty", x.standardUncertainty())
+                        .put("pHChange", Numbers.significant(x.pHChange(), 2)));
+            });
             o.put("bufferCapacity", Numbers.significant(c.bufferCapacityPerLitre() * 1000, 4));
             if (perKg) {
                 o.put("bufferCapacityPerKgWater", Numbers.significant(s.bufferCapacity() * 1000, 4));

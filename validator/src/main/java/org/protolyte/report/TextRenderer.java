@@ -103,19 +103,21 @@ public final class TextRenderer {
             t.pHAfterMakingUp().ifPresent(x -> b.append(String.format(Locale.ROOT,
                     "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
-        b.append(String.format(Locale.ROOT, "  %-14s %8s %7s %14s %11s%n", "condition", "T (°C)", "pH",
+        b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s%n", "condition", "T (°C)", "pH",
                 "β (mmol/L/pH)", "I (mol/kg)"));
         Systems systems = new Systems(a.recipe().library());
         for (ConditionResult c : a.conditions()) {
             String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
             if (c.determinate()) {
                 EquilibriumState s = c.state().orElseThrow();
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %7.2f %14s %11s   %s%n", name,
-                        Numbers.celsius(c.condition().kelvin()), s.pH(),
+                String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))
+                        .orElse(String.format(Locale.ROOT, "%.2f", s.pH()));
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s   %s%n", name,
+                        Numbers.celsius(c.condition().kelvin()), pH,
                         Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
                         Numbers.significant(s.ionicStrength(), 3).toPlainString(), speciation(s, systems)));
             } else {
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %7s %14s %11s   (see diagnostics)%n", name,
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s   (see diagnostics)%n", name,
                         Numbers.celsius(c.condition().kelvin()), "—", "—", "—"));
             }
         }
@@ -145,6 +147,10 @@ public final class TextRenderer {
                         Math.abs(t.mmolPerDose().getAsDouble())) : "")));
         if (a.conditions().stream().anyMatch(c -> c.condition().implicit())) {
             b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
+        }
+        if (a.conditions().stream().anyMatch(c -> c.uncertainty().isPresent())) {
+            b.append("  ± is the standard uncertainty from the published pKa and pKw values, not batch-to-batch "
+                    + "variation; where a titrant is dosed to a pH, the meter removes it at that condition").append(NL);
         }
         b.append("  assumed: ").append(String.join("; ", a.assumptions())).append(NL);
     }

@@ -1,0 +1,53 @@
+package org.protolyte.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.Protolyte;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.substance.LibraryLoader;
+
+/** The pH's uncertainty from the constants, by linear propagation. */
+class UncertaintyTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+    private static final Protolyte PROTOLYTE = new Protolyte(SCHEMAS, LibraryLoader.shipped(SCHEMAS));
+
+    private static ConditionResult condition(String components, String target, String name) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-U\", \"revision\": \"A\","
+                + " \"basis\": {\"waterMass\": \"1 kg\"}, \"components\": [" + components + "]" + target + ","
+                + " \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"20 Cel\"},"
+                + " {\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        return PROTOLYTE.check("t.json", json.getBytes(StandardCharsets.UTF_8)).analysis().orElseThrow().conditions()
+                .stream().filter(c -> c.condition().name().equals(name)).findFirst().orElseThrow();
+    }
+
+    /**
+     * Equimolal phosphate: by Henderson–Hasselbalch ∂pH/∂pKa2 = 1 (derived), so pKa2's uncertainty (0.002 in the
+     * library) passes to the pH one for one and dominates; pKa1 and pKa3, far away, hardly count.
+     */
+    @Test
+    void aBufferPassesOnTheUncertaintyOfItsPKa() {
+        ConditionResult c = condition("{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"25 mmol/kg\"},"
+                + "{\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"25 mmol/kg\"}", "", "use");
+        Uncertainty u = c.uncertainty().orElseThrow();
+        Uncertainty.Contribution main = u.contributions().get(0);
+        assertEquals("phosphate pKa2", main.constant());
+        assertEquals(main.standardUncertainty(), main.pHChange(), 0.05 * main.standardUncertainty());
+        assertEquals(Math.sqrt(u.contributions().stream().mapToDouble(x -> x.pHChange() * x.pHChange()).sum()), u.pH(),
+                1e-12);
+    }
+
+    /** Dosed to a pH at a condition, the meter sets that pH whatever the constants: no uncertainty is left there. */
+    @Test
+    void theMeterRemovesTheConstantsUncertaintyAtTheAdjustedCondition() {
+        ConditionResult c = condition("{\"substance\": \"L-histidine\", \"amount\": \"20 mmol/kg\"},"
+                        + "{\"substance\": \"hydrochloric acid\", \"stock\": {\"concentration\": \"1 mol/L\"},"
+                        + " \"adjustTo\": {\"temperature\": \"25 Cel\"}}",
+                ", \"targets\": {\"pH\": {\"value\": 6.0, \"tolerance\": 0.2, \"temperature\": \"25 Cel\"}}", "use");
+        assertTrue(c.uncertainty().orElseThrow().pH() < 1e-6, "u = " + c.uncertainty().orElseThrow().pH());
+    }
+}
