@@ -428,6 +428,17 @@ public final class Analyzer {
                 .findFirst().map(Formulation.Condition::co2Pascal).orElse(OptionalDouble.empty());
     }
 
+    /** The q.s. of every titrant line of the recipe, as {@link #analyze} doses them. */
+    List<TitrantResult> titrate(Recipe recipe) {
+        return recipe.titrants().isEmpty() ? List.of() : adjust(recipe, new ArrayList<>());
+    }
+
+    /** What the meter shows at the adjustment temperature and part volume (closed) with {@code moles} of titrant. */
+    double meterReading(Recipe recipe, Ingredient titrant, double moles) {
+        Formulation.Adjustment adj = titrant.line().adjustTo().orElseThrow();
+        return pH(recipe, titrant, moles, adj.kelvin(), OptionalDouble.empty(), adj.atVolume());
+    }
+
     /** Acid or base: the pH of a 0.01 mol/kg solution of the titrant alone at 25 °C, below or above neutral. */
     TitrantResult.Role role(Recipe recipe, Ingredient titrant) {
         Recipe alone = new Recipe(recipe.formulation(), recipe.library(), List.of(titrant), recipe.makeUpKelvin());

@@ -73,6 +73,19 @@ public final class Equilibrium {
         return new Equilibrium(activity, shifts, pKwShift);
     }
 
+    /** The same equilibrium with several steps' pKa moved at once: {@code deltas.get(system)[step]}. */
+    public Equilibrium withPKaShifts(Map<AcidBaseSystem, double[]> deltas) {
+        Equilibrium e = this;
+        for (Map.Entry<AcidBaseSystem, double[]> d : deltas.entrySet()) {
+            for (int k = 0; k < d.getValue().length; k++) {
+                if (d.getValue()[k] != 0) {
+                    e = e.withPKaShift(d.getKey(), k, d.getValue()[k]);
+                }
+            }
+        }
+        return e;
+    }
+
     /** The same equilibrium with pKw raised by {@code delta}. */
     public Equilibrium withPKwShift(double delta) {
         return new Equilibrium(activity, logBetaShifts, pKwShift + delta);

@@ -27,9 +27,10 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
         }
     }
 
-    /** One component line of the recipe. */
+    /** One component line of the recipe; {@code tolerance}: the weighing tolerance, a fraction (0.02 = ±2 %). */
     public record Line(int index, String substance, Optional<Quantity> amount, Optional<Stock> stock,
-                       Optional<Adjustment> adjustTo, Optional<Double> density, String pointer) {
+                       Optional<Adjustment> adjustTo, Optional<Double> density, String pointer,
+                       Optional<Double> tolerance) {
         public boolean isTitrant() {
             return adjustTo.isPresent();
         }

@@ -187,7 +187,10 @@ public final class FormulationReader {
             Optional<Double> density = n.has("density")
                     ? positive(n.get("density"), p + "/density", "a density", Dimension.DENSITY).map(Quantity::base)
                     : Optional.empty();
-            return new Formulation.Line(i, substance, amount, stock, adjust, density, p);
+            Optional<Double> tolerance = n.has("tolerance")
+                    ? quantity(n.get("tolerance"), p + "/tolerance", "a weighing tolerance", Dimension.FRACTION)
+                    .map(Quantity::base) : Optional.empty();
+            return new Formulation.Line(i, substance, amount, stock, adjust, density, p, tolerance);
         }
 
         /** CO2 partial pressure in Pa: "air", a fraction of the (stated or standard) pressure, or a pressure. */
@@ -204,12 +207,12 @@ public final class FormulationReader {
             if (co2.isString() && co2.asString().equals("air")) {
                 return OptionalDouble.of(AIR_CO2_FRACTION * pressure);
             }
-            Optional<Quantity> q = quantity(co2, p + "/co2", "a CO2 level", Dimension.GAS_FRACTION, Dimension.PRESSURE);
+            Optional<Quantity> q = quantity(co2, p + "/co2", "a CO2 level", Dimension.FRACTION, Dimension.PRESSURE);
             if (q.isEmpty()) {
                 return OptionalDouble.empty();
             }
-            double v = q.get().dimension() == Dimension.GAS_FRACTION ? q.get().base() * pressure : q.get().base();
-            if (!(v >= 0) || q.get().dimension() == Dimension.GAS_FRACTION && q.get().base() > 1) {
+            double v = q.get().dimension() == Dimension.FRACTION ? q.get().base() * pressure : q.get().base();
+            if (!(v >= 0) || q.get().dimension() == Dimension.FRACTION && q.get().base() > 1) {
                 problems.add(doc.problem(p + "/co2", "a CO2 level must lie between 0 and 100 % of the gas phase"));
                 return OptionalDouble.empty();
             }

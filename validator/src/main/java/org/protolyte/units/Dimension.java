@@ -10,7 +10,7 @@ public enum Dimension {
     MOLALITY("a molality (per kilogram of water)"),
     VOLUME_FRACTION("a volume fraction of the solution"),
     MASS_FRACTION("a mass fraction of the solution"),
-    GAS_FRACTION("a fraction of a gas phase"),
+    FRACTION("a fraction (%)"),
     TEMPERATURE("a temperature"),
     PRESSURE("a pressure"),
     DENSITY("a density");

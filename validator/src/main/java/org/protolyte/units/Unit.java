@@ -42,7 +42,7 @@ public enum Unit {
     PERCENT_W_V("% w/v", Dimension.MASS_CONCENTRATION, 10, true),   // g per 100 mL = 10 g/L
     PERCENT_V_V("% v/v", Dimension.VOLUME_FRACTION, 0.01, true),
     PERCENT_W_W("% w/w", Dimension.MASS_FRACTION, 0.01, true),
-    PERCENT("%", Dimension.GAS_FRACTION, 0.01, false);
+    PERCENT("%", Dimension.FRACTION, 0.01, false);
 
     private final String code;
     private final Dimension dimension;

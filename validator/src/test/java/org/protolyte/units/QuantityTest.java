@@ -19,7 +19,7 @@ class QuantityTest {
         "'25 mM', 0.025, AMOUNT_CONCENTRATION", "'50 µM', 5e-5, AMOUNT_CONCENTRATION",
         "'50 uM', 5e-5, AMOUNT_CONCENTRATION",
         "'0.9 % w/v', 9, MASS_CONCENTRATION", "'2 mg/mL', 2, MASS_CONCENTRATION", "'80 g/L', 80, MASS_CONCENTRATION",
-        "'10 % v/v', 0.1, VOLUME_FRACTION", "'37 % w/w', 0.37, MASS_FRACTION", "'5 %', 0.05, GAS_FRACTION",
+        "'10 % v/v', 0.1, VOLUME_FRACTION", "'37 % w/w', 0.37, MASS_FRACTION", "'5 %', 0.05, FRACTION",
         "'150 mmol/kg', 0.15, MOLALITY", "'25 Cel', 298.15, TEMPERATURE", "'37 °C', 310.15, TEMPERATURE",
         "'277.15 K', 277.15, TEMPERATURE", "'101.325 kPa', 101325, PRESSURE", "'1.18 g/mL', 1.18, DENSITY"})
     void textConvertsToBase(String text, double base, Dimension dimension) {

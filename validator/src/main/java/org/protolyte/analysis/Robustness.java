@@ -1,0 +1,274 @@
+package org.protolyte.analysis;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.function.IntConsumer;
+
+import org.apache.commons.math3.random.RandomGenerator;
+import org.apache.commons.math3.random.Well19937c;
+import org.apache.commons.math3.stat.descriptive.DescriptiveStatistics;
+import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.chemistry.IndeterminateException;
+import org.protolyte.document.Formulation;
+import org.protolyte.recipe.Ingredient;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.Solution;
+
+/**
+ * How much a recipe can take, by Monte Carlo through the engine, keeping two kinds of uncertainty apart:
+ * <ul>
+ * <li>batch to batch: each weighed amount uniform within its tolerance, and for a q.s. recipe the meter
+ *     reading (normal) that sets the dose — reported as the distribution of pH and buffer capacity per
+ *     condition and the probability of a batch leaving the pH target;</li>
+ * <li>systematic: the constants (each pKa normal with its standard uncertainty), the same for every batch,
+ *     so never mixed into that probability — reported as the spread of the predicted (nominal) pH.</li>
+ * </ul>
+ * Also the worst-case corners of the tolerance box (chosen by the sign of each component's sensitivity)
+ * and the local sensitivities, dpH per +1 % of each component with the q.s. dosed again.
+ */
+public final class Robustness {
+
+    /** Settings; tolerances are half-widths as fractions (0.01 = ±1 %). */
+    public record Settings(int samples, long seed, double defaultTolerance, double meterStandardUncertainty) {
+        public static Settings defaults() {
+            return new Settings(10_000, 20_261_201L, 0.01, 0.01);
+        }
+    }
+
+    /** Mean, standard deviation and 2.5 / 97.5 % percentiles of one quantity at one condition. */
+    public record Interval(double mean, double standardDeviation, double p025, double p975) {
+    }
+
+    public record ConditionRobustness(String condition, Interval pH, Interval bufferCapacity,
+                                      OptionalDouble probabilityOutsideTarget, Interval systematicPH,
+                                      double lowestCornerPH, double highestCornerPH, Map<String, Double> sensitivities) {
+    }
+
+    public record Result(Settings settings, int samplesSolved, List<ConditionRobustness> conditions,
+                         Map<String, Double> tolerances) {
+    }
+
+    private final Analyzer analyzer;
+    private final Equilibrium equilibrium;
+
+    public Robustness(Equilibrium equilibrium) {
+        this.equilibrium = equilibrium;
+        this.analyzer = new Analyzer(equilibrium);
+    }
+
+    /** Runs the study; {@code progress} receives the number of samples done (for a terminal display). */
+    public Result run(Recipe recipe, Settings settings, IntConsumer progress) {
+        List<Formulation.Condition> conditions = recipe.formulation().conditions();
+        List<Ingredient> weighed = recipe.ingredients().stream().filter(i -> i.kind() != Ingredient.Kind.TITRANT
+                && !i.substance().solvent()).toList();
+        Map<String, Double> tolerances = new LinkedHashMap<>();
+        weighed.forEach(i -> tolerances.put(i.substance().name(), tolerance(i, settings)));
+        Nominal nominalDose = doses(analyzer, recipe);
+        RandomGenerator random = new Well19937c(settings.seed());
+        int n = conditions.size();
+        DescriptiveStatistics[] pH = stats(n);
+        DescriptiveStatistics[] beta = stats(n);
+        int[] outside = new int[n];
+        int solved = 0;
+        for (int k = 0; k < settings.samples(); k++) {
+            Map<Ingredient, Double> scale = new LinkedHashMap<>();
+            for (Ingredient i : weighed) {
+                double t = tolerances.get(i.substance().name());
+                scale.put(i, 1 + t * (2 * random.nextDouble() - 1));
+            }
+            double meter = settings.meterStandardUncertainty() * random.nextGaussian();
+            double[][] r = sample(analyzer, recipe, scale, meter, nominalDose);
+            if (r != null) {
+                solved++;
+                for (int c = 0; c < n; c++) {
+                    pH[c].addValue(r[0][c]);
+                    beta[c].addValue(r[1][c] * 1000);
+                    if (outsideTarget(recipe, conditions.get(c), r[0][c])) {
+                        outside[c]++;
+                    }
+                }
+            }
+            if ((k + 1) % 500 == 0) {
+                progress.accept(k + 1);
+            }
+        }
+        DescriptiveStatistics[] systematic = systematic(recipe, settings, random, n, nominalDose);
+        List<ConditionRobustness> out = new ArrayList<>();
+        double[][] nominal = sample(analyzer, recipe, Map.of(), 0, nominalDose);
+        for (int c = 0; c < n; c++) {
+            Formulation.Condition cond = conditions.get(c);
+            boolean atTarget = recipe.formulation().pHTarget().map(t -> Math.abs(t.kelvin() - cond.kelvin()) < 0.005)
+                    .orElse(false);
+            Map<String, Double> sensitivities = sensitivities(recipe, weighed, c, nominal, nominalDose);
+            double[] corners = corners(recipe, weighed, tolerances, sensitivities, c, nominalDose);
+            out.add(new ConditionRobustness(cond.name(), interval(pH[c]), interval(beta[c]),
+                    atTarget && solved > 0 ? OptionalDouble.of((double) outside[c] / solved) : OptionalDouble.empty(),
+                    interval(systematic[c]), corners[0], corners[1], sensitivities));
+        }
+        return new Result(settings, solved, out, tolerances);
+    }
+
+    private static double tolerance(Ingredient i, Settings settings) {
+        return i.line().tolerance().orElse(settings.defaultTolerance());
+    }
+
+    private static boolean outsideTarget(Recipe recipe, Formulation.Condition c, double pH) {
+        return recipe.formulation().pHTarget().filter(t -> Math.abs(t.kelvin() - c.kelvin()) < 0.005)
+                .map(t -> !t.contains(pH)).orElse(false);
+    }
+
+    private static DescriptiveStatistics[] stats(int n) {
+        DescriptiveStatistics[] s = new DescriptiveStatistics[n];
+        for (int i = 0; i < n; i++) {
+            s[i] = new DescriptiveStatistics();
+        }
+        return s;
+    }
+
+    private static Interval interval(DescriptiveStatistics s) {
+        if (s.getN() == 0) {
+            return new Interval(Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        }
+        return new Interval(s.getMean(), s.getStandardDeviation(), s.getPercentile(2.5), s.getPercentile(97.5));
+    }
+
+    /**
+     * The constants drawn once per "world": the nominal recipe, dosed to the prescribed setpoint, in each; the
+     * spread of its pH is the uncertainty of the prediction itself.
+     */
+    private DescriptiveStatistics[] systematic(Recipe recipe, Settings settings, RandomGenerator random, int n,
+                                               Nominal nominal) {
+        DescriptiveStatistics[] out = stats(n);
+        int worlds = Math.max(50, Math.min(500, settings.samples() / 20));
+        for (int w = 0; w < worlds; w++) {
+            Map<AcidBaseSystem, double[]> shifts = new LinkedHashMap<>();
+            for (AcidBaseSystem sys : recipe.library().systems()) {
+                double[] d = new double[sys.steps().size()];
+                for (int k = 0; k < d.length; k++) {
+                    d[k] = sys.steps().get(k).uncertainty() * random.nextGaussian();
+                }
+                shifts.put(sys, d);
+            }
+            Analyzer shifted = new Analyzer(equilibrium.withPKaShifts(shifts)
+                    .withPKwShift(Equilibrium.PKW_UNCERTAINTY * random.nextGaussian()));
+            double[][] r = sample(shifted, recipe, Map.of(), 0, nominal);
+            if (r != null) {
+                for (int c = 0; c < n; c++) {
+                    out[c].addValue(r[0][c]);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** The nominal q.s. of each titrant line (0 where not used) and the meter reading the batch record prescribes. */
+    record Nominal(double[] moles, double[] setpoint) {
+    }
+
+    private static Nominal doses(Analyzer a, Recipe recipe) {
+        List<TitrantResult> titrated = a.titrate(recipe);
+        double[] moles = new double[titrated.size()];
+        double[] setpoint = new double[titrated.size()];
+        for (int i = 0; i < titrated.size(); i++) {
+            TitrantResult t = titrated.get(i);
+            moles[i] = t.used() && t.unreachable().isEmpty() ? t.moles() : 0;
+            setpoint[i] = t.setpointPH().orElse(Double.NaN);
+        }
+        return new Nominal(moles, setpoint);
+    }
+
+    /**
+     * One batch: weighed amounts scaled, the q.s. dosed again so that the meter reads its setpoint plus
+     * {@code meterError} (secant steps from the nominal dose), then every condition solved. Null where the
+     * batch cannot be solved.
+     */
+    double[][] sample(Analyzer a, Recipe recipe, Map<Ingredient, Double> scale, double meterError, Nominal nominalDose) {
+        List<Ingredient> changed = new ArrayList<>();
+        Map<Ingredient, Ingredient> map = new LinkedHashMap<>();
+        for (Ingredient i : recipe.ingredients()) {
+            double f = scale.getOrDefault(i, 1.0);
+            Ingredient x = f == 1.0 ? i : new Ingredient(i.line(), i.substance(), i.kind(), i.value() * f,
+                    i.stockMolarity(), i.stockDensity());
+            changed.add(x);
+            map.put(i, x);
+        }
+        Recipe batch = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
+        try {
+            Map<Ingredient, Double> doses = new LinkedHashMap<>();
+            List<Ingredient> titrants = batch.titrants();
+            for (int i = 0; i < titrants.size(); i++) {
+                if (nominalDose.moles()[i] > 0 && !Double.isNaN(nominalDose.setpoint()[i])) {
+                    doses.put(titrants.get(i), redose(a, batch, titrants.get(i), nominalDose.moles()[i],
+                            nominalDose.setpoint()[i] + meterError));
+                }
+            }
+            Solution s = batch.solution(doses);
+            List<Formulation.Condition> conditions = batch.formulation().conditions();
+            double[][] out = new double[2][conditions.size()];
+            for (int c = 0; c < conditions.size(); c++) {
+                Formulation.Condition cond = conditions.get(c);
+                var state = a.solve(batch, s, cond.kelvin(), cond.co2Pascal(), Map.of());
+                out[0][c] = state.pH();
+                out[1][c] = state.bufferCapacity() * s.waterKg() / s.volumeLitres(cond.kelvin());
+            }
+            return out;
+        } catch (IndeterminateException | IllegalStateException e) {
+            return null;
+        }
+    }
+
+    /** The dose at which the meter (adjustment temperature, part volume, closed) reads {@code goal}: secant steps. */
+    private static double redose(Analyzer a, Recipe batch, Ingredient titrant, double nominal, double goal) {
+        double x0 = nominal;
+        double f0 = a.meterReading(batch, titrant, x0) - goal;
+        double x1 = nominal * 1.01 + 1e-9;
+        double f1 = a.meterReading(batch, titrant, x1) - goal;
+        for (int i = 0; i < 30 && Math.abs(f1) > 1e-7; i++) {
+            double x2 = Math.max(0, x1 - f1 * (x1 - x0) / (f1 - f0));
+            x0 = x1;
+            f0 = f1;
+            x1 = x2;
+            f1 = a.meterReading(batch, titrant, x1) - goal;
+        }
+        if (Math.abs(f1) > 1e-4) {
+            throw new IllegalStateException("the q.s. of this batch did not converge");
+        }
+        return x1;
+    }
+
+    /** dpH at one condition per +1 % of each weighed component, q.s. dosed again. */
+    private Map<String, Double> sensitivities(Recipe recipe, List<Ingredient> weighed, int c, double[][] nominal,
+                                              Nominal nominalDose) {
+        Map<String, Double> out = new LinkedHashMap<>();
+        if (nominal == null) {
+            return out;
+        }
+        for (Ingredient i : weighed) {
+            double[][] r = sample(analyzer, recipe, Map.of(i, 1.01), 0, nominalDose);
+            if (r != null) {
+                out.put(i.substance().name(), r[0][c] - nominal[0][c]);
+            }
+        }
+        return out;
+    }
+
+    /** Lowest and highest pH over the tolerance box, at the corners the sensitivities point to. */
+    private double[] corners(Recipe recipe, List<Ingredient> weighed, Map<String, Double> tolerances,
+                             Map<String, Double> sensitivities, int c, Nominal nominalDose) {
+        Map<Ingredient, Double> low = new LinkedHashMap<>();
+        Map<Ingredient, Double> high = new LinkedHashMap<>();
+        for (Ingredient i : weighed) {
+            double t = tolerances.get(i.substance().name());
+            double s = sensitivities.getOrDefault(i.substance().name(), 0.0);
+            low.put(i, s > 0 ? 1 - t : 1 + t);
+            high.put(i, s > 0 ? 1 + t : 1 - t);
+        }
+        double[][] lo = sample(analyzer, recipe, low, 0, nominalDose);
+        double[][] hi = sample(analyzer, recipe, high, 0, nominalDose);
+        return new double[] {lo == null ? Double.NaN : lo[0][c], hi == null ? Double.NaN : hi[0][c]};
+    }
+}

@@ -1,0 +1,106 @@
+package org.protolyte.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.recipe.Ingredient;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.RecipeResolver;
+import org.protolyte.substance.LibraryLoader;
+
+/** Monte Carlo against linear propagation, the corner search against brute force. */
+class RobustnessTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+    private static final Equilibrium EQUILIBRIUM = new Equilibrium(Davies.INSTANCE);
+
+    private static Recipe recipe(String components) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-MC\", \"revision\": \"A\","
+                + " \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": [" + components + "],"
+                + " \"targets\": {\"pH\": {\"value\": 6.85, \"tolerance\": 0.01, \"temperature\": \"25 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
+        return new RecipeResolver(LibraryLoader.shipped(SCHEMAS)).resolve(f);
+    }
+
+    private static final String PHOSPHATE = "{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"20 mmol/L\"},"
+            + "{\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"20 mmol/L\", \"tolerance\": \"2 %\"},"
+            + "{\"substance\": \"sodium chloride\", \"amount\": \"100 mmol/L\"}";
+
+    /**
+     * Each amount uniform within ±t: variance (100 t)²/3 in per cent. Linear propagation with the engine's local
+     * sensitivities gives σ = sqrt(Σ s_i² (100 t_i)²/3); the Monte Carlo must agree within its statistical error
+     * (relative standard error of σ ≈ 1/sqrt(2N), 1.1 % at N = 4000; allowed 6 % with the non-linearity).
+     */
+    @Test
+    void monteCarloSpreadAgreesWithLinearPropagation() {
+        Recipe r = recipe(PHOSPHATE);
+        Robustness.Result result = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(4000, 7, 0.01, 0.01), x -> { });
+        Robustness.ConditionRobustness use = result.conditions().get(0);
+        double variance = 0;
+        for (Map.Entry<String, Double> e : use.sensitivities().entrySet()) {
+            double t = result.tolerances().get(e.getKey()) * 100;
+            variance += e.getValue() * e.getValue() * t * t / 3;
+        }
+        double linear = Math.sqrt(variance);
+        assertEquals(linear, use.pH().standardDeviation(), 0.06 * linear);
+        assertEquals(4000, result.samplesSolved());
+    }
+
+    /** The constants' spread in the Monte Carlo (systematic part) matches the linear uncertainty of the report. */
+    @Test
+    void systematicSpreadAgreesWithTheLinearUncertainty() {
+        Recipe r = recipe(PHOSPHATE);
+        Robustness.Result result = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(10_000, 11, 0.01, 0.01), x -> { });
+        double mc = result.conditions().get(0).systematicPH().standardDeviation();
+        double linear = new Analyzer(EQUILIBRIUM).analyze(r).conditions().get(0).uncertainty().orElseThrow().pH();
+        // 500 worlds: relative standard error of σ about 3 %
+        assertEquals(linear, mc, 0.12 * linear);
+    }
+
+    /** The corners chosen by the sensitivities' signs are the extremes of all 2³ corners of the tolerance box. */
+    @Test
+    void cornerSearchFindsTheBruteForceExtremes() {
+        Recipe r = recipe(PHOSPHATE);
+        Robustness robustness = new Robustness(EQUILIBRIUM);
+        Robustness.Result result = robustness.run(r, new Robustness.Settings(20, 3, 0.01, 0.01), x -> { });
+        List<Ingredient> weighed = new ArrayList<>(r.ingredients());
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int mask = 0; mask < 8; mask++) {
+            Map<Ingredient, Double> scale = new LinkedHashMap<>();
+            for (int i = 0; i < 3; i++) {
+                double t = result.tolerances().get(weighed.get(i).substance().name());
+                scale.put(weighed.get(i), (mask >> i & 1) == 1 ? 1 + t : 1 - t);
+            }
+            double pH = robustness.sample(new Analyzer(EQUILIBRIUM), r, scale, 0, new Robustness.Nominal(new double[0],
+                    new double[0]))[0][0];
+            lo = Math.min(lo, pH);
+            hi = Math.max(hi, pH);
+        }
+        assertEquals(lo, result.conditions().get(0).lowestCornerPH(), 1e-9);
+        assertEquals(hi, result.conditions().get(0).highestCornerPH(), 1e-9);
+        assertTrue(hi > lo);
+    }
+
+    /** A fixed seed reproduces the study exactly. */
+    @Test
+    void aFixedSeedReproduces() {
+        Recipe r = recipe(PHOSPHATE);
+        var a = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(300, 42, 0.01, 0.01), x -> { });
+        var b = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(300, 42, 0.01, 0.01), x -> { });
+        assertEquals(a.conditions().get(0).pH(), b.conditions().get(0).pH());
+    }
+}
