@@ -5,10 +5,18 @@ import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.ArrayDeque;
+import java.util.Deque;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.function.Consumer;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -26,6 +34,7 @@ import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.report.DocumentReport;
 import org.protolyte.report.RunReport;
+import org.protolyte.report.RunSummary;
 import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.RuleBook;
@@ -92,6 +101,60 @@ public final class Protolyte {
         return checkInputs(files.stream().map(p -> new Input(p, false)).toList());
     }
 
+    /**
+     * Checks one input at a time, handing each report to {@code each} and keeping only the summary: the way an
+     * archive is re-checked within a small heap.
+     */
+    public RunSummary stream(List<Input> inputs, RunSummary summary, Consumer<DocumentReport> each) {
+        int threads = Math.max(1, Math.min(Runtime.getRuntime().availableProcessors(), 8));
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "protolyte-check");
+            t.setDaemon(true);
+            return t;
+        });
+        record InFlight(String source, Future<Optional<DocumentReport>> report) {
+        }
+        try {
+            // a window of documents in flight, handed on in input order: parallel, yet the report reads as a list
+            Deque<InFlight> window = new ArrayDeque<>();
+            int next = 0;
+            while (next < inputs.size() || !window.isEmpty()) {
+                while (next < inputs.size() && window.size() < 4 * threads) {
+                    Input in = inputs.get(next++);
+                    window.add(new InFlight(in.path().toString(), pool.submit(() -> in.foundInFolder()
+                            && !isFormulation(in.path()) ? Optional.<DocumentReport>empty() : Optional.of(check(in.path())))));
+                }
+                InFlight head = window.poll();
+                Optional<DocumentReport> r = join(head.report());
+                if (r.isEmpty()) {
+                    summary.skip(head.source());
+                } else {
+                    summary.add(r.get());
+                    each.accept(r.get());
+                }
+            }
+            return summary;
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private static Optional<DocumentReport> join(Future<Optional<DocumentReport>> f) {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
+    /** A new run's summary: the tool version, now, and the library files with their hashes. */
+    public RunSummary newSummary() {
+        return new RunSummary(version(), Instant.now(), library.files());
+    }
+
     public RunReport checkInputs(List<Input> inputs) {
         List<DocumentReport> reports = new ArrayList<>();
         List<String> skipped = new ArrayList<>();
@@ -102,7 +165,7 @@ public final class Protolyte {
             }
             reports.add(check(in.path()));
         }
-        return new RunReport(version(), java.time.Instant.now(), library.files(), reports, skipped);
+        return new RunReport(version(), Instant.now(), library.files(), reports, skipped);
     }
 
     /**

@@ -239,18 +239,44 @@ public final class Analyzer {
 
     /**
      * mmol per litre of solution of strong base (positive) or strong acid (negative) that brings the pH at a
-     * temperature to {@code goal}: Brent's method on the added sodium or chloride (the strong ions of NaOH, HCl).
+     * temperature to {@code goal}: added sodium or chloride (the strong ions of NaOH, HCl), found by Newton steps
+     * with the buffer capacity as the slope (dC/dpH = β), kept inside a bracket and bisected where a step leaves it.
      */
     private double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
-        double start = solve(recipe, solution, kelvin, co2, Map.of()).pH();
-        if (Math.abs(start - goal) < 1e-9) {
+        EquilibriumState s0 = solve(recipe, solution, kelvin, co2, Map.of());
+        if (Math.abs(s0.pH() - goal) < 1e-9) {
             return 0;
         }
-        boolean base = start < goal;
+        boolean base = s0.pH() < goal;
         Component ion = recipe.library().ion(base ? "Na+" : "Cl-").orElseThrow();
-        UnivariateFunction f = x -> solve(recipe, solution, kelvin, co2, Map.of(ion, x)).pH() - goal;
-        double molal = new BrentSolver(1e-13, 1e-15, 1e-10).solve(1000, f, 0, MAX_TITRANT_MOLALITY);
-        double mmolPerLitre = molal * solution.waterKg() / solution.volumeLitres(kelvin) * 1000;
+        double sign = base ? 1 : -1;             // base raises the pH, acid lowers it
+        double lo = 0;
+        double hi = MAX_TITRANT_MOLALITY;
+        double x = 0;
+        EquilibriumState s = s0;
+        for (int i = 0; i < 100; i++) {
+            double f = sign * (goal - s.pH());    // > 0 while more is needed
+            if (Math.abs(f) < 1e-10) {
+                break;
+            }
+            if (f > 0) {
+                lo = x;
+            } else {
+                hi = x;
+            }
+            double step = s.bufferCapacity() * f;
+            double next = x + step;
+            x = next > lo && next < hi ? next : (lo + hi) / 2;
+            s = solve(recipe, solution, kelvin, co2, Map.of(ion, x));
+            if (hi - lo < 1e-15) {
+                break;
+            }
+        }
+        if (Math.abs(s.pH() - goal) > 1e-6) {
+            throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("load-not-found",
+                    "no amount of strong " + (base ? "base" : "acid") + " up to 2 mol/kg reaches pH " + goal));
+        }
+        double mmolPerLitre = x * solution.waterKg() / solution.volumeLitres(kelvin) * 1000;
         return base ? mmolPerLitre : -mmolPerLitre;
     }
 

@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 
@@ -129,7 +128,7 @@ public final class Equilibrium {
         boolean converged = false;
         for (int i = 0; i < MAX_ITERATIONS; i++) {
             p.setActivityCoefficients(ionicStrength);
-            pH = p.chargeBalanceRoot();
+            pH = p.chargeBalanceRoot(pH);
             if (!Double.isNaN(fixedIonicStrength)) {
                 converged = true;
                 break;
@@ -137,7 +136,7 @@ public final class Equilibrium {
             double next = p.ionicStrength(pH);
             // relaxation keeps the fixed point from oscillating when strong ions dominate
             double step = next - ionicStrength;
-            if (Math.abs(step) <= 1e-13 + 1e-11 * ionicStrength) {
+            if (Math.abs(step) <= 1e-13 + 1e-10 * ionicStrength) {
                 ionicStrength = next;
                 converged = true;
                 break;
@@ -197,6 +196,11 @@ public final class Equilibrium {
         final double kw;
         final double a;
         final double[] log10Gamma;
+        /** Working arrays of one evaluation, reused: a solve makes no garbage per evaluation. */
+        final double[] work;
+        final double[] workW;
+        final double[] workMax;
+        final double[] workSum;
         double log10GammaH;
         double log10GammaOH;
 
@@ -251,6 +255,10 @@ public final class Equilibrium {
             kw = Math.pow(10, -(Water.pKw(kelvin) + pKwShift));
             a = Water.debyeHuckelA(kelvin);
             log10Gamma = new double[n];
+            work = new double[n];
+            workW = new double[n];
+            workMax = new double[components.length];
+            workSum = new double[components.length];
             fixedIndex = new int[components.length];
             fixedMolality = new double[components.length];
             java.util.Arrays.fill(fixedIndex, -1);
@@ -303,19 +311,21 @@ public final class Equilibrium {
         }
 
         /** Molality of every species at this pH, from the mass balances (log space, then scaled). */
+        /** Fills and returns the working array of species molalities at this pH (valid until the next call). */
         double[] molalities(double pH) {
-            double[] m = new double[n];
-            double[] maxLog = new double[components.length];
+            double[] m = work;
+            double[] maxLog = workMax;
             java.util.Arrays.fill(maxLog, Double.NEGATIVE_INFINITY);
-            double[] w = new double[n];
+            double[] w = workW;
             for (int i = 0; i < n; i++) {
                 // γ of the free component is common to every species of C and cancels in m_s/T_C
                 w[i] = log10Beta[i] - protons[i] * pH - log10Gamma[i];
                 maxLog[comp[i]] = Math.max(maxLog[comp[i]], w[i]);
             }
-            double[] sum = new double[components.length];
+            double[] sum = workSum;
+            java.util.Arrays.fill(sum, 0);
             for (int i = 0; i < n; i++) {
-                w[i] = Math.pow(10, w[i] - maxLog[comp[i]]);
+                w[i] = Math.exp(Thermo.LN10 * (w[i] - maxLog[comp[i]]));
                 sum[comp[i]] += w[i];
             }
             for (int i = 0; i < n; i++) {
@@ -335,20 +345,88 @@ public final class Equilibrium {
             return f;
         }
 
-        double chargeBalanceRoot() {
-            UnivariateFunction f = this::chargeBalance;
-            double lo = f.value(PH_LOW);
-            double hi = f.value(PH_HIGH);
-            if (!(lo > 0 && hi < 0)) {
-                throw new IndeterminateException(Caveat.indeterminate("no-root", String.format(Locale.ROOT,
-                        "the charge balance has no root between pH %.0f and %.0f", PH_LOW, PH_HIGH)));
+        /**
+         * The root of the charge balance in [PH_LOW, PH_HIGH]: Newton steps with the analytic slope
+         * df/dpH = −ln10·(mH + mOH + Σ_C term_C) (the buffer capacity at fixed γ), each kept inside the bracket
+         * that the signs so far prove, and bisection wherever a step would leave it. Brent's method is the
+         * fallback should that ever fail to settle.
+         */
+        double chargeBalanceRoot(double guess) {
+            double lo = PH_LOW;
+            double hi = PH_HIGH;
+            boolean warm = Double.isFinite(guess) && guess > lo && guess < hi;
+            if (!warm) {
+                checkBracket();
             }
+            double x = warm ? guess : 7;
+            for (int i = 0; i < 200; i++) {
+                double f = chargeBalance(x);        // fills the working molalities
+                if (f == 0) {
+                    return x;
+                }
+                if (f > 0) {
+                    lo = x;
+                } else {
+                    hi = x;
+                }
+                double slope = -Thermo.LN10 * bufferSumOfWork(x);
+                double next = x - f / slope;
+                if (!(next > lo && next < hi)) {
+                    if (warm && (lo == PH_LOW || hi == PH_HIGH)) {
+                        checkBracket();             // leaving the warm start's neighbourhood: prove the bracket once
+                        warm = false;
+                    }
+                    next = 0.5 * (lo + hi);
+                }
+                if (Math.abs(next - x) < 1e-13 || hi - lo < 1e-13) {
+                    return next;
+                }
+                x = next;
+            }
+            checkBracket();
             try {
-                return new BrentSolver(1e-14, 1e-12).solve(500, f, PH_LOW, PH_HIGH);
+                return new BrentSolver(1e-14, 1e-12).solve(500, this::chargeBalance, PH_LOW, PH_HIGH);
             } catch (MathIllegalStateException e) {
                 throw new IndeterminateException(Caveat.indeterminate("no-convergence",
                         "the charge balance did not converge: " + e.getMessage()));
             }
+        }
+
+        private void checkBracket() {
+            if (!(chargeBalance(PH_LOW) > 0 && chargeBalance(PH_HIGH) < 0)) {
+                throw new IndeterminateException(Caveat.indeterminate("no-root", String.format(Locale.ROOT,
+                        "the charge balance has no root between pH %.0f and %.0f", PH_LOW, PH_HIGH)));
+            }
+        }
+
+        /**
+         * mH + mOH + Σ_C term_C: β/ln10 at fixed activity coefficients (see the class comment), from the
+         * working molalities the last evaluation at this pH filled.
+         */
+        double bufferSumOfWork(double pH) {
+            double[] m = work;
+            double[] meanP = workSum;
+            java.util.Arrays.fill(meanP, 0);
+            double[] totals = workMax;
+            java.util.Arrays.fill(totals, 0);
+            for (int i = 0; i < n; i++) {
+                totals[comp[i]] += m[i];
+            }
+            for (int i = 0; i < n; i++) {
+                int j = comp[i];
+                meanP[j] += totals[j] > 0 ? protons[i] * m[i] / totals[j] : 0;
+            }
+            double sum = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            for (int i = 0; i < n; i++) {
+                int j = comp[i];
+                if (open(j)) {
+                    sum += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                } else {
+                    double d = protons[i] - meanP[j];
+                    sum += m[i] * d * d;
+                }
+            }
+            return sum;
         }
 
         double ionicStrength(double pH) {

@@ -2,6 +2,8 @@ package org.protolyte.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
@@ -16,6 +18,7 @@ import java.util.concurrent.Callable;
 import org.protolyte.Protolyte;
 import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunReport;
+import org.protolyte.report.RunSummary;
 import org.protolyte.report.SarifRenderer;
 import org.protolyte.report.TextRenderer;
 import org.protolyte.rules.RuleBook;
@@ -89,25 +92,80 @@ public final class CheckCommand implements Callable<Integer> {
                 return 2;
             }
         }
-        RunReport run = protolyte.checkInputs(Inputs.expand(files));
-        String text = switch (format) {
-            case json -> new JsonRenderer().render(run);
-            case sarif -> new SarifRenderer().render(run);
-            case text -> new TextRenderer().render(run);
-        };
+        List<Protolyte.Input> inputs = Inputs.expand(files);
+        if (format == Format.sarif) {
+            RunReport run = protolyte.checkInputs(inputs);
+            return emit(new SarifRenderer().render(run), err) ? run.exitCode() : 2;
+        }
+        // text and JSON are streamed: one document at a time, so an archive fits a small heap
+        Path tmp = output == null ? null : Files.createTempFile(output.toAbsolutePath().getParent(),
+                "." + output.getFileName(), ".tmp");
+        Writer out = tmp == null ? spec.commandLine().getOut() : Files.newBufferedWriter(tmp, StandardCharsets.UTF_8);
+        try {
+            RunSummary summary = protolyte.newSummary();
+            if (format == Format.json) {
+                JsonRenderer json = new JsonRenderer();
+                json.begin(out, summary);
+                protolyte.stream(inputs, summary, r -> write(() -> json.document(out, r)));
+                json.end(out, summary);
+            } else {
+                TextRenderer text = new TextRenderer();
+                out.write(text.header(summary.toolVersion()));
+                protolyte.stream(inputs, summary, r -> write(() -> out.write(text.document(r))));
+                out.write(text.footer(summary.skipped(), summary.documents(), summary::count));
+            }
+            out.flush();
+            if (tmp != null) {
+                out.close();
+                move(tmp, output);
+            }
+            return summary.exitCode();
+        } catch (IOException | UncheckedIOException e) {
+            err.println("protolyte: cannot write the report" + (output == null ? "" : " to " + output) + ": "
+                    + e.getMessage());
+            return 2;
+        } finally {
+            if (tmp != null) {
+                out.close();
+                Files.deleteIfExists(tmp);
+            }
+        }
+    }
+
+    private interface IoAction {
+        void run() throws IOException;
+    }
+
+    private static void write(IoAction a) {
+        try {
+            a.run();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private boolean emit(String text, PrintWriter err) {
         if (output == null) {
             PrintWriter out = spec.commandLine().getOut();
             out.print(text);
             out.flush();
-        } else {
-            try {
-                writeAtomically(output, text);
-            } catch (IOException e) {
-                err.println("protolyte: cannot write the report to " + output + ": " + e.getMessage());
-                return 2;
-            }
+            return true;
         }
-        return run.exitCode();
+        try {
+            writeAtomically(output, text);
+            return true;
+        } catch (IOException e) {
+            err.println("protolyte: cannot write the report to " + output + ": " + e.getMessage());
+            return false;
+        }
+    }
+
+    private static void move(Path tmp, Path target) throws IOException {
+        try {
+            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+        }
     }
 
     /** Writes to a temporary file beside the target, then moves it into place: never a half-written report. */
@@ -116,11 +174,7 @@ public final class CheckCommand implements Callable<Integer> {
         Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
         try {
             Files.writeString(tmp, text, StandardCharsets.UTF_8);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
+            move(tmp, target);
         } finally {
             Files.deleteIfExists(tmp);
         }

@@ -11,6 +11,7 @@ import org.protolyte.document.Formulation;
 import org.protolyte.document.Location;
 import org.protolyte.rules.Finding;
 
+import tools.jackson.core.StreamWriteFeature;
 import tools.jackson.databind.SerializationFeature;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
@@ -19,17 +20,50 @@ import tools.jackson.databind.node.ObjectNode;
 /** The machine-readable report; its schema is {@code schemas/report.schema.json}. */
 public final class JsonRenderer {
 
-    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    /** Streaming writes several values to one writer: the mapper must not close it after each. */
+    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT)
+            .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
 
     public String render(RunReport run) {
         return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
     }
 
-    public ObjectNode tree(RunReport run) {
-        ObjectNode root = mapper.createObjectNode();
-        ObjectNode tool = root.putObject("tool");
+    /** Streaming: the opening of the report object up to the reports array; then {@link #document}, then {@link #end}. */
+    public void begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
+        ObjectNode tool = mapper.createObjectNode();
+        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        out.write("{\n\"tool\" : " + mapper.writeValueAsString(tool) + ",\n\"reports\" : [");
+        first = true;
+    }
+
+    /** Streaming: one document's report. */
+    public void document(java.io.Writer out, DocumentReport r) throws java.io.IOException {
+        out.write(first ? " " : ", ");
+        mapper.writeValue(out, document(r));
+        first = false;
+    }
+
+    /** Streaming: the end, with what was skipped and the summary. */
+    public void end(java.io.Writer out, RunSummary run) throws java.io.IOException {
+        ObjectNode tail = mapper.createObjectNode();
+        ArrayNode skipped = tail.putArray("skipped");
+        run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "not a formulation document"));
+        ObjectNode summary = tail.putObject("summary");
+        summary.put("documents", run.documents());
+        for (Status s : Status.values()) {
+            summary.put(s.code(), run.count(s));
+        }
+        summary.put("exitCode", run.exitCode());
+        out.write(" ],\n\"skipped\" : " + mapper.writeValueAsString(tail.get("skipped"))
+                + ",\n\"summary\" : " + mapper.writeValueAsString(summary) + "\n}" + System.lineSeparator());
+    }
+
+    private boolean first = true;
+
+    private void fillTool(ObjectNode tool, String version, java.time.Instant generatedAt,
+                          java.util.Map<String, String> libraryFiles) {
         tool.put("name", "Protolyte");
-        tool.put("version", run.toolVersion());
+        tool.put("version", version);
         tool.put("caution", RunReport.CAUTION);
         tool.put("pHConvention", "conventional pH scale (Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. "
                 + "74 (2002) 2169): pH = −log10(γH·mH) with γH from the Davies equation");
@@ -37,9 +71,15 @@ public final class JsonRenderer {
                 + "published constants (each pKa used and pKw, taken as independent), by linear propagation; they do "
                 + "not cover batch-to-batch variation, the activity model, or the uncertainty of ΔH° and ΔCp° (not yet in "
                 + "the library)");
-        tool.put("generatedAt", run.generatedAt().toString());
+        tool.put("generatedAt", generatedAt.toString());
         ArrayNode library = tool.putArray("substanceLibrary");
-        run.libraryFiles().forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));
+        libraryFiles.forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));
+    }
+
+    public ObjectNode tree(RunReport run) {
+        ObjectNode root = mapper.createObjectNode();
+        ObjectNode tool = root.putObject("tool");
+        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
         ArrayNode reports = root.putArray("reports");
         for (DocumentReport r : run.reports()) {
             reports.add(document(r));

@@ -21,22 +21,38 @@ public final class TextRenderer {
 
     public String render(RunReport run) {
         StringBuilder b = new StringBuilder();
-        b.append("Protolyte ").append(run.toolVersion()).append(NL);
+        b.append(header(run.toolVersion()));
         for (DocumentReport r : run.reports()) {
-            b.append(NL);
-            document(b, r);
+            b.append(document(r));
         }
-        for (String skipped : run.skipped()) {
+        b.append(footer(run.skipped(), run.reports().size(), run::count));
+        return b.toString();
+    }
+
+    /** Streaming: the first line, each document's block, then the footer. */
+    public String header(String version) {
+        return "Protolyte " + version + NL;
+    }
+
+    public String document(DocumentReport r) {
+        StringBuilder b = new StringBuilder(NL);
+        document(b, r);
+        return b.toString();
+    }
+
+    public String footer(List<String> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
+        StringBuilder b = new StringBuilder();
+        for (String skipped : skippedFiles) {
             b.append(NL).append("skipped ").append(skipped).append(": not a formulation document");
         }
-        if (!run.skipped().isEmpty()) {
+        if (!skippedFiles.isEmpty()) {
             b.append(NL);
         }
         b.append(NL).append(String.format(Locale.ROOT, "%d document(s): %d pass, %d fail, %d invalid, %d indeterminate",
-                run.reports().size(), run.count(Status.PASS), run.count(Status.FAIL), run.count(Status.INVALID),
-                run.count(Status.INDETERMINATE)));
-        if (run.count(Status.FAULT) > 0) {
-            b.append(", ").append(run.count(Status.FAULT)).append(" internal fault(s)");
+                documents, count.applyAsLong(Status.PASS), count.applyAsLong(Status.FAIL),
+                count.applyAsLong(Status.INVALID), count.applyAsLong(Status.INDETERMINATE)));
+        if (count.applyAsLong(Status.FAULT) > 0) {
+            b.append(", ").append(count.applyAsLong(Status.FAULT)).append(" internal fault(s)");
         }
         b.append(NL).append(RunReport.CAUTION).append(NL);
         return b.toString();

@@ -24,6 +24,8 @@ public final class Checker {
     private final RuleBook book;
     private final List<String> replace;
     private final List<String> add;
+    /** Effective rules per selection, resolved (and their parameters validated) once, not per document. */
+    private final java.util.Map<List<String>, List<Rule>> resolved = new java.util.concurrent.ConcurrentHashMap<>();
 
     /**
      * @throws IllegalArgumentException for a pack name the book does not hold
@@ -60,7 +62,7 @@ public final class Checker {
     public Verdict check(FormulationAnalysis analysis) {
         List<String> selected = selection(analysis.recipe().formulation().intendedUse());
         List<Finding> out = new ArrayList<>();
-        for (Rule rule : book.rules(selected)) {
+        for (Rule rule : resolved.computeIfAbsent(selected, book::rules)) {
             if (rule.enabled()) {
                 out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
             }

@@ -1,0 +1,67 @@
+package org.protolyte.report;
+
+import java.time.Instant;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * What a streamed run keeps once each document's report has been written: counts, skipped files and the
+ * exit code, never the reports themselves (an archive of ten thousand documents fits a small heap).
+ */
+public final class RunSummary {
+
+    private final String toolVersion;
+    private final Instant generatedAt;
+    private final Map<String, String> libraryFiles;
+    private final Map<Status, Long> counts = new EnumMap<>(Status.class);
+    private final List<String> skipped = new java.util.ArrayList<>();
+    private int documents;
+
+    public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles) {
+        this.toolVersion = toolVersion;
+        this.generatedAt = generatedAt;
+        this.libraryFiles = Map.copyOf(libraryFiles);
+        for (Status s : Status.values()) {
+            counts.put(s, 0L);
+        }
+    }
+
+    public void add(DocumentReport r) {
+        documents++;
+        counts.merge(r.status(), 1L, Long::sum);
+    }
+
+    public void skip(String source) {
+        skipped.add(source);
+    }
+
+    public String toolVersion() {
+        return toolVersion;
+    }
+
+    public Instant generatedAt() {
+        return generatedAt;
+    }
+
+    public Map<String, String> libraryFiles() {
+        return libraryFiles;
+    }
+
+    public int documents() {
+        return documents;
+    }
+
+    public long count(Status s) {
+        return counts.get(s);
+    }
+
+    public List<String> skipped() {
+        return List.copyOf(skipped);
+    }
+
+    public int exitCode() {
+        return counts.entrySet().stream().filter(e -> e.getValue() > 0).mapToInt(e -> e.getKey().exitCode()).max()
+                .orElse(0);
+    }
+}
