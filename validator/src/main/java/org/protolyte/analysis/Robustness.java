@@ -212,6 +212,9 @@ public final class Robustness {
             for (int c = 0; c < conditions.size(); c++) {
                 Formulation.Condition cond = conditions.get(c);
                 var state = a.solve(batch, s, cond.kelvin(), cond.co2Pascal(), Map.of());
+                if (!state.determinate()) {
+                    return null;   // a number the engine cannot stand behind is not a sample
+                }
                 out[0][c] = state.pH();
                 out[1][c] = state.bufferCapacity() * s.waterKg() / s.volumeLitres(cond.kelvin());
             }

@@ -23,6 +23,11 @@ public final class RobustnessRenderer {
         b.append(String.format(Locale.ROOT, "  %d batches simulated (%d solved), seed %d; weighing ±%.3g %% uniform by "
                         + "default, meter reading σ %.3g pH%n", s.samples(), r.samplesSolved(), s.seed(),
                 s.defaultTolerance() * 100, s.meterStandardUncertainty()));
+        if (r.samplesSolved() == 0) {
+            b.append("  INDETERMINATE: no batch could be solved within the engine's limits; 'protolyte check' gives "
+                    + "the diagnostics").append(NL).append(RunReport.CAUTION).append(NL);
+            return b.toString();
+        }
         b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-10s %-22s %s%n", "condition", "pH batch mean [2.5–97.5 %]",
                 "β mmol/L/pH [2.5–97.5]", "P(outside)", "systematic pH [2.5–97.5]", "worst corners"));
         for (Robustness.ConditionRobustness c : r.conditions()) {

@@ -28,9 +28,10 @@ public final class PhWithinLimits implements CheckKind {
         for (ConditionResult c : Conditions.judged(a, rule)) {
             double pH = c.state().orElseThrow().pH();
             if (pH < min || pH > max) {
+                String u = c.uncertainty().map(x -> String.format(Locale.ROOT, " ± %.2f", x.pH())).orElse("");
                 out.add(rule.finding(a.recipe().formulation(), Conditions.pointer(c), String.format(Locale.ROOT,
-                        "pH at %s (%.0f °C) is %.2f, outside %.1f to %.1f", c.condition().name(), Conditions.celsius(c),
-                        pH, min, max)));
+                        "pH at %s (%.0f °C) is %.2f%s, outside %.1f to %.1f", c.condition().name(), Conditions.celsius(c),
+                        pH, u, min, max)));
             }
         }
         return out;

@@ -52,7 +52,8 @@ public final class PhWithinTarget implements CheckKind {
                 "; a CO2 level of %.3g kPa (%.2g %% at standard pressure) would give pH %.2f with this bicarbonate",
                 at.get().co2ForTarget().getAsDouble() / 1000, at.get().co2ForTarget().getAsDouble() / 1013.25,
                 target.midpoint()) : "";
+        String u = at.get().uncertainty().map(x -> String.format(Locale.ROOT, " ± %.2f", x.pH())).orElse("");
         return List.of(rule.finding(f, target.pointer(), String.format(Locale.ROOT,
-                "pH at %.0f °C is %.2f, target %s%s%s%s%s", t, pH, range, main, lever, setpoint, co2)));
+                "pH at %.0f °C is %.2f%s, target %s%s%s%s%s", t, pH, u, range, main, lever, setpoint, co2)));
     }
 }
