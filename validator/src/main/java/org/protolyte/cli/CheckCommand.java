@@ -12,7 +12,6 @@ import java.nio.file.StandardCopyOption;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.protolyte.Protolyte;
@@ -48,7 +47,7 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Option(names = "--fail-on", paramLabel = "SEVERITY",
             description = "Lowest finding severity that fails a document: error (default), warning or note.")
-    String failOn = "error";
+    Severity failOn = Severity.ERROR;
 
     @Option(names = {"-o", "--output"}, paramLabel = "FILE",
             description = "Write the report to FILE (atomically) instead of standard output.")
@@ -67,13 +66,7 @@ public final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
-        Severity threshold;
-        try {
-            threshold = Severity.valueOf(failOn.toUpperCase(Locale.ROOT));
-        } catch (IllegalArgumentException e) {
-            err.println("protolyte: --fail-on takes error, warning or note, not '" + failOn + "'");
-            return 2;
-        }
+        Severity threshold = failOn;
         if (output != null && !Files.isDirectory(output.toAbsolutePath().getParent())) {
             err.println("protolyte: cannot write the report to " + output + ": its folder does not exist");
             return 2;

@@ -3,7 +3,6 @@ package org.protolyte.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.protolyte.Protolyte;
@@ -35,8 +34,9 @@ public final class DiffCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text (default) or json.")
     String format = "text";
 
-    @Option(names = "--fail-on", paramLabel = "SEVERITY", description = "error (default), warning or note.")
-    String failOn = "error";
+    @Option(names = "--fail-on", paramLabel = "SEVERITY",
+            description = "error (default), warning or note.")
+    Severity failOn = Severity.ERROR;
 
     @Mixin
     Setup setup;
@@ -47,13 +47,7 @@ public final class DiffCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
-        Severity threshold;
-        try {
-            threshold = Severity.valueOf(failOn.toUpperCase(Locale.ROOT));
-        } catch (IllegalArgumentException e) {
-            err.println("protolyte: --fail-on takes error, warning or note, not '" + failOn + "'");
-            return 2;
-        }
+        Severity threshold = failOn;
         if (!format.equals("text") && !format.equals("json")) {
             err.println("protolyte: --format takes text or json, not '" + format + "'");
             return 2;

@@ -19,7 +19,7 @@ public final class Main implements Runnable {
     }
 
     static int run(String... args) {
-        CommandLine cl = new CommandLine(new Main());
+        CommandLine cl = new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> {
             cmd.getErr().println("protolyte: internal fault: " + ex);
             return 4;
