@@ -20,6 +20,7 @@ import java.util.function.Consumer;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.Robustness;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.Digests;
@@ -59,8 +60,10 @@ public final class Protolyte {
     private final Checker checker;
     private final Severity failOn;
     private final SubstanceLibrary library;
+    private final SchemaCatalog schemas;
 
     private final Waivers waivers;
+    private final Optional<Robustness.Settings> robustness;
 
     /** Judged by the shipped packs that apply to each document's intended use; errors fail; no waivers. */
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
@@ -73,12 +76,19 @@ public final class Protolyte {
 
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn,
                      Waivers waivers) {
+        this(schemas, library, checker, failOn, waivers, Optional.empty());
+    }
+
+    private Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn,
+                      Waivers waivers, Optional<Robustness.Settings> robustness) {
+        this.robustness = robustness;
         this.reader = new FormulationReader(schemas);
         this.resolver = new RecipeResolver(library);
         this.checker = checker;
         this.failOn = failOn;
         this.library = library;
         this.waivers = waivers;
+        this.schemas = schemas;
     }
 
     public static String version() {
@@ -150,6 +160,11 @@ public final class Protolyte {
         }
     }
 
+    /** Runs a robustness study on every formulation too, so that rules can judge the batch-to-batch risk. */
+    public Protolyte withRobustness(Robustness.Settings settings) {
+        return new Protolyte(schemas, library, checker, failOn, waivers, Optional.of(settings));
+    }
+
     /** A new run's summary: the tool version, now, and the library files with their hashes. */
     public RunSummary newSummary() {
         return new RunSummary(version(), Instant.now(), library.files());
@@ -213,6 +228,10 @@ public final class Protolyte {
             }
             Recipe recipe = resolver.resolve(f);
             FormulationAnalysis analysis = analyzer.analyze(recipe);
+            if (robustness.isPresent()) {
+                analysis = analysis.withRobustness(new Robustness(new Equilibrium(Davies.INSTANCE))
+                        .run(recipe, robustness.get(), done -> { }));
+            }
             Checker.Verdict verdict;
             try {
                 verdict = checker.check(analysis);

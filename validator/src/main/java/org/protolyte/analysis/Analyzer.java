@@ -65,7 +65,7 @@ public final class Analyzer {
         results = new ConstantsPropagation(equilibrium).apply(recipe, solution, results);
         return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe),
                 sensitivities(recipe, doses, results), drifts(recipe, results),
-                titratableAcidity(recipe, solution));
+                titratableAcidity(recipe, solution), Optional.empty());
     }
 
     /** pH and buffer capacity (mol/L per pH) of every condition, q.s. included; NaN where not determinate. */

@@ -9,12 +9,19 @@ import org.protolyte.recipe.Solution;
 
 /**
  * Everything computed for one formulation: per condition, the q.s. titrants, what was assumed, and the
- * sensitivity of the pH at the target's temperature to each component (largest first).
+ * sensitivity of the pH at the target's temperature to each component (largest first), and a robustness
+ * study where one was asked for.
  */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
-                                  Optional<TitratableAcidity> titratableAcidity) {
+                                  Optional<TitratableAcidity> titratableAcidity,
+                                  Optional<Robustness.Result> robustness) {
+
+    public FormulationAnalysis withRobustness(Robustness.Result r) {
+        return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
+                drifts, titratableAcidity, Optional.of(r));
+    }
 
     public FormulationAnalysis {
         drifts = List.copyOf(drifts);

@@ -15,6 +15,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.protolyte.Protolyte;
+import org.protolyte.analysis.Robustness;
 import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunReport;
 import org.protolyte.report.RunSummary;
@@ -57,6 +58,11 @@ public final class CheckCommand implements Callable<Integer> {
             description = "The waiver file QA holds: accepted findings, per document revision.")
     Path waivers;
 
+    @Option(names = "--robustness", paramLabel = "SAMPLES",
+            description = "Also run a robustness study of SAMPLES batches per document (seed fixed), so that "
+                    + "batch-risk rules can judge it.")
+    Integer robustnessSamples;
+
     @Mixin
     Setup setup;
 
@@ -76,6 +82,15 @@ public final class CheckCommand implements Callable<Integer> {
             RuleBook book = setup.ruleBook();
             protolyte = new Protolyte(setup.schemas, setup.library(), setup.checker(book), threshold,
                     setup.waivers(waivers, LocalDate.now()));
+            if (robustnessSamples != null) {
+                if (robustnessSamples < 10 || robustnessSamples > 1_000_000) {
+                    err.println("protolyte: --robustness takes 10 to 1000000 samples");
+                    return 2;
+                }
+                Robustness.Settings d = Robustness.Settings.defaults();
+                protolyte = protolyte.withRobustness(new Robustness.Settings(robustnessSamples, d.seed(),
+                        d.defaultTolerance(), d.meterStandardUncertainty()));
+            }
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
         }

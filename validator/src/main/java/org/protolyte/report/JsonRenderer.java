@@ -159,6 +159,17 @@ public final class JsonRenderer {
             ObjectNode o = n.putObject("titratableAcidity").put("mmolPerLitre", Numbers.significant(t.mmolPerLitre(), 4));
             t.mmolPerDose().ifPresent(x -> o.put("mmolPerDose", Numbers.significant(x, 4)));
         });
+        a.robustness().ifPresent(r -> {
+            ObjectNode o = n.putObject("robustness").put("samples", r.settings().samples()).put("seed", r.settings().seed())
+                    .put("samplesSolved", r.samplesSolved());
+            ArrayNode cs = o.putArray("conditions");
+            r.conditions().forEach(c -> {
+                ObjectNode x = cs.addObject().put("name", c.condition());
+                x.putObject("pH").put("mean", Numbers.decimals(c.pH().mean(), 4)).put("p2_5", Numbers.decimals(c.pH().p025(), 4))
+                        .put("p97_5", Numbers.decimals(c.pH().p975(), 4));
+                c.probabilityOutsideTarget().ifPresent(p -> x.put("probabilityOutsideTarget", Numbers.significant(p, 3)));
+            });
+        });
         ArrayNode sens = n.putArray("targetSensitivities");
         a.targetSensitivities().forEach(x -> sens.addObject().put("substance", x.substance()).put("pointer", x.pointer())
                 .put("dpHPerPercent", Numbers.significant(x.dpHPerPercent(), 3)));
