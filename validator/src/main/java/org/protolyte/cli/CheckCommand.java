@@ -112,10 +112,9 @@ public final class CheckCommand implements Callable<Integer> {
         try {
             RunSummary summary = protolyte.newSummary();
             if (format == Format.json) {
-                JsonRenderer json = new JsonRenderer();
-                json.begin(out, summary);
-                protolyte.stream(inputs, summary, r -> write(() -> json.document(out, r)));
-                json.end(out, summary);
+                JsonRenderer.Stream json = new JsonRenderer().begin(out, summary);
+                protolyte.stream(inputs, summary, r -> write(() -> json.document(r)));
+                json.end(summary);
             } else {
                 TextRenderer text = new TextRenderer();
                 out.write(text.header(summary.toolVersion()));

@@ -28,37 +28,46 @@ public final class JsonRenderer {
         return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
     }
 
-    /** Streaming: the opening of the report object up to the reports array; then {@link #document}, then {@link #end}. */
-    public void begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
+    /**
+     * A report written as it goes: {@link #begin} opens it, {@link Stream#document} adds one document's report,
+     * {@link Stream#end} closes it with what was skipped and the summary.
+     */
+    public Stream begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
         ObjectNode tool = mapper.createObjectNode();
         fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
         out.write("{\n\"tool\" : " + mapper.writeValueAsString(tool) + ",\n\"reports\" : [");
-        first = true;
+        return new Stream(out);
     }
 
-    /** Streaming: one document's report. */
-    public void document(java.io.Writer out, DocumentReport r) throws java.io.IOException {
-        out.write(first ? " " : ", ");
-        mapper.writeValue(out, document(r));
-        first = false;
-    }
+    /** One streamed report; not shared between threads. */
+    public final class Stream {
+        private final java.io.Writer out;
+        private boolean first = true;
 
-    /** Streaming: the end, with what was skipped and the summary. */
-    public void end(java.io.Writer out, RunSummary run) throws java.io.IOException {
-        ObjectNode tail = mapper.createObjectNode();
-        ArrayNode skipped = tail.putArray("skipped");
-        run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "not a formulation document"));
-        ObjectNode summary = tail.putObject("summary");
-        summary.put("documents", run.documents());
-        for (Status s : Status.values()) {
-            summary.put(s.code(), run.count(s));
+        private Stream(java.io.Writer out) {
+            this.out = out;
         }
-        summary.put("exitCode", run.exitCode());
-        out.write(" ],\n\"skipped\" : " + mapper.writeValueAsString(tail.get("skipped"))
-                + ",\n\"summary\" : " + mapper.writeValueAsString(summary) + "\n}" + System.lineSeparator());
-    }
 
-    private boolean first = true;
+        public void document(DocumentReport r) throws java.io.IOException {
+            out.write(first ? " " : ", ");
+            mapper.writeValue(out, JsonRenderer.this.document(r));
+            first = false;
+        }
+
+        public void end(RunSummary run) throws java.io.IOException {
+            ObjectNode tail = mapper.createObjectNode();
+            ArrayNode skipped = tail.putArray("skipped");
+            run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "not a formulation document"));
+            ObjectNode summary = tail.putObject("summary");
+            summary.put("documents", run.documents());
+            for (Status s : Status.values()) {
+                summary.put(s.code(), run.count(s));
+            }
+            summary.put("exitCode", run.exitCode());
+            out.write(" ],\n\"skipped\" : " + mapper.writeValueAsString(skipped)
+                    + ",\n\"summary\" : " + mapper.writeValueAsString(summary) + "\n}" + System.lineSeparator());
+        }
+    }
 
     private void fillTool(ObjectNode tool, String version, java.time.Instant generatedAt,
                           java.util.Map<String, String> libraryFiles) {
