@@ -7,7 +7,8 @@ import picocli.CommandLine.Command;
 @Command(name = "protolyte", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Checks buffer and medium recipes: equilibrium pH, buffer capacity and rule findings.%n"
                 + "A decision aid: release rests on measured values, the pharmacopoeia, local SOPs and QA review.",
-        subcommands = {CheckCommand.class, DiffCommand.class, RobustnessCommand.class, RulesCommand.class, ExplainCommand.class,
+        subcommands = {CheckCommand.class, DiffCommand.class, RobustnessCommand.class, SubstancesCommand.class,
+                RulesCommand.class, ExplainCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 

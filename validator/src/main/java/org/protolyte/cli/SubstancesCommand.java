@@ -1,0 +1,80 @@
+package org.protolyte.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.DissociationStep;
+import org.protolyte.substance.Composition;
+import org.protolyte.substance.Substance;
+import org.protolyte.substance.SubstanceLibrary;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Parameters;
+
+/** {@code protolyte substances [QUERY]}: the library as a reviewer reads it, with constants and their sources. */
+@Command(name = "substances", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
+        description = "Lists the substance library, or the entries whose name or synonym contains QUERY, with their "
+                + "formula, molar mass, composition, and the constants and sources of their acid–base systems.")
+public final class SubstancesCommand implements Callable<Integer> {
+
+    @Parameters(arity = "0..1", paramLabel = "QUERY")
+    String query;
+
+    @Mixin
+    Setup setup;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        SubstanceLibrary library;
+        try {
+            library = setup.library();
+        } catch (Setup.UsageException e) {
+            return Setup.usage(spec.commandLine().getErr(), e);
+        }
+        String key = query == null ? "" : SubstanceLibrary.normalise(query);
+        List<Substance> hits = library.substances().stream().filter(s -> key.isEmpty()
+                || SubstanceLibrary.normalise(s.name()).contains(key)
+                || s.synonyms().stream().anyMatch(x -> SubstanceLibrary.normalise(x).contains(key))).toList();
+        if (hits.isEmpty()) {
+            spec.commandLine().getErr().println("protolyte: no substance matches '" + query + "'");
+            return 2;
+        }
+        for (Substance s : hits) {
+            out.printf(Locale.ROOT, "%s%s%n", s.name(), s.origin().equals("shipped library") ? "" : "  [" + s.origin() + "]");
+            s.formula().ifPresent(f -> out.printf(Locale.ROOT, "  formula %s, %.3f g/mol%s%n", f, s.molarMass().orElse(Double.NaN),
+                    f.hydrationWater() > 0 ? ", " + f.hydrationWater() + " H2O of hydration" : ""));
+            if (!s.synonyms().isEmpty()) {
+                out.println("  also: " + String.join("; ", s.synonyms()));
+            }
+            Composition c = s.composition();
+            c.ions().forEach((ion, n) -> out.printf(Locale.ROOT, "  ion %s × %s%n", ion, n));
+            c.solutes().forEach((solute, n) -> out.printf(Locale.ROOT, "  neutral solute %s × %s%n", solute, n));
+            for (Composition.SystemPart part : c.systems()) {
+                out.printf(Locale.ROOT, "  %s × %s as %s%n", part.system(), part.count(), part.form());
+                AcidBaseSystem system = library.system(part.system()).orElseThrow();
+                for (int k = 0; k < system.steps().size(); k++) {
+                    DissociationStep st = system.steps().get(k);
+                    out.printf(Locale.ROOT, "    %s ⇌ %s: pKa %.3f ± %.3f, ΔH° %.2f kJ/mol, ΔCp° %.0f J/(K·mol), %s%n",
+                            system.forms().get(k).name(), system.forms().get(k + 1).name(), st.pKa25(), st.uncertainty(),
+                            st.deltaH() / 1000, st.deltaCp(), st.validity());
+                }
+                out.println("    source: " + library.systemSource(part.system()));
+            }
+            s.handling().hazards().forEach(h -> out.printf(Locale.ROOT, "  hazard %s, %s (%s)%n", h.classification(),
+                    h.statement(), h.source()));
+            s.handling().lightSensitivity().ifPresent(l -> out.println("  light: " + l.text() + " (" + l.source() + ")"));
+        }
+        out.flush();
+        return 0;
+    }
+}
