@@ -170,17 +170,12 @@ public final class Protolyte {
         return new RunSummary(version(), Instant.now(), library.files());
     }
 
+    /** The whole run held in memory, for renderers that need every report at once (SARIF). */
     public RunReport checkInputs(List<Input> inputs) {
         List<DocumentReport> reports = new ArrayList<>();
-        List<String> skipped = new ArrayList<>();
-        for (Input in : inputs) {
-            if (in.foundInFolder() && !isFormulation(in.path())) {
-                skipped.add(in.path().toString());
-                continue;
-            }
-            reports.add(check(in.path()));
-        }
-        return new RunReport(version(), Instant.now(), library.files(), reports, skipped);
+        RunSummary summary = stream(inputs, newSummary(), reports::add);
+        return new RunReport(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles(), reports,
+                summary.skipped());
     }
 
     /**

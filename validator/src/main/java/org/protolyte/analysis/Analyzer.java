@@ -244,7 +244,7 @@ public final class Analyzer {
     /** For a CO2 condition at the target's temperature: the CO2 partial pressure giving the target's midpoint. */
     private OptionalDouble co2ForTarget(Recipe recipe, Solution solution, Formulation.Condition c) {
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
-        if (c.co2Pascal().isEmpty() || target.isEmpty() || Math.abs(target.get().kelvin() - c.kelvin()) > 0.005
+        if (c.co2Pascal().isEmpty() || target.isEmpty() || !Formulation.sameTemperature(target.get().kelvin(), c.kelvin())
                 || !Double.isFinite(target.get().midpoint())) {
             return OptionalDouble.empty();
         }
@@ -269,7 +269,7 @@ public final class Analyzer {
             return List.of();
         }
         Optional<ConditionResult> at = results.stream().filter(ConditionResult::determinate)
-                .filter(c -> Math.abs(c.condition().kelvin() - target.get().kelvin()) < 0.005).findFirst();
+                .filter(c -> Formulation.sameTemperature(c.condition().kelvin(), target.get().kelvin())).findFirst();
         if (at.isEmpty()) {
             return List.of();
         }
@@ -393,7 +393,7 @@ public final class Analyzer {
 
     /** The CO2 state of the condition at a temperature (the first one there), closed if none matches. */
     private static OptionalDouble co2At(Recipe recipe, double kelvin) {
-        return recipe.formulation().conditions().stream().filter(c -> Math.abs(c.kelvin() - kelvin) < 0.005)
+        return recipe.formulation().conditions().stream().filter(c -> Formulation.sameTemperature(c.kelvin(), kelvin))
                 .findFirst().map(Formulation.Condition::co2Pascal).orElse(OptionalDouble.empty());
     }
 
@@ -447,7 +447,7 @@ public final class Analyzer {
         }
         if (lines.size() == 2) {
             Formulation.Adjustment other = lines.get(1).line().adjustTo().orElseThrow();
-            if (Math.abs(other.kelvin() - adjustK) > 0.005 || !other.pH().equals(adj.pH())) {
+            if (!Formulation.sameTemperature(other.kelvin(), adjustK) || !other.pH().equals(adj.pH())) {
                 throw new DocumentException(f.document().problem(other.pointer(),
                         "an acid and a base adjusting the same recipe must carry the same adjustTo"));
             }

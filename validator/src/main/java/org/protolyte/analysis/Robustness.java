@@ -101,7 +101,7 @@ public final class Robustness {
         double[][] nominal = sample(analyzer, recipe, Map.of(), 0, nominalDose);
         for (int c = 0; c < n; c++) {
             Formulation.Condition cond = conditions.get(c);
-            boolean atTarget = recipe.formulation().pHTarget().map(t -> Math.abs(t.kelvin() - cond.kelvin()) < 0.005)
+            boolean atTarget = recipe.formulation().pHTarget().map(t -> Formulation.sameTemperature(t.kelvin(), cond.kelvin()))
                     .orElse(false);
             Map<String, Double> sensitivities = sensitivities(recipe, weighed, c, nominal, nominalDose);
             double[] corners = corners(recipe, weighed, tolerances, sensitivities, c, nominalDose);
@@ -117,7 +117,7 @@ public final class Robustness {
     }
 
     private static boolean outsideTarget(Recipe recipe, Formulation.Condition c, double pH) {
-        return recipe.formulation().pHTarget().filter(t -> Math.abs(t.kelvin() - c.kelvin()) < 0.005)
+        return recipe.formulation().pHTarget().filter(t -> Formulation.sameTemperature(t.kelvin(), c.kelvin()))
                 .map(t -> !t.contains(pH)).orElse(false);
     }
 

@@ -14,6 +14,11 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
                           Optional<String> intendedUse, Basis basis, List<Line> components,
                           Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres) {
 
+    /** Two temperatures within 0.005 K are the same condition (document values carry two decimals of °C). */
+    public static boolean sameTemperature(double kelvin, double other) {
+        return Math.abs(kelvin - other) < 0.005;
+    }
+
     public Formulation {
         components = List.copyOf(components);
         conditions = List.copyOf(conditions);

@@ -259,7 +259,7 @@ public final class FormulationReader {
             }
             if (target.isPresent()) {
                 double tk = target.get().kelvin();
-                boolean matched = out.stream().anyMatch(c -> Math.abs(c.kelvin() - tk) < 0.005);
+                boolean matched = out.stream().anyMatch(c -> Formulation.sameTemperature(c.kelvin(), tk));
                 if (!matched) {
                     String name = names.contains("target") ? "target (pH)" : "target";
                     out.add(new Formulation.Condition(name, tk, true, target.get().pointer()));

@@ -28,7 +28,7 @@ final class Conditions {
         if (target.isEmpty()) {
             return Optional.empty();
         }
-        return a.conditions().stream().filter(c -> Math.abs(c.condition().kelvin() - target.get().kelvin()) < 0.005)
+        return a.conditions().stream().filter(c -> Formulation.sameTemperature(c.condition().kelvin(), target.get().kelvin()))
                 .filter(ConditionResult::determinate).findFirst();
     }
 

@@ -52,6 +52,7 @@ class BuiltInChecksTest {
         DocumentReport r = check(", \"revision\": \"A\"", "{\"value\": 6.9, \"tolerance\": 0.1}");
         assertEquals(Status.PASS, r.status());
         assertEquals(List.of("ph-target-temperature-stated"), rules(r));
+        // 25 °C = 298.15 K by the definition of the Celsius scale (derived)
         assertEquals(298.15, r.analysis().orElseThrow().conditions().get(0).condition().kelvin(), 1e-9);
     }
 
