@@ -2,6 +2,8 @@ package org.protolyte.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -73,8 +75,20 @@ public final class SubstancesCommand implements Callable<Integer> {
             s.handling().hazards().forEach(h -> out.printf(Locale.ROOT, "  hazard %s, %s (%s)%n", h.classification(),
                     h.statement(), h.source()));
             s.handling().lightSensitivity().ifPresent(l -> out.println("  light: " + l.text() + " (" + l.source() + ")"));
+            s.handling().solubility().ifPresent(sol -> out.printf(Locale.ROOT, "  solubility in water: %s at %s °C (%s)%n",
+                    sol.gramsPerLitre().isPresent()
+                            ? plain(sol.gramsPerLitre().getAsDouble()) + " g/L" + sol.term().map(t -> ", " + t).orElse("")
+                            : sol.term().orElseThrow(),
+                    plain(sol.celsius()), sol.source()));
+            s.handling().hygroscopy().ifPresent(h -> out.println("  " + h.behaviour()
+                    + (h.text().isEmpty() ? "" : ": " + h.text()) + " (" + h.source() + ")"));
         }
         out.flush();
         return 0;
+    }
+
+    /** A handbook number as written: three significant figures, no trailing zeros. */
+    private static String plain(double x) {
+        return new BigDecimal(x).round(new MathContext(3)).stripTrailingZeros().toPlainString();
     }
 }

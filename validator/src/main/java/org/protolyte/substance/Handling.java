@@ -2,12 +2,15 @@ package org.protolyte.substance;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
- * Handling data a rule reads: hazard classifications and light sensitivity, each with its source.
- * Empty where the library has no data: rules then say nothing rather than guess.
+ * Handling data a rule reads: hazard classifications, light sensitivity, solubility in water and how the solid
+ * exchanges water with air, each with its source. Empty where the library has no data: rules then say nothing
+ * rather than guess.
  */
-public record Handling(List<Hazard> hazards, Optional<Sourced> lightSensitivity) {
+public record Handling(List<Hazard> hazards, Optional<Sourced> lightSensitivity, Optional<Solubility> solubility,
+                       Optional<Hygroscopy> hygroscopy) {
 
     /** A harmonised (or supplier) hazard classification, e.g. "Skin Corr. 1B" with "H314". */
     public record Hazard(String classification, String statement, String appliesTo, String source) {
@@ -17,11 +20,19 @@ public record Handling(List<Hazard> hazards, Optional<Sourced> lightSensitivity)
     public record Sourced(String text, String source) {
     }
 
+    /** Solubility of the form in water at a temperature: g/L and/or the pharmacopoeial term (Ph. Eur. 1.4). */
+    public record Solubility(OptionalDouble gramsPerLitre, Optional<String> term, double celsius, String source) {
+    }
+
+    /** hygroscopic, deliquescent, efflorescent or stable, with what it means for a weighing. */
+    public record Hygroscopy(String behaviour, String text, String source) {
+    }
+
     public Handling {
         hazards = List.copyOf(hazards);
     }
 
     public static Handling none() {
-        return new Handling(List.of(), Optional.empty());
+        return new Handling(List.of(), Optional.empty(), Optional.empty(), Optional.empty());
     }
 }

@@ -210,8 +210,18 @@ public final class LibraryLoader {
                         h.path("appliesTo").asString("the substance as supplied"), h.get("source").asString()));
             }
             JsonNode light = n.get("lightSensitivity");
-            return new Handling(hazards, light == null ? Optional.empty()
-                    : Optional.of(new Handling.Sourced(light.get("text").asString(), light.get("source").asString())));
+            JsonNode sol = n.get("solubility");
+            JsonNode hyg = n.get("hygroscopy");
+            return new Handling(hazards,
+                    light == null ? Optional.empty()
+                            : Optional.of(new Handling.Sourced(light.get("text").asString(), light.get("source").asString())),
+                    sol == null ? Optional.empty() : Optional.of(new Handling.Solubility(
+                            sol.has("gramsPerLitre") ? OptionalDouble.of(sol.get("gramsPerLitre").asDouble())
+                                    : OptionalDouble.empty(),
+                            sol.has("term") ? Optional.of(sol.get("term").asString()) : Optional.empty(),
+                            sol.get("temperature").asDouble(), sol.get("source").asString())),
+                    hyg == null ? Optional.empty() : Optional.of(new Handling.Hygroscopy(hyg.get("behaviour").asString(),
+                            hyg.path("text").asString(""), hyg.get("source").asString())));
         }
 
         private void register(Substance s, JsonNode n, String pointer) {
