@@ -305,16 +305,27 @@ public final class Analyzer {
      */
     EquilibriumState solve(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
                            Map<Component, Double> extra) {
-        List<Species> species = new ArrayList<>(solution.species());
         Map<Component, Double> totals = new LinkedHashMap<>(solution.totals());
-        extra.forEach((c, m) -> {
-            totals.merge(c, m, Double::sum);
+        extra.forEach((c, m) -> totals.merge(c, m, Double::sum));
+        return prepare(recipe, solution, kelvin, co2, extra.keySet()).solve(totals, Double.NaN);
+    }
+
+    /**
+     * The problem of a solution's species at a temperature, closed or open to a CO2 partial pressure (Pa), with
+     * room for extra strong ions: prepared once, solved for any amounts of the same ingredients.
+     */
+    Equilibrium.Prepared prepare(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
+                                 java.util.Set<Component> extraIons) {
+        List<Species> species = new ArrayList<>(solution.species());
+        java.util.Set<Component> components = new java.util.LinkedHashSet<>(solution.totals().keySet());
+        for (Component c : extraIons) {
+            components.add(c);
             if (!species.contains(Species.free(c))) {
                 species.add(Species.free(c));
             }
-        });
+        }
         if (co2.isEmpty()) {
-            return equilibrium.solve(species, totals, kelvin);
+            return equilibrium.prepare(species, components, kelvin, Map.of());
         }
         AcidBaseSystem carbonate = recipe.library().system(CARBONATE).orElseThrow(() -> new IndeterminateException(
                 Caveat.indeterminate("no-carbonate-system", "the library has no 'carbonate' system for a CO2 condition")));
@@ -323,9 +334,9 @@ public final class Analyzer {
                 species.add(x);
             }
         }
-        totals.putIfAbsent(carbonate.basis(), 0.0);
+        components.add(carbonate.basis());
         Species dissolved = carbonate.species().get(0);
-        return equilibrium.solve(species, totals, kelvin, Double.NaN,
+        return equilibrium.prepare(species, components, kelvin,
                 Map.of(dissolved, CarbonDioxide.dissolvedMolality(kelvin, co2.getAsDouble())));
     }
 

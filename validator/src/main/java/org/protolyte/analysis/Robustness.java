@@ -1,10 +1,12 @@
 package org.protolyte.analysis;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.function.IntConsumer;
 
 import org.apache.commons.math3.random.RandomGenerator;
@@ -68,6 +70,7 @@ public final class Robustness {
         Map<String, Double> tolerances = new LinkedHashMap<>();
         weighed.forEach(i -> tolerances.put(i.substance().name(), tolerance(i, settings)));
         Nominal nominalDose = doses(analyzer, recipe);
+        Sampler sampler = new Sampler(analyzer, recipe, nominalDose);
         RandomGenerator random = new Well19937c(settings.seed());
         int n = conditions.size();
         DescriptiveStatistics[] pH = stats(n);
@@ -81,7 +84,7 @@ public final class Robustness {
                 scale.put(i, 1 + t * (2 * random.nextDouble() - 1));
             }
             double meter = settings.meterStandardUncertainty() * random.nextGaussian();
-            double[][] r = sample(analyzer, recipe, scale, meter, nominalDose);
+            double[][] r = sampler.sample(scale, meter);
             if (r != null) {
                 solved++;
                 for (int c = 0; c < n; c++) {
@@ -98,13 +101,13 @@ public final class Robustness {
         }
         DescriptiveStatistics[] systematic = systematic(recipe, settings, random, n, nominalDose);
         List<ConditionRobustness> out = new ArrayList<>();
-        double[][] nominal = sample(analyzer, recipe, Map.of(), 0, nominalDose);
+        double[][] nominal = sampler.nominal();
         for (int c = 0; c < n; c++) {
             Formulation.Condition cond = conditions.get(c);
             boolean atTarget = recipe.formulation().pHTarget().map(t -> Formulation.sameTemperature(t.kelvin(), cond.kelvin()))
                     .orElse(false);
-            Map<String, Double> sensitivities = sensitivities(recipe, weighed, c, nominal, nominalDose);
-            double[] corners = corners(recipe, weighed, tolerances, sensitivities, c, nominalDose);
+            Map<String, Double> sensitivities = sensitivities(sampler, weighed, c, nominal);
+            double[] corners = corners(sampler, weighed, tolerances, sensitivities, c);
             out.add(new ConditionRobustness(cond.name(), interval(pH[c]), interval(beta[c]),
                     atTarget && solved > 0 ? OptionalDouble.of((double) outside[c] / solved) : OptionalDouble.empty(),
                     interval(systematic[c]), corners[0], corners[1], sensitivities));
@@ -155,7 +158,7 @@ public final class Robustness {
             }
             Analyzer shifted = new Analyzer(equilibrium.withPKaShifts(shifts)
                     .withPKwShift(Equilibrium.PKW_UNCERTAINTY * random.nextGaussian()));
-            double[][] r = sample(shifted, recipe, Map.of(), 0, nominal);
+            double[][] r = new Sampler(shifted, recipe, nominal).nominal();
             if (r != null) {
                 for (int c = 0; c < n; c++) {
                     out[c].addValue(r[0][c]);
@@ -182,76 +185,135 @@ public final class Robustness {
     }
 
     /**
-     * One batch: weighed amounts scaled, the q.s. dosed again so that the meter reads its setpoint plus
-     * {@code meterError} (secant steps from the nominal dose), then every condition solved. Null where the
-     * batch cannot be solved.
+     * Batches of one recipe, solved through problems prepared once: the species and the temperatures are the
+     * same for every batch, only the amounts change, and each solve starts from the nominal batch's solution.
      */
-    double[][] sample(Analyzer a, Recipe recipe, Map<Ingredient, Double> scale, double meterError, Nominal nominalDose) {
-        List<Ingredient> changed = new ArrayList<>();
-        Map<Ingredient, Ingredient> map = new LinkedHashMap<>();
-        for (Ingredient i : recipe.ingredients()) {
-            double f = scale.getOrDefault(i, 1.0);
-            Ingredient x = f == 1.0 ? i : new Ingredient(i.line(), i.substance(), i.kind(), i.value() * f,
-                    i.stockMolarity(), i.stockDensity());
-            changed.add(x);
-            map.put(i, x);
-        }
-        Recipe batch = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
-        try {
-            Map<Ingredient, Double> doses = new LinkedHashMap<>();
-            List<Ingredient> titrants = batch.titrants();
-            for (int i = 0; i < titrants.size(); i++) {
-                if (nominalDose.moles()[i] > 0 && !Double.isNaN(nominalDose.setpoint()[i])) {
-                    doses.put(titrants.get(i), redose(a, batch, titrants.get(i), nominalDose.moles()[i],
-                            nominalDose.setpoint()[i] + meterError));
-                }
-            }
-            Solution s = batch.solution(doses);
-            List<Formulation.Condition> conditions = batch.formulation().conditions();
-            double[][] out = new double[2][conditions.size()];
-            for (int c = 0; c < conditions.size(); c++) {
-                Formulation.Condition cond = conditions.get(c);
-                var state = a.solve(batch, s, cond.kelvin(), cond.co2Pascal(), Map.of());
-                if (!state.determinate()) {
-                    return null;   // a number the engine cannot stand behind is not a sample
-                }
-                out[0][c] = state.pH();
-                out[1][c] = state.bufferCapacity() * s.waterKg() / s.volumeLitres(cond.kelvin());
-            }
-            return out;
-        } catch (IndeterminateException | IllegalStateException e) {
-            return null;
-        }
-    }
+    static final class Sampler {
+        private final Analyzer analyzer;
+        private final Recipe recipe;
+        private final Nominal dose;
+        private final Equilibrium.Prepared[] conditions;
+        private final Equilibrium.Point[] warm;
+        private final Equilibrium.Prepared[] meters;      // per titrant, at its adjustment; null where not dosed again
+        private final Equilibrium.Point[] meterWarm;
+        private final double[][] nominal;
 
-    /** The dose at which the meter (adjustment temperature, part volume, closed) reads {@code goal}: secant steps. */
-    private static double redose(Analyzer a, Recipe batch, Ingredient titrant, double nominal, double goal) {
-        double x0 = nominal;
-        double f0 = a.meterReading(batch, titrant, x0) - goal;
-        double x1 = nominal * 1.01 + 1e-9;
-        double f1 = a.meterReading(batch, titrant, x1) - goal;
-        for (int i = 0; i < 30 && Math.abs(f1) > 1e-7; i++) {
-            double x2 = Math.max(0, x1 - f1 * (x1 - x0) / (f1 - f0));
-            x0 = x1;
-            f0 = f1;
-            x1 = x2;
-            f1 = a.meterReading(batch, titrant, x1) - goal;
+        Sampler(Analyzer analyzer, Recipe recipe, Nominal dose) {
+            this.analyzer = analyzer;
+            this.recipe = recipe;
+            this.dose = dose;
+            Solution s = recipe.solution(Map.of());
+            List<Formulation.Condition> cs = recipe.formulation().conditions();
+            conditions = new Equilibrium.Prepared[cs.size()];
+            warm = new Equilibrium.Point[cs.size()];
+            for (int c = 0; c < cs.size(); c++) {
+                conditions[c] = analyzer.prepare(recipe, s, cs.get(c).kelvin(), cs.get(c).co2Pascal(), Set.of());
+            }
+            List<Ingredient> titrants = recipe.titrants();
+            meters = new Equilibrium.Prepared[titrants.size()];
+            meterWarm = new Equilibrium.Point[titrants.size()];
+            for (int i = 0; i < titrants.size(); i++) {
+                if (redosed(i)) {
+                    double kelvin = titrants.get(i).line().adjustTo().orElseThrow().kelvin();
+                    meters[i] = analyzer.prepare(recipe, s, kelvin, OptionalDouble.empty(), Set.of());
+                }
+            }
+            nominal = sample(Map.of(), 0);      // fills the warm starts
+            if (nominal == null) {
+                Arrays.fill(warm, null);
+                Arrays.fill(meterWarm, null);
+            }
         }
-        if (Math.abs(f1) > 1e-4) {
-            throw new IllegalStateException("the q.s. of this batch did not converge");
+
+        /** The nominal batch, as {@link #sample} gives it; null where it cannot be solved. */
+        double[][] nominal() {
+            return nominal;
         }
-        return x1;
+
+        private boolean redosed(int titrant) {
+            return dose.moles()[titrant] > 0 && !Double.isNaN(dose.setpoint()[titrant]);
+        }
+
+        /**
+         * One batch: weighed amounts scaled, the q.s. dosed again so that the meter reads its setpoint plus
+         * {@code meterError} (secant steps from the nominal dose), then every condition solved: {pH[], β[] in
+         * mol/L per pH}. Null where the batch cannot be solved.
+         */
+        double[][] sample(Map<Ingredient, Double> scale, double meterError) {
+            List<Ingredient> changed = new ArrayList<>();
+            for (Ingredient i : recipe.ingredients()) {
+                double f = scale.getOrDefault(i, 1.0);
+                changed.add(f == 1.0 ? i : new Ingredient(i.line(), i.substance(), i.kind(), i.value() * f,
+                        i.stockMolarity(), i.stockDensity()));
+            }
+            Recipe batch = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
+            try {
+                Map<Ingredient, Double> doses = new LinkedHashMap<>();
+                List<Ingredient> titrants = batch.titrants();
+                for (int i = 0; i < titrants.size(); i++) {
+                    if (meters[i] != null) {
+                        doses.put(titrants.get(i), redose(batch, i, dose.moles()[i], dose.setpoint()[i] + meterError));
+                    }
+                }
+                Solution s = batch.solution(doses);
+                List<Formulation.Condition> cs = batch.formulation().conditions();
+                double[][] out = new double[2][cs.size()];
+                for (int c = 0; c < cs.size(); c++) {
+                    Equilibrium.Point p = conditions[c].point(s.totals(), warm[c]);
+                    if (warm[c] == null) {
+                        warm[c] = p;
+                    }
+                    out[0][c] = p.pH();
+                    out[1][c] = p.bufferCapacity() * s.waterKg() / s.volumeLitres(cs.get(c).kelvin());
+                }
+                return out;
+            } catch (IndeterminateException | IllegalStateException e) {
+                return null;   // a number the engine cannot stand behind is not a sample
+            }
+        }
+
+        /** The dose at which the meter (adjustment temperature, part volume, closed) reads {@code goal}: secant steps. */
+        private double redose(Recipe batch, int titrant, double nominal, double goal) {
+            double x0 = nominal;
+            double f0 = meterReading(batch, titrant, x0) - goal;
+            double x1 = nominal * 1.01 + 1e-9;
+            double f1 = meterReading(batch, titrant, x1) - goal;
+            for (int i = 0; i < 30 && Math.abs(f1) > 1e-7 && f1 != f0; i++) {
+                double x2 = Math.max(0, x1 - f1 * (x1 - x0) / (f1 - f0));
+                if (x2 == 0 && x1 == 0) {
+                    return 0;   // the meter reads past the goal with no titrant at all: none is added
+                }
+                x0 = x1;
+                f0 = f1;
+                x1 = x2;
+                f1 = meterReading(batch, titrant, x1) - goal;
+            }
+            if (Math.abs(f1) > 1e-4) {
+                throw new IllegalStateException("the q.s. of this batch did not converge");
+            }
+            return x1;
+        }
+
+        private double meterReading(Recipe batch, int titrant, double moles) {
+            Ingredient t = batch.titrants().get(titrant);
+            Solution s = batch.solution(Map.of(t, moles), t.line().adjustTo().orElseThrow().atVolume());
+            Equilibrium.Point p = meters[titrant].point(s.totals(), meterWarm[titrant]);
+            if (meterWarm[titrant] == null) {
+                meterWarm[titrant] = p;
+            }
+            return p.pH();
+        }
     }
 
     /** dpH at one condition per +1 % of each weighed component, q.s. dosed again. */
-    private Map<String, Double> sensitivities(Recipe recipe, List<Ingredient> weighed, int c, double[][] nominal,
-                                              Nominal nominalDose) {
+    private static Map<String, Double> sensitivities(Sampler sampler, List<Ingredient> weighed, int c,
+                                                     double[][] nominal) {
         Map<String, Double> out = new LinkedHashMap<>();
         if (nominal == null) {
             return out;
         }
         for (Ingredient i : weighed) {
-            double[][] r = sample(analyzer, recipe, Map.of(i, 1.01), 0, nominalDose);
+            double[][] r = sampler.sample(Map.of(i, 1.01), 0);
             if (r != null) {
                 out.put(i.substance().name(), r[0][c] - nominal[0][c]);
             }
@@ -260,8 +322,8 @@ public final class Robustness {
     }
 
     /** Lowest and highest pH over the tolerance box, at the corners the sensitivities point to. */
-    private double[] corners(Recipe recipe, List<Ingredient> weighed, Map<String, Double> tolerances,
-                             Map<String, Double> sensitivities, int c, Nominal nominalDose) {
+    private static double[] corners(Sampler sampler, List<Ingredient> weighed, Map<String, Double> tolerances,
+                                    Map<String, Double> sensitivities, int c) {
         Map<Ingredient, Double> low = new LinkedHashMap<>();
         Map<Ingredient, Double> high = new LinkedHashMap<>();
         for (Ingredient i : weighed) {
@@ -270,8 +332,8 @@ public final class Robustness {
             low.put(i, s > 0 ? 1 - t : 1 + t);
             high.put(i, s > 0 ? 1 + t : 1 - t);
         }
-        double[][] lo = sample(analyzer, recipe, low, 0, nominalDose);
-        double[][] hi = sample(analyzer, recipe, high, 0, nominalDose);
+        double[][] lo = sampler.sample(low, 0);
+        double[][] hi = sampler.sample(high, 0);
         return new double[] {lo == null ? Double.NaN : lo[0][c], hi == null ? Double.NaN : hi[0][c]};
     }
 }

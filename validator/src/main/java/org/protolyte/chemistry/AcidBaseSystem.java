@@ -10,15 +10,21 @@ import java.util.Map;
  * species with p protons whose cumulative formation constant is the sum of the last p steps:
  * log β_p = Σ pKa (the p most basic steps).
  */
-public record AcidBaseSystem(String name, List<Form> forms, List<DissociationStep> steps) {
+public final class AcidBaseSystem {
 
     /** A protonation state: its name as written in speciation (H2PO4-) and its charge. */
     public record Form(String name, int charge) {
     }
 
-    public AcidBaseSystem {
-        forms = List.copyOf(forms);
-        steps = List.copyOf(steps);
+    private final String name;
+    private final List<Form> forms;
+    private final List<DissociationStep> steps;
+    private final List<Species> species;      // built once: a recipe asks for them per batch
+
+    public AcidBaseSystem(String name, List<Form> forms, List<DissociationStep> steps) {
+        this.name = name;
+        this.forms = List.copyOf(forms);
+        this.steps = List.copyOf(steps);
         if (forms.size() != steps.size() + 1) {
             throw new IllegalArgumentException("acid–base system " + name + " has " + forms.size()
                     + " forms and " + steps.size() + " dissociation steps; forms must be one more than steps");
@@ -29,6 +35,35 @@ public record AcidBaseSystem(String name, List<Form> forms, List<DissociationSte
                         + ": each form must carry one charge less than the one before (most protonated first)");
             }
         }
+        this.species = buildSpecies();
+    }
+
+    /** Most protonated form first (see the class comment). */
+    public String name() {
+        return name;
+    }
+
+    public List<Form> forms() {
+        return forms;
+    }
+
+    public List<DissociationStep> steps() {
+        return steps;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof AcidBaseSystem a && a.name.equals(name) && a.forms.equals(forms) && a.steps.equals(steps);
+    }
+
+    @Override
+    public int hashCode() {
+        return name.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return "AcidBaseSystem[" + name + "]";
     }
 
     /** The mass-balance component: the least protonated form. */
@@ -39,6 +74,10 @@ public record AcidBaseSystem(String name, List<Form> forms, List<DissociationSte
 
     /** Every form as a species, most protonated first. */
     public List<Species> species() {
+        return species;
+    }
+
+    private List<Species> buildSpecies() {
         Component basis = basis();
         int n = steps.size();
         List<Species> out = new ArrayList<>();
@@ -50,7 +89,7 @@ public record AcidBaseSystem(String name, List<Form> forms, List<DissociationSte
             Form f = forms.get(i);
             out.add(new Species(f.name(), f.charge(), Map.of(basis, 1), n - i, beta));
         }
-        return out;
+        return List.copyOf(out);
     }
 
     public int indexOf(String formName) {

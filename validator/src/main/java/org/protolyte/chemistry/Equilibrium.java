@@ -1,6 +1,7 @@
 package org.protolyte.chemistry;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -120,36 +121,89 @@ public final class Equilibrium {
      */
     public EquilibriumState solve(List<Species> species, Map<Component, Double> totals, double kelvin,
                                   double fixedIonicStrength, Map<Species, Double> fixedSpecies) {
-        frozen(totals, kelvin);
-        Problem p = new Problem(species, totals, kelvin, fixedSpecies);
-        List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
-        double ionicStrength = Double.isNaN(fixedIonicStrength) ? p.strongIonicStrength() : fixedIonicStrength;
-        double pH = Double.NaN;
-        boolean converged = false;
-        for (int i = 0; i < MAX_ITERATIONS; i++) {
-            p.setActivityCoefficients(ionicStrength);
-            pH = p.chargeBalanceRoot(pH);
-            if (!Double.isNaN(fixedIonicStrength)) {
-                converged = true;
-                break;
-            }
-            double next = p.ionicStrength(pH);
-            // relaxation keeps the fixed point from oscillating when strong ions dominate
-            double step = next - ionicStrength;
-            if (Math.abs(step) <= 1e-13 + 1e-10 * ionicStrength) {
-                ionicStrength = next;
-                converged = true;
-                break;
-            }
-            ionicStrength = i < 20 ? next : ionicStrength + 0.5 * step;
+        return prepare(species, totals.keySet(), kelvin, fixedSpecies).solve(totals, fixedIonicStrength);
+    }
+
+    /**
+     * Everything about a problem that does not depend on the amounts: the species, their constants at the
+     * temperature, Kw and the Debye–Hückel slope. A study that solves one recipe many times with other amounts
+     * (Monte Carlo, a q.s. search) prepares once and solves many times.
+     */
+    public Prepared prepare(List<Species> species, Collection<Component> components, double kelvin,
+                            Map<Species, Double> fixedSpecies) {
+        return new Prepared(new Problem(species, components, kelvin, fixedSpecies));
+    }
+
+    /** pH, ionic strength (mol/kg) and buffer capacity (mol/kg per pH) of one solve, without the speciation. */
+    public record Point(double pH, double ionicStrength, double bufferCapacity) {
+    }
+
+    /**
+     * A problem prepared at one temperature, solved for any totals of its components. It keeps working arrays,
+     * so one instance serves one thread.
+     */
+    public final class Prepared {
+        private final Problem p;
+
+        private Prepared(Problem p) {
+            this.p = p;
         }
-        if (!converged) {
+
+        /** Solves with the activity coefficients iterated to self-consistency (NaN) or at a fixed ionic strength. */
+        public EquilibriumState solve(Map<Component, Double> totals, double fixedIonicStrength) {
+            p.load(totals);
+            frozen(p.total, p.kelvin);
+            List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
+            double[] r = iterate(fixedIonicStrength, Double.NaN, Double.NaN);
+            p.setActivityCoefficients(r[1]);
+            caveats.addAll(ionicStrengthCaveats(r[1]));
+            return p.state(r[0], r[1], caveats);
+        }
+
+        /**
+         * The fast path: self-consistent pH, ionic strength and buffer capacity, started from {@code warm} (a
+         * nearby solution, or null). Throws where {@link #solve} would report the state indeterminate.
+         */
+        public Point point(Map<Component, Double> totals, Point warm) {
+            p.load(totals);
+            frozen(p.total, p.kelvin);
+            for (Caveat c : p.temperatureCaveats()) {
+                throw new IndeterminateException(c);
+            }
+            double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
+                    : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
+            for (Caveat c : ionicStrengthCaveats(r[1])) {
+                if (c.severity() == Caveat.Severity.INDETERMINATE) {
+                    throw new IndeterminateException(c);
+                }
+            }
+            p.setActivityCoefficients(r[1]);
+            p.molalities(r[0]);
+            return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
+        }
+
+        /** {pH, I}: the charge balance solved at each ionic strength until I no longer changes. */
+        private double[] iterate(double fixedIonicStrength, double startPH, double startI) {
+            double ionicStrength = !Double.isNaN(fixedIonicStrength) ? fixedIonicStrength
+                    : Double.isNaN(startI) ? p.strongIonicStrength() : startI;
+            double pH = startPH;
+            for (int i = 0; i < MAX_ITERATIONS; i++) {
+                p.setActivityCoefficients(ionicStrength);
+                pH = p.chargeBalanceRoot(pH);
+                if (!Double.isNaN(fixedIonicStrength)) {
+                    return new double[] {pH, ionicStrength};
+                }
+                double next = p.ionicStrength(pH);
+                // relaxation keeps the fixed point from oscillating when strong ions dominate
+                double step = next - ionicStrength;
+                if (Math.abs(step) <= 1e-13 + 1e-10 * ionicStrength) {
+                    return new double[] {pH, next};
+                }
+                ionicStrength = i < 20 ? next : ionicStrength + 0.5 * step;
+            }
             throw new IndeterminateException(Caveat.indeterminate("activity-not-converged",
                     "the ionic strength did not converge with the " + activity.name() + " activity model"));
         }
-        p.setActivityCoefficients(ionicStrength);
-        caveats.addAll(ionicStrengthCaveats(ionicStrength));
-        return p.state(pH, ionicStrength, caveats);
     }
 
     private List<Caveat> ionicStrengthCaveats(double i) {
@@ -171,8 +225,11 @@ public final class Equilibrium {
      * Below the freezing point ice forms and a liquid-state pH means nothing. With one component per
      * species the particle molality is Σ T_C whatever the pH, so this is known before solving.
      */
-    private static void frozen(Map<Component, Double> totals, double kelvin) {
-        double particles = totals.values().stream().mapToDouble(Double::doubleValue).sum();
+    private static void frozen(double[] totals, double kelvin) {
+        double particles = 0;
+        for (double t : totals) {
+            particles += t;
+        }
         double tf = Cryoscopy.freezingPointKelvin(particles);
         if (kelvin < tf) {
             throw new IndeterminateException(Caveat.indeterminate("below-freezing-point", String.format(Locale.ROOT,
@@ -191,11 +248,13 @@ public final class Equilibrium {
         final int[] protons;
         final int[] charge;
         final double[] log10Beta;
+        final Map<Component, Integer> index;
         final Component[] components;
         final double[] total;
         final double kw;
         final double a;
         final double[] log10Gamma;
+        final double[] byCharge = new double[17];     // log10 γ for charges −8 … +8 at the current I
         /** Working arrays of one evaluation, reused: a solve makes no garbage per evaluation. */
         final double[] work;
         final double[] workW;
@@ -208,10 +267,10 @@ public final class Equilibrium {
         final int[] fixedIndex;
         final double[] fixedMolality;
 
-        Problem(List<Species> species, Map<Component, Double> totals, double kelvin, Map<Species, Double> fixed) {
+        Problem(List<Species> species, Collection<Component> componentSet, double kelvin, Map<Species, Double> fixed) {
             this.kelvin = kelvin;
             Map<Component, Integer> index = new LinkedHashMap<>();
-            for (Component c : totals.keySet()) {
+            for (Component c : componentSet) {
                 index.put(c, index.size());
             }
             List<Species> used = new ArrayList<>();
@@ -236,14 +295,10 @@ public final class Equilibrium {
                 charge[i] = sp[i].charge();
                 log10Beta[i] = sp[i].formation().log10K(kelvin) + logBetaShifts.getOrDefault(sp[i], 0.0);
             }
+            this.index = index;
             components = index.keySet().toArray(new Component[0]);
             total = new double[components.length];
             for (int j = 0; j < components.length; j++) {
-                double t = totals.get(components[j]);
-                if (!(t >= 0) || !Double.isFinite(t)) {
-                    throw new IllegalArgumentException("total of " + components[j].name() + " must be ≥ 0");
-                }
-                total[j] = t;
                 boolean hasSpecies = false;
                 for (int i = 0; i < n; i++) {
                     hasSpecies |= comp[i] == j;
@@ -269,6 +324,22 @@ public final class Equilibrium {
                 }
                 fixedIndex[comp[i]] = i;
                 fixedMolality[comp[i]] = e.getValue();
+            }
+        }
+
+        /** Takes the totals of this solve; a component the map does not name is absent (0). */
+        void load(Map<Component, Double> totals) {
+            java.util.Arrays.fill(total, 0);
+            for (Map.Entry<Component, Double> e : totals.entrySet()) {
+                Integer j = index.get(e.getKey());
+                double t = e.getValue();
+                if (j == null) {
+                    throw new IllegalArgumentException("component " + e.getKey().name() + " was not prepared");
+                }
+                if (!(t >= 0) || !Double.isFinite(t)) {
+                    throw new IllegalArgumentException("total of " + e.getKey().name() + " must be ≥ 0");
+                }
+                total[j] = t;
             }
         }
 
@@ -302,12 +373,25 @@ public final class Equilibrium {
             return 0.5 * s;
         }
 
+        /** γ depends on the charge and I only (ActivityModel), so it is computed once per charge. */
         void setActivityCoefficients(double ionicStrength) {
+            java.util.Arrays.fill(byCharge, Double.NaN);
             for (int i = 0; i < n; i++) {
-                log10Gamma[i] = activity.log10Gamma(charge[i], ionicStrength, a);
+                log10Gamma[i] = log10Gamma(charge[i], ionicStrength);
             }
-            log10GammaH = activity.log10Gamma(1, ionicStrength, a);
-            log10GammaOH = activity.log10Gamma(-1, ionicStrength, a);
+            log10GammaH = log10Gamma(1, ionicStrength);
+            log10GammaOH = log10Gamma(-1, ionicStrength);
+        }
+
+        private double log10Gamma(int z, double ionicStrength) {
+            int k = z + byCharge.length / 2;
+            if (k < 0 || k >= byCharge.length) {
+                return activity.log10Gamma(z, ionicStrength, a);
+            }
+            if (Double.isNaN(byCharge[k])) {
+                byCharge[k] = activity.log10Gamma(z, ionicStrength, a);
+            }
+            return byCharge[k];
         }
 
         /** Molality of every species at this pH, from the mass balances (log space, then scaled). */

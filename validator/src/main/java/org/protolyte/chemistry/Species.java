@@ -26,6 +26,12 @@ public record Species(String name, int charge, Map<Component, Integer> component
         }
     }
 
+    /** Equal species share name and charge; the deep hash of the components and constant is not needed. */
+    @Override
+    public int hashCode() {
+        return 31 * name.hashCode() + charge;
+    }
+
     public static Species free(Component c) {
         return new Species(c.name(), c.charge(), Map.of(c, 1), 0, FormationConstant.UNITY);
     }

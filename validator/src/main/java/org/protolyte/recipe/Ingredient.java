@@ -13,6 +13,12 @@ public record Ingredient(Formulation.Line line, Substance substance, Kind kind, 
 
     public enum Kind { MOLES, MOLALITY, TITRANT }
 
+    /** Equal ingredients share their line and amount; the deep hash of the line and substance is not needed. */
+    @Override
+    public int hashCode() {
+        return 31 * line.index() + Double.hashCode(value);
+    }
+
     public boolean hasStock() {
         return stockMolarity > 0;
     }

@@ -22,6 +22,12 @@ public record Substance(String name, List<String> synonyms, Optional<Formula> fo
         synonyms = List.copyOf(synonyms);
     }
 
+    /** Equal substances share a name; hashing every field (a recipe's maps do it per batch) is not needed. */
+    @Override
+    public int hashCode() {
+        return name.hashCode();
+    }
+
     /** Moles of water of hydration per mole of substance. */
     public int hydrationWater() {
         return formula.map(Formula::hydrationWater).orElse(0);

@@ -88,8 +88,8 @@ class RobustnessTest {
                 double t = result.tolerances().get(weighed.get(i).substance().name());
                 scale.put(weighed.get(i), (mask >> i & 1) == 1 ? 1 + t : 1 - t);
             }
-            double pH = robustness.sample(new Analyzer(EQUILIBRIUM), r, scale, 0, new Robustness.Nominal(new double[0],
-                    new double[0]))[0][0];
+            double pH = new Robustness.Sampler(new Analyzer(EQUILIBRIUM), r,
+                    new Robustness.Nominal(new double[0], new double[0])).sample(scale, 0)[0][0];
             lo = Math.min(lo, pH);
             hi = Math.max(hi, pH);
         }
