@@ -54,7 +54,7 @@ public final class SubstancesCommand implements Callable<Integer> {
         for (Substance s : hits) {
             out.printf(Locale.ROOT, "%s%s%n", s.name(), s.origin().equals("shipped library") ? "" : "  [" + s.origin() + "]");
             s.formula().ifPresent(f -> out.printf(Locale.ROOT, "  formula %s, %.3f g/mol%s%n", f, s.molarMass().orElse(Double.NaN),
-                    f.hydrationWater() > 0 ? ", " + f.hydrationWater() + " H2O of hydration" : ""));
+                    f.hydrationWater() > 0 ? ", " + plain(f.hydrationWater()) + " H2O of hydration" : ""));
             if (!s.synonyms().isEmpty()) {
                 out.println("  also: " + String.join("; ", s.synonyms()));
             }

@@ -7,34 +7,40 @@ import java.util.TreeMap;
 /**
  * A chemical formula such as {@code Na2HPO4·7H2O}, {@code C4H11NO3·HCl} or {@code Ca(CH3COO)2}: element
  * counts, the water of hydration and the molar mass from {@link AtomicWeights}. Parts of an adduct are
- * separated by '·' (also '.', '*' or a space) and may carry a leading count.
+ * separated by '·' (also '.', '*' or a space) and may carry a leading count; a fractional count such as the
+ * sesquihydrate's {@code ·1.5H2O} is written after '·', '*' or a space.
  */
 public final class Formula {
 
     private final String text;
-    private final Map<String, Integer> elements;
-    private final int hydrationWater;
+    private final Map<String, Double> elements;
+    private final double hydrationWater;
 
-    private Formula(String text, Map<String, Integer> elements, int hydrationWater) {
+    private Formula(String text, Map<String, Double> elements, double hydrationWater) {
         this.text = text;
         this.elements = Collections.unmodifiableMap(elements);
         this.hydrationWater = hydrationWater;
     }
 
     public static Formula parse(String text) {
-        String[] parts = text.strip().split("\\s*[·•.*]\\s*|\\s+");
-        Map<String, Integer> total = new TreeMap<>();
-        int water = 0;
+        java.util.List<String> parts = new java.util.ArrayList<>();
+        for (String coarse : text.strip().split("\\s*[·•*]\\s*|\\s+", -1)) {
+            if (FRACTIONAL.matcher(coarse).lookingAt()) {
+                parts.add(coarse);                      // "1.5H2O": the '.' is a decimal point
+            } else {
+                parts.addAll(java.util.List.of(coarse.split("\\s*\\.\\s*", -1)));
+            }
+        }
+        Map<String, Double> total = new TreeMap<>();
+        double water = 0;
         for (String part : parts) {
             if (part.isEmpty()) {
                 throw new IllegalArgumentException("formula '" + text + "' has an empty part");
             }
-            int i = 0;
-            while (i < part.length() && Character.isDigit(part.charAt(i))) {
-                i++;
-            }
-            int multiplier = i == 0 ? 1 : Integer.parseInt(part.substring(0, i));
-            String body = part.substring(i);
+            java.util.regex.Matcher count = LEADING_COUNT.matcher(part);
+            int digits = count.lookingAt() ? count.end() : 0;
+            double multiplier = digits == 0 ? 1 : Double.parseDouble(part.substring(0, digits));
+            String body = part.substring(digits);
             if (body.equals("H2O")) {
                 water += multiplier;
             }
@@ -43,10 +49,13 @@ public final class Formula {
             if (end != body.length()) {
                 throw new IllegalArgumentException("formula '" + text + "': unexpected '" + body.charAt(end) + "'");
             }
-            counts.forEach((el, n) -> total.merge(el, n * multiplier, Integer::sum));
+            counts.forEach((el, n) -> total.merge(el, n * multiplier, Double::sum));
         }
         return new Formula(text.strip(), total, water);
     }
+
+    private static final java.util.regex.Pattern FRACTIONAL = java.util.regex.Pattern.compile("\\d+\\.\\d+[A-Z(]");
+    private static final java.util.regex.Pattern LEADING_COUNT = java.util.regex.Pattern.compile("\\d+(\\.\\d+)?");
 
     /** Reads elements and parenthesised groups from {@code pos} until ')' or the end; returns the position. */
     private static int parseGroup(String text, String s, int pos, Map<String, Integer> into) {
@@ -89,19 +98,19 @@ public final class Formula {
         return text;
     }
 
-    public Map<String, Integer> elements() {
+    public Map<String, Double> elements() {
         return elements;
     }
 
     /** Moles of water of hydration per mole (the {@code ·nH2O} parts). */
-    public int hydrationWater() {
+    public double hydrationWater() {
         return hydrationWater;
     }
 
     /** g/mol from the IUPAC conventional atomic weights. */
     public double molarMass() {
         double m = 0;
-        for (Map.Entry<String, Integer> e : elements.entrySet()) {
+        for (Map.Entry<String, Double> e : elements.entrySet()) {
             m += AtomicWeights.of(e.getKey()).orElseThrow() * e.getValue();
         }
         return m;

@@ -29,7 +29,7 @@ public record Substance(String name, List<String> synonyms, Optional<Formula> fo
     }
 
     /** Moles of water of hydration per mole of substance. */
-    public int hydrationWater() {
-        return formula.map(Formula::hydrationWater).orElse(0);
+    public double hydrationWater() {
+        return formula.map(Formula::hydrationWater).orElse(0.0);
     }
 }

@@ -58,6 +58,8 @@ class ShippedLibraryTest {
     @Test
     void hydrationWaterComesFromTheFormula() {
         assertEquals(12, Formula.parse("Na2HPO4·12H2O").hydrationWater());
+        assertEquals(1.5, Formula.parse("C6H6Na2O7·1.5H2O").hydrationWater());
+        assertEquals(7, Formula.parse("Na2HPO4.7H2O").hydrationWater());
         assertEquals(1, Formula.parse("C6H9N3O2·HCl·H2O").hydrationWater());
         assertEquals(0, Formula.parse("C4H11NO3·HCl").hydrationWater());
     }
