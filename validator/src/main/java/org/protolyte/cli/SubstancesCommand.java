@@ -66,9 +66,10 @@ public final class SubstancesCommand implements Callable<Integer> {
                 AcidBaseSystem system = library.system(part.system()).orElseThrow();
                 for (int k = 0; k < system.steps().size(); k++) {
                     DissociationStep st = system.steps().get(k);
-                    out.printf(Locale.ROOT, "    %s ⇌ %s: pKa %.3f ± %.3f, ΔH° %.2f kJ/mol, ΔCp° %.0f J/(K·mol), %s%n",
-                            system.forms().get(k).name(), system.forms().get(k + 1).name(), st.pKa25(), st.uncertainty(),
-                            st.deltaH() / 1000, st.deltaCp(), st.validity());
+                    out.printf(Locale.ROOT, "    %s ⇌ %s: pKa %s ± %s, ΔH° %s kJ/mol, ΔCp° %s J/(K·mol), %s%n",
+                            system.forms().get(k).name(), system.forms().get(k + 1).name(), asWritten(st.pKa25()),
+                            asWritten(st.uncertainty()), asWritten(st.deltaH() / 1000), asWritten(st.deltaCp()),
+                            st.validity());
                 }
                 out.println("    source: " + library.systemSource(part.system()));
             }
@@ -85,6 +86,11 @@ public final class SubstancesCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** A library constant as its source gives it (no rounding: a reviewer compares it with the table). */
+    private static String asWritten(double x) {
+        return new BigDecimal(Double.toString(x)).round(new MathContext(10)).stripTrailingZeros().toPlainString();
     }
 
     /** A handbook number as written: three significant figures, no trailing zeros. */

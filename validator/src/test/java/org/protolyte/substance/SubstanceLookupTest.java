@@ -71,7 +71,8 @@ class SubstanceLookupTest {
         List<String> expected = List.of("sodium dihydrogen phosphate anhydrous",
                 "sodium dihydrogen phosphate monohydrate", "sodium dihydrogen phosphate dihydrate",
                 "disodium hydrogen phosphate anhydrous", "disodium hydrogen phosphate dihydrate",
-                "disodium hydrogen phosphate heptahydrate", "disodium hydrogen phosphate dodecahydrate");
+                "disodium hydrogen phosphate heptahydrate", "disodium hydrogen phosphate dodecahydrate",
+                "trisodium phosphate anhydrous", "trisodium phosphate dodecahydrate");
         assertEquals(new HashSet<>(expected), new HashSet<>(e.candidates()));
         for (String form : e.candidates()) {
             assertEquals(form, library.lookup(form).name(), "a listed form must itself resolve");
