@@ -42,6 +42,10 @@ public final class Equilibrium {
     private static final double PH_LOW = -2;
     private static final double PH_HIGH = 16;
     private static final int MAX_ITERATIONS = 200;
+    /** A generous bound on a pKa extrapolated a few kelvin beyond its data (common practice), and the pH effect below
+     *  which a component's constants outside their range do not void the result. */
+    private static final double EXTRAPOLATION_ERROR = 0.1;
+    private static final double MINOR_PH_EFFECT = 0.005;
 
     /** Standard uncertainty of pKw from IAPWS R11-07 near ambient conditions, about 0.01 (from memory). */
     public static final double PKW_UNCERTAINTY = 0.01;
@@ -153,9 +157,10 @@ public final class Equilibrium {
         public EquilibriumState solve(Map<Component, Double> totals, double fixedIonicStrength) {
             p.load(totals);
             frozen(p.total, p.kelvin);
-            List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats());
+            p.checkWaterRange();
             double[] r = iterate(fixedIonicStrength, Double.NaN, Double.NaN);
             p.setActivityCoefficients(r[1]);
+            List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats(r[0]));
             caveats.addAll(ionicStrengthCaveats(r[1]));
             return p.state(r[0], r[1], caveats);
         }
@@ -167,17 +172,17 @@ public final class Equilibrium {
         public Point point(Map<Component, Double> totals, Point warm) {
             p.load(totals);
             frozen(p.total, p.kelvin);
-            for (Caveat c : p.temperatureCaveats()) {
-                throw new IndeterminateException(c);
-            }
+            p.checkWaterRange();
             double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
                     : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
-            for (Caveat c : ionicStrengthCaveats(r[1])) {
+            p.setActivityCoefficients(r[1]);
+            List<Caveat> caveats = p.temperatureCaveats(r[0]);
+            caveats.addAll(ionicStrengthCaveats(r[1]));
+            for (Caveat c : caveats) {
                 if (c.severity() == Caveat.Severity.INDETERMINATE) {
                     throw new IndeterminateException(c);
                 }
             }
-            p.setActivityCoefficients(r[1]);
             p.molalities(r[0]);
             return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
         }
@@ -260,6 +265,7 @@ public final class Equilibrium {
         final double[] workW;
         final double[] workMax;
         final double[] workSum;
+        final double[] workTerm;      // per component: its term of β/ln10 (see bufferSumOfWork)
         double log10GammaH;
         double log10GammaOH;
 
@@ -314,6 +320,7 @@ public final class Equilibrium {
             workW = new double[n];
             workMax = new double[components.length];
             workSum = new double[components.length];
+            workTerm = new double[components.length];
             fixedIndex = new int[components.length];
             fixedMolality = new double[components.length];
             java.util.Arrays.fill(fixedIndex, -1);
@@ -347,20 +354,46 @@ public final class Equilibrium {
             return fixedIndex[component] >= 0;
         }
 
-        List<Caveat> temperatureCaveats() {
-            List<Caveat> out = new ArrayList<>();
-            double t = kelvin - Thermo.KELVIN_OFFSET;
+        /** Water's own range: outside it nothing can be said. */
+        void checkWaterRange() {
             if (!Water.VALIDITY.contains(kelvin)) {
                 throw new IndeterminateException(Caveat.indeterminate("temperature-out-of-range", String.format(
-                        Locale.ROOT, "%.1f °C is outside %s, where the water properties used are valid", t,
-                        Water.VALIDITY)));
+                        Locale.ROOT, "%.1f °C is outside %s, where the water properties used are valid",
+                        kelvin - Thermo.KELVIN_OFFSET, Water.VALIDITY)));
             }
+        }
+
+        /**
+         * Components present whose constants are not valid at this temperature, judged at the solution (the working
+         * molalities of pH filled): indeterminate where the component carries a real share of the buffering, a
+         * warning where even a 0.1 error in its pKa would move the pH by less than 0.005 (dpH/dpKa_C = β_C/β, the
+         * component's share of the buffer capacity, see the class comment). A trace of indicator or a minor amino
+         * acid does not void a medium's pH; the buffer that sets it does.
+         */
+        List<Caveat> temperatureCaveats(double pH) {
+            List<Caveat> out = new ArrayList<>();
+            double t = kelvin - Thermo.KELVIN_OFFSET;
+            boolean[] reported = new boolean[components.length];
+            double beta = -1;
             for (int i = 0; i < n; i++) {
+                int j = comp[i];
                 TemperatureRange v = sp[i].formation().validity();
-                if ((total[comp[i]] > 0 || open(comp[i])) && !v.contains(kelvin)) {
-                    out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
-                            "%.1f °C is outside %s, where the constants of %s are valid", t, v, sp[i].name())));
+                if (reported[j] || !(total[j] > 0 || open(j)) || v.contains(kelvin)) {
+                    continue;
                 }
+                reported[j] = true;
+                if (beta < 0) {
+                    molalities(pH);
+                    beta = bufferSumOfWork(pH);
+                }
+                double share = open(j) ? 1 : Math.abs(workTerm[j]) / beta;
+                String text = String.format(Locale.ROOT, "%.1f °C is outside %s, where the constants of %s are valid",
+                        t, v, sp[i].name());
+                out.add(share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT
+                        ? Caveat.warning("temperature-out-of-range-minor", String.format(Locale.ROOT,
+                                "%s; it carries %.2g %% of the buffer capacity, so even a %.1f error in its pKa moves "
+                                        + "the pH by less than %.3f", text, 100 * share, EXTRAPOLATION_ERROR, MINOR_PH_EFFECT))
+                        : Caveat.indeterminate("temperature-out-of-range", text));
             }
             return out;
         }
@@ -500,15 +533,21 @@ public final class Equilibrium {
                 int j = comp[i];
                 meanP[j] += totals[j] > 0 ? protons[i] * m[i] / totals[j] : 0;
             }
-            double sum = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            // closed: Σ m_s (p_s − p̄)²; open (fixed species f): Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves
+            double[] term = workTerm;
+            java.util.Arrays.fill(term, 0);
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
                 if (open(j)) {
-                    sum += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                    term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
                 } else {
                     double d = protons[i] - meanP[j];
-                    sum += m[i] * d * d;
+                    term[j] += m[i] * d * d;
                 }
+            }
+            double sum = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            for (double t : term) {
+                sum += t;
             }
             return sum;
         }
@@ -524,44 +563,29 @@ public final class Equilibrium {
 
         EquilibriumState state(double pH, double ionicStrength, List<Caveat> caveats) {
             double[] m = molalities(pH);
+            double beta = Thermo.LN10 * bufferSumOfWork(pH);
             double mH = Math.pow(10, -pH - log10GammaH);
             double mOH = kw * Math.pow(10, pH - log10GammaOH);
             double[] sum = new double[components.length];
             for (int i = 0; i < n; i++) {
                 sum[comp[i]] += m[i];
             }
-            double[] meanP = new double[components.length];
             double particles = 0;
             List<SpeciesAmount> out = new ArrayList<>();
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                meanP[j] += sum[j] > 0 ? protons[i] * m[i] / sum[j] : 0;
                 particles += m[i];
                 out.add(new SpeciesAmount(sp[i], components[j], m[i], Math.pow(10, log10Gamma[i]),
                         sum[j] > 0 ? m[i] / sum[j] : 0));
             }
-            // closed: Σ m_s (p_s − p̄)²; open (fixed species f): Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves
-            double[] term = new double[components.length];
-            for (int i = 0; i < n; i++) {
-                int j = comp[i];
-                if (open(j)) {
-                    term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
-                } else {
-                    double d = protons[i] - meanP[j];
-                    term[j] += m[i] * d * d;
-                }
-            }
-            double variance = 0;
             Map<Component, Double> byComponent = new LinkedHashMap<>();
             java.util.Set<Component> openSet = new java.util.HashSet<>();
             for (int j = 0; j < components.length; j++) {
-                variance += term[j];
-                byComponent.put(components[j], Thermo.LN10 * term[j]);
+                byComponent.put(components[j], Thermo.LN10 * workTerm[j]);
                 if (open(j)) {
                     openSet.add(components[j]);
                 }
             }
-            double beta = Thermo.LN10 * (mH + mOH + variance);
             return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,
                     particles + mH + mOH, out, caveats, byComponent, openSet);
         }
