@@ -70,8 +70,11 @@ public final class SubstancesCommand implements Callable<Integer> {
                             system.forms().get(k).name(), system.forms().get(k + 1).name(), asWritten(st.pKa25()),
                             asWritten(st.uncertainty()), asWritten(st.deltaH() / 1000), asWritten(st.deltaCp()),
                             st.validity());
+                    List<String> sources = library.stepSources(part.system());
+                    if (k < sources.size()) {
+                        out.println("      source: " + sources.get(k));
+                    }
                 }
-                out.println("    source: " + library.systemSource(part.system()));
             }
             s.handling().hazards().forEach(h -> out.printf(Locale.ROOT, "  hazard %s, %s (%s)%n", h.classification(),
                     h.statement(), h.source()));

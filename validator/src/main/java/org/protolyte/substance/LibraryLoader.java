@@ -43,7 +43,7 @@ public final class LibraryLoader {
     private final SchemaCatalog schemas;
 
     private final Map<String, AcidBaseSystem> systems = new LinkedHashMap<>();
-    private final Map<String, String> systemSources = new LinkedHashMap<>();
+    private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
     private final Map<String, Component> solutes = new LinkedHashMap<>();
     private final Map<String, Substance> substances = new LinkedHashMap<>();
@@ -86,7 +86,7 @@ public final class LibraryLoader {
     }
 
     public SubstanceLibrary build() {
-        return new SubstanceLibrary(systems, systemSources, ions, solutes, substances, index, ambiguous, files);
+        return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -141,7 +141,7 @@ public final class LibraryLoader {
                 forms.add(new AcidBaseSystem.Form(f.get("name").asString(), f.get("charge").asInt()));
             }
             List<DissociationStep> steps = new ArrayList<>();
-            Set<String> sources = new LinkedHashSet<>();
+            List<String> sources = new ArrayList<>();
             for (int i = 0; i < n.get("steps").size(); i++) {
                 JsonNode s = n.get("steps").get(i);
                 double from = s.get("validFrom").asDouble();
@@ -157,7 +157,7 @@ public final class LibraryLoader {
             }
             try {
                 named(systems, n, pointer, new AcidBaseSystem(name, forms, steps), "acid–base system");
-                systemSources.put(name, String.join("; ", sources));
+                stepSources.put(name, List.copyOf(sources));
             } catch (IllegalArgumentException e) {
                 problems.add(doc.problem(pointer, e.getMessage()));
             }

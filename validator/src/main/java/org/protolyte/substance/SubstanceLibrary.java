@@ -23,7 +23,7 @@ import org.protolyte.document.Suggestions;
 public final class SubstanceLibrary {
 
     private final Map<String, AcidBaseSystem> systems;
-    private final Map<String, String> systemSources;
+    private final Map<String, List<String>> stepSources;     // system -> source of each step
     private final Map<String, Component> ions;
     private final Map<String, Component> solutes;
     private final Map<String, Substance> substances;      // by canonical name
@@ -31,12 +31,12 @@ public final class SubstanceLibrary {
     private final Map<String, List<String>> ambiguous;    // normalised shared name -> forms
     private final Map<String, String> files;              // library file -> SHA-256 of its bytes
 
-    SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, String> systemSources,
+    SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
                      Map<String, Substance> substances, Map<String, Substance> index,
                      Map<String, List<String>> ambiguous, Map<String, String> files) {
         this.systems = Map.copyOf(systems);
-        this.systemSources = Map.copyOf(systemSources);
+        this.stepSources = Map.copyOf(stepSources);
         this.ions = Map.copyOf(ions);
         this.solutes = Map.copyOf(solutes);
         this.substances = new LinkedHashMap<>(substances);
@@ -111,8 +111,9 @@ public final class SubstanceLibrary {
         return systems.values();
     }
 
-    public String systemSource(String name) {
-        return systemSources.getOrDefault(name, "");
+    /** The source of each dissociation step of a system, in step order. */
+    public List<String> stepSources(String system) {
+        return stepSources.getOrDefault(system, List.of());
     }
 
     public Optional<Component> ion(String name) {
