@@ -372,6 +372,7 @@ public final class Equilibrium {
          */
         List<Caveat> temperatureCaveats(double pH) {
             List<Caveat> out = new ArrayList<>();
+            List<String> minor = new ArrayList<>();
             double t = kelvin - Thermo.KELVIN_OFFSET;
             boolean[] reported = new boolean[components.length];
             double beta = -1;
@@ -387,13 +388,18 @@ public final class Equilibrium {
                     beta = bufferSumOfWork(pH);
                 }
                 double share = open(j) ? 1 : Math.abs(workTerm[j]) / beta;
-                String text = String.format(Locale.ROOT, "%.1f °C is outside %s, where the constants of %s are valid",
-                        t, v, sp[i].name());
-                out.add(share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT
-                        ? Caveat.warning("temperature-out-of-range-minor", String.format(Locale.ROOT,
-                                "%s; it carries %.2g %% of the buffer capacity, so even a %.1f error in its pKa moves "
-                                        + "the pH by less than %.3f", text, 100 * share, EXTRAPOLATION_ERROR, MINOR_PH_EFFECT))
-                        : Caveat.indeterminate("temperature-out-of-range", text));
+                if (share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT) {
+                    minor.add(String.format(Locale.ROOT, "%s (%s, %.2g %% of β)", sp[i].name(), v, 100 * share));
+                } else {
+                    out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
+                            "%.1f °C is outside %s, where the constants of %s are valid", t, v, sp[i].name())));
+                }
+            }
+            if (!minor.isEmpty()) {
+                out.add(Caveat.warning("temperature-out-of-range-minor", String.format(Locale.ROOT,
+                        "%.1f °C is outside the range of the constants of %s; each carries so little of the buffer "
+                                + "capacity that even a %.1f error in its pKa moves the pH by less than %.3f",
+                        t, String.join(", ", minor), EXTRAPOLATION_ERROR, MINOR_PH_EFFECT)));
             }
             return out;
         }
