@@ -149,7 +149,7 @@ public final class Robustness {
         int worlds = Math.max(50, Math.min(500, settings.samples() / 20));
         for (int w = 0; w < worlds; w++) {
             Map<AcidBaseSystem, double[]> shifts = new LinkedHashMap<>();
-            for (AcidBaseSystem sys : recipe.library().systems()) {
+            for (AcidBaseSystem sys : systemsOf(recipe)) {
                 double[] d = new double[sys.steps().size()];
                 for (int k = 0; k < d.length; k++) {
                     d[k] = sys.steps().get(k).uncertainty() * random.nextGaussian();
@@ -166,6 +166,19 @@ public final class Robustness {
             }
         }
         return out;
+    }
+
+    /**
+     * The acid–base systems the recipe's ingredients carry (the constants a systematic draw needs), by name: a fixed
+     * order, so that a seed reproduces the same draws in every run.
+     */
+    private static List<AcidBaseSystem> systemsOf(Recipe recipe) {
+        Set<String> used = new java.util.HashSet<>();
+        recipe.ingredients().forEach(i -> i.substance().composition().systems().forEach(part -> used.add(part.system())));
+        recipe.formulation().conditions().stream().filter(c -> c.co2Pascal().isPresent()).findAny()
+                .ifPresent(c -> used.add(Analyzer.CARBONATE));
+        return recipe.library().systems().stream().filter(s -> used.contains(s.name()))
+                .sorted(java.util.Comparator.comparing(AcidBaseSystem::name)).toList();
     }
 
     /** The nominal q.s. of each titrant line (0 where not used) and the meter reading the batch record prescribes. */

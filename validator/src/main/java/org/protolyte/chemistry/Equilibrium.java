@@ -79,15 +79,16 @@ public final class Equilibrium {
 
     /** The same equilibrium with several steps' pKa moved at once: {@code deltas.get(system)[step]}. */
     public Equilibrium withPKaShifts(Map<AcidBaseSystem, double[]> deltas) {
-        Equilibrium e = this;
+        Map<Species, Double> shifts = new java.util.HashMap<>(logBetaShifts);
         for (Map.Entry<AcidBaseSystem, double[]> d : deltas.entrySet()) {
+            List<Species> species = d.getKey().species();
             for (int k = 0; k < d.getValue().length; k++) {
-                if (d.getValue()[k] != 0) {
-                    e = e.withPKaShift(d.getKey(), k, d.getValue()[k]);
+                for (int i = 0; i <= k; i++) {       // as withPKaShift: every species carrying step k's proton
+                    shifts.merge(species.get(i), d.getValue()[k], Double::sum);
                 }
             }
         }
-        return e;
+        return new Equilibrium(activity, shifts, pKwShift);
     }
 
     /** The same equilibrium with pKw raised by {@code delta}. */
@@ -160,7 +161,7 @@ public final class Equilibrium {
             p.checkWaterRange();
             double[] r = iterate(fixedIonicStrength, Double.NaN, Double.NaN);
             p.setActivityCoefficients(r[1]);
-            List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats(r[0]));
+            List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats(r[0], true));
             caveats.addAll(ionicStrengthCaveats(r[1]));
             return p.state(r[0], r[1], caveats);
         }
@@ -176,7 +177,7 @@ public final class Equilibrium {
             double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
                     : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
             p.setActivityCoefficients(r[1]);
-            List<Caveat> caveats = p.temperatureCaveats(r[0]);
+            List<Caveat> caveats = p.temperatureCaveats(r[0], false);
             caveats.addAll(ionicStrengthCaveats(r[1]));
             for (Caveat c : caveats) {
                 if (c.severity() == Caveat.Severity.INDETERMINATE) {
@@ -187,8 +188,44 @@ public final class Equilibrium {
             return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
         }
 
+        /**
+         * {pH, I} from a nearby solution: Newton steps on the charge balance with the activity coefficients
+         * updated from each step's molalities (the coupling through I is weak, so this converges in a few steps).
+         * Null where it does not settle; the caller then takes the bracketed path.
+         */
+        private double[] coupled(double startPH, double startI) {
+            double pH = startPH;
+            double ionicStrength = startI;
+            for (int k = 0; k < 30; k++) {
+                p.setActivityCoefficients(ionicStrength);
+                double f = p.chargeBalance(pH);
+                double next = ionicStrength;
+                double slope = -Thermo.LN10 * p.bufferSumOfWork(pH);
+                double nextI = p.ionicStrengthOfWork(pH);
+                double nextPH = pH - f / slope;
+                if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
+                    return null;
+                }
+                boolean settled = Math.abs(nextPH - pH) < 1e-12 && Math.abs(nextI - next) <= 1e-13 + 1e-10 * next;
+                pH = nextPH;
+                ionicStrength = nextI;
+                if (settled) {
+                    return new double[] {pH, ionicStrength};
+                }
+            }
+            return null;
+        }
+
         /** {pH, I}: the charge balance solved at each ionic strength until I no longer changes. */
         private double[] iterate(double fixedIonicStrength, double startPH, double startI) {
+            if (Double.isNaN(fixedIonicStrength) && !Double.isNaN(startPH)) {
+                double[] r = coupled(startPH, startI);
+                if (r != null) {
+                    return r;
+                }
+                startPH = Double.NaN;
+                startI = Double.NaN;
+            }
             double ionicStrength = !Double.isNaN(fixedIonicStrength) ? fixedIonicStrength
                     : Double.isNaN(startI) ? p.strongIonicStrength() : startI;
             double pH = startPH;
@@ -259,6 +296,9 @@ public final class Equilibrium {
         final double kw;
         final double a;
         final double[] log10Gamma;
+        final double[] betaOverGamma;      // 10^(log β − log γ) at the current I (the linear path of molalities)
+        final double[] powers;             // aH^p, p = 0 … the most protons a species carries
+        final boolean linear;              // protons within 0 … 12: the linear path is safe to try
         final double[] byCharge = new double[17];     // log10 γ for charges −8 … +8 at the current I
         /** Working arrays of one evaluation, reused: a solve makes no garbage per evaluation. */
         final double[] work;
@@ -316,6 +356,15 @@ public final class Equilibrium {
             kw = Math.pow(10, -(Water.pKw(kelvin) + pKwShift));
             a = Water.debyeHuckelA(kelvin);
             log10Gamma = new double[n];
+            betaOverGamma = new double[n];
+            int maxProtons = 0;
+            boolean ok = true;
+            for (int i = 0; i < n; i++) {
+                maxProtons = Math.max(maxProtons, protons[i]);
+                ok &= protons[i] >= 0 && protons[i] <= 12 && Math.abs(log10Beta[i]) < 250;
+            }
+            linear = ok;
+            powers = new double[maxProtons + 1];
             work = new double[n];
             workW = new double[n];
             workMax = new double[components.length];
@@ -370,7 +419,7 @@ public final class Equilibrium {
          * component's share of the buffer capacity, see the class comment). A trace of indicator or a minor amino
          * acid does not void a medium's pH; the buffer that sets it does.
          */
-        List<Caveat> temperatureCaveats(double pH) {
+        List<Caveat> temperatureCaveats(double pH, boolean describeMinor) {
             List<Caveat> out = new ArrayList<>();
             List<String> minor = new ArrayList<>();
             double t = kelvin - Thermo.KELVIN_OFFSET;
@@ -389,7 +438,9 @@ public final class Equilibrium {
                 }
                 double share = open(j) ? 1 : Math.abs(workTerm[j]) / beta;
                 if (share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT) {
-                    minor.add(String.format(Locale.ROOT, "%s (%s, %.2g %% of β)", sp[i].name(), v, 100 * share));
+                    if (describeMinor) {
+                            minor.add(String.format(Locale.ROOT, "%s (%s, %.2g %% of β)", sp[i].name(), v, 100 * share));
+                    }
                 } else {
                     out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
                             "%.1f °C is outside %s, where the constants of %s are valid", t, v, sp[i].name())));
@@ -417,6 +468,7 @@ public final class Equilibrium {
             java.util.Arrays.fill(byCharge, Double.NaN);
             for (int i = 0; i < n; i++) {
                 log10Gamma[i] = log10Gamma(charge[i], ionicStrength);
+                betaOverGamma[i] = Math.pow(10, log10Beta[i] - log10Gamma[i]);
             }
             log10GammaH = log10Gamma(1, ionicStrength);
             log10GammaOH = log10Gamma(-1, ionicStrength);
@@ -433,15 +485,51 @@ public final class Equilibrium {
             return byCharge[k];
         }
 
-        /** Molality of every species at this pH, from the mass balances (log space, then scaled). */
-        /** Fills and returns the working array of species molalities at this pH (valid until the next call). */
+        /**
+         * Fills and returns the working array of species molalities at this pH (valid until the next call), from the
+         * mass balances: w_s = β_s/γ_s · aH^p_s, m_s = T_C · w_s / Σ_C w (γ of the free component cancels). Products
+         * of powers of aH, not one exponential per species; log space where a component's weights leave the range
+         * of a double.
+         */
         double[] molalities(double pH) {
+            if (!linear) {
+                return logMolalities(pH);
+            }
+            double x = Math.pow(10, -pH);
+            double[] pw = powers;
+            pw[0] = 1;
+            for (int k = 1; k < pw.length; k++) {
+                pw[k] = pw[k - 1] * x;
+            }
+            double[] w = workW;
+            double[] sum = workSum;
+            java.util.Arrays.fill(sum, 0);
+            for (int i = 0; i < n; i++) {
+                w[i] = betaOverGamma[i] * pw[protons[i]];
+                sum[comp[i]] += w[i];
+            }
+            for (int j = 0; j < components.length; j++) {
+                double d = open(j) ? w[fixedIndex[j]] : sum[j];
+                if (!(d > Double.MIN_NORMAL && d < Double.MAX_VALUE)) {
+                    return logMolalities(pH);
+                }
+            }
+            double[] m = work;
+            for (int i = 0; i < n; i++) {
+                int j = comp[i];
+                // closed: the component's total is shared out; open: scaled from the species held fixed
+                m[i] = open(j) ? fixedMolality[j] * w[i] / w[fixedIndex[j]] : total[j] * w[i] / sum[j];
+            }
+            return m;
+        }
+
+        /** The same in log space, each component scaled by its largest weight: safe at any pH. */
+        private double[] logMolalities(double pH) {
             double[] m = work;
             double[] maxLog = workMax;
             java.util.Arrays.fill(maxLog, Double.NEGATIVE_INFINITY);
             double[] w = workW;
             for (int i = 0; i < n; i++) {
-                // γ of the free component is common to every species of C and cancels in m_s/T_C
                 w[i] = log10Beta[i] - protons[i] * pH - log10Gamma[i];
                 maxLog[comp[i]] = Math.max(maxLog[comp[i]], w[i]);
             }
@@ -453,7 +541,6 @@ public final class Equilibrium {
             }
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                // closed: the component's total is shared out; open: scaled from the species held fixed
                 m[i] = open(j) ? fixedMolality[j] * w[i] / w[fixedIndex[j]] : total[j] * w[i] / sum[j];
             }
             return m;
@@ -494,6 +581,9 @@ public final class Equilibrium {
                 }
                 double slope = -Thermo.LN10 * bufferSumOfWork(x);
                 double next = x - f / slope;
+                if (Math.abs(next - x) < 1e-13) {
+                    return next;                    // converged (next may sit on the bracket's edge x)
+                }
                 if (!(next > lo && next < hi)) {
                     if (warm && (lo == PH_LOW || hi == PH_HIGH)) {
                         checkBracket();             // leaving the warm start's neighbourhood: prove the bracket once
@@ -556,6 +646,16 @@ public final class Equilibrium {
                 sum += t;
             }
             return sum;
+        }
+
+        /** I from the working molalities the last evaluation at this pH filled. */
+        double ionicStrengthOfWork(double pH) {
+            double[] m = work;
+            double s = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            for (int i = 0; i < n; i++) {
+                s += (double) charge[i] * charge[i] * m[i];
+            }
+            return 0.5 * s;
         }
 
         double ionicStrength(double pH) {
