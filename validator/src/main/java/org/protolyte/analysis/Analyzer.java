@@ -317,7 +317,10 @@ public final class Analyzer {
     Equilibrium.Prepared prepare(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
                                  java.util.Set<Component> extraIons) {
         List<Species> species = new ArrayList<>(solution.species());
-        java.util.Set<Component> components = new java.util.LinkedHashSet<>(solution.totals().keySet());
+        // a fixed order (by name), so that problems prepared from different solutions of one recipe agree
+        java.util.Set<Component> components = new java.util.TreeSet<>(
+                java.util.Comparator.comparing(Component::name).thenComparingInt(Component::charge));
+        components.addAll(solution.totals().keySet());
         for (Component c : extraIons) {
             components.add(c);
             if (!species.contains(Species.free(c))) {

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.IntConsumer;
@@ -16,6 +17,9 @@ import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.document.Formulation;
+import org.protolyte.document.DocumentException;
+import org.protolyte.chemistry.Component;
+import org.protolyte.recipe.BatchTotals;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
@@ -70,7 +74,8 @@ public final class Robustness {
         Map<String, Double> tolerances = new LinkedHashMap<>();
         weighed.forEach(i -> tolerances.put(i.substance().name(), tolerance(i, settings)));
         Nominal nominalDose = doses(analyzer, recipe);
-        Sampler sampler = new Sampler(analyzer, recipe, nominalDose);
+        Batches batches = new Batches(recipe);
+        Sampler sampler = new Sampler(analyzer, recipe, nominalDose, batches);
         RandomGenerator random = new Well19937c(settings.seed());
         int n = conditions.size();
         DescriptiveStatistics[] pH = stats(n);
@@ -99,7 +104,7 @@ public final class Robustness {
                 progress.accept(k + 1);
             }
         }
-        DescriptiveStatistics[] systematic = systematic(recipe, settings, random, n, nominalDose);
+        DescriptiveStatistics[] systematic = systematic(recipe, settings, random, n, nominalDose, batches);
         List<ConditionRobustness> out = new ArrayList<>();
         double[][] nominal = sampler.nominal();
         for (int c = 0; c < n; c++) {
@@ -144,7 +149,7 @@ public final class Robustness {
      * spread of its pH is the uncertainty of the prediction itself.
      */
     private DescriptiveStatistics[] systematic(Recipe recipe, Settings settings, RandomGenerator random, int n,
-                                               Nominal nominal) {
+                                               Nominal nominal, Batches batches) {
         DescriptiveStatistics[] out = stats(n);
         int worlds = Math.max(50, Math.min(500, settings.samples() / 20));
         for (int w = 0; w < worlds; w++) {
@@ -158,7 +163,7 @@ public final class Robustness {
             }
             Analyzer shifted = new Analyzer(equilibrium.withPKaShifts(shifts)
                     .withPKwShift(Equilibrium.PKW_UNCERTAINTY * random.nextGaussian()));
-            double[][] r = new Sampler(shifted, recipe, nominal).nominal();
+            double[][] r = new Sampler(shifted, recipe, nominal, batches).nominal();
             if (r != null) {
                 for (int c = 0; c < n; c++) {
                     out[c].addValue(r[0][c]);
@@ -202,19 +207,20 @@ public final class Robustness {
      * same for every batch, only the amounts change, and each solve starts from the nominal batch's solution.
      */
     static final class Sampler {
-        private final Analyzer analyzer;
         private final Recipe recipe;
         private final Nominal dose;
+        private final Batches batches;
         private final Equilibrium.Prepared[] conditions;
         private final Equilibrium.Point[] warm;
         private final Equilibrium.Prepared[] meters;      // per titrant, at its adjustment; null where not dosed again
         private final Equilibrium.Point[] meterWarm;
+        private final int[] titrantIndex;                 // per titrant: its index among the ingredients
         private final double[][] nominal;
 
-        Sampler(Analyzer analyzer, Recipe recipe, Nominal dose) {
-            this.analyzer = analyzer;
+        Sampler(Analyzer analyzer, Recipe recipe, Nominal dose, Batches batches) {
             this.recipe = recipe;
             this.dose = dose;
+            this.batches = batches;
             Solution s = recipe.solution(Map.of());
             List<Formulation.Condition> cs = recipe.formulation().conditions();
             conditions = new Equilibrium.Prepared[cs.size()];
@@ -225,7 +231,9 @@ public final class Robustness {
             List<Ingredient> titrants = recipe.titrants();
             meters = new Equilibrium.Prepared[titrants.size()];
             meterWarm = new Equilibrium.Point[titrants.size()];
+            titrantIndex = new int[titrants.size()];
             for (int i = 0; i < titrants.size(); i++) {
+                titrantIndex[i] = recipe.ingredients().indexOf(titrants.get(i));
                 if (redosed(i)) {
                     double kelvin = titrants.get(i).line().adjustTo().orElseThrow().kelvin();
                     meters[i] = analyzer.prepare(recipe, s, kelvin, OptionalDouble.empty(), Set.of());
@@ -253,44 +261,41 @@ public final class Robustness {
          * mol/L per pH}. Null where the batch cannot be solved.
          */
         double[][] sample(Map<Ingredient, Double> scale, double meterError) {
-            List<Ingredient> changed = new ArrayList<>();
-            for (Ingredient i : recipe.ingredients()) {
-                double f = scale.getOrDefault(i, 1.0);
-                changed.add(f == 1.0 ? i : new Ingredient(i.line(), i.substance(), i.kind(), i.value() * f,
-                        i.stockMolarity(), i.stockDensity()));
+            List<Ingredient> ings = recipe.ingredients();
+            double[] x = new double[ings.size()];
+            for (int k = 0; k < x.length; k++) {
+                Ingredient i = ings.get(k);
+                x[k] = i.kind() == Ingredient.Kind.TITRANT ? 0 : i.value() * scale.getOrDefault(i, 1.0);
             }
-            Recipe batch = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
             try {
-                Map<Ingredient, Double> doses = new LinkedHashMap<>();
-                List<Ingredient> titrants = batch.titrants();
-                for (int i = 0; i < titrants.size(); i++) {
+                for (int i = 0; i < meters.length; i++) {
                     if (meters[i] != null) {
-                        doses.put(titrants.get(i), redose(batch, i, dose.moles()[i], dose.setpoint()[i] + meterError));
+                        x[titrantIndex[i]] = redose(x, i, dose.moles()[i], dose.setpoint()[i] + meterError);
                     }
                 }
-                Solution s = batch.solution(doses);
-                List<Formulation.Condition> cs = batch.formulation().conditions();
+                List<Formulation.Condition> cs = recipe.formulation().conditions();
                 double[][] out = new double[2][cs.size()];
                 for (int c = 0; c < cs.size(); c++) {
-                    Equilibrium.Point p = conditions[c].point(s.totals(), warm[c]);
+                    Batches.Batch b = batches.batch(conditions[c].components(), 1, x);
+                    Equilibrium.Point p = conditions[c].point(b.totals(), warm[c]);
                     if (warm[c] == null) {
                         warm[c] = p;
                     }
                     out[0][c] = p.pH();
-                    out[1][c] = p.bufferCapacity() * s.waterKg() / s.volumeLitres(cs.get(c).kelvin());
+                    out[1][c] = p.bufferCapacity() * b.waterKg() / b.volumeLitres(cs.get(c).kelvin());
                 }
                 return out;
-            } catch (IndeterminateException | IllegalStateException e) {
+            } catch (IndeterminateException | IllegalStateException | DocumentException e) {
                 return null;   // a number the engine cannot stand behind is not a sample
             }
         }
 
         /** The dose at which the meter (adjustment temperature, part volume, closed) reads {@code goal}: secant steps. */
-        private double redose(Recipe batch, int titrant, double nominal, double goal) {
+        private double redose(double[] x, int titrant, double nominal, double goal) {
             double x0 = nominal;
-            double f0 = meterReading(batch, titrant, x0) - goal;
+            double f0 = meterReading(x, titrant, x0) - goal;
             double x1 = nominal * 1.01 + 1e-9;
-            double f1 = meterReading(batch, titrant, x1) - goal;
+            double f1 = meterReading(x, titrant, x1) - goal;
             for (int i = 0; i < 30 && Math.abs(f1) > 1e-7 && f1 != f0; i++) {
                 double x2 = Math.max(0, x1 - f1 * (x1 - x0) / (f1 - f0));
                 if (x2 == 0 && x1 == 0) {
@@ -299,7 +304,7 @@ public final class Robustness {
                 x0 = x1;
                 f0 = f1;
                 x1 = x2;
-                f1 = meterReading(batch, titrant, x1) - goal;
+                f1 = meterReading(x, titrant, x1) - goal;
             }
             if (Math.abs(f1) > 1e-4) {
                 throw new IllegalStateException("the q.s. of this batch did not converge");
@@ -307,14 +312,72 @@ public final class Robustness {
             return x1;
         }
 
-        private double meterReading(Recipe batch, int titrant, double moles) {
-            Ingredient t = batch.titrants().get(titrant);
-            Solution s = batch.solution(Map.of(t, moles), t.line().adjustTo().orElseThrow().atVolume());
-            Equilibrium.Point p = meters[titrant].point(s.totals(), meterWarm[titrant]);
+        /** The meter's reading with {@code moles} of one titrant and none of the others (they are dosed after it). */
+        private double meterReading(double[] amounts, int titrant, double moles) {
+            double[] x = amounts.clone();
+            for (int index : titrantIndex) {
+                x[index] = 0;
+            }
+            x[titrantIndex[titrant]] = moles;
+            double atVolume = recipe.titrants().get(titrant).line().adjustTo().orElseThrow().atVolume();
+            Equilibrium.Point p = meters[titrant].point(batches.batch(meters[titrant].components(), atVolume, x).totals(),
+                    meterWarm[titrant]);
             if (meterWarm[titrant] == null) {
                 meterWarm[titrant] = p;
             }
             return p.pH();
+        }
+    }
+
+    /**
+     * A recipe's batches by their amounts (per ingredient, in the recipe's order; titrants in moles): through the
+     * exact affine map of {@link BatchTotals} where the recipe has one, else through {@link Recipe#solution}.
+     * Shared by every study of the recipe; the maps are made once per component order and volume fraction.
+     */
+    static final class Batches {
+        record Batch(double[] totals, double waterKg, java.util.function.DoubleUnaryOperator litresAt) {
+            double volumeLitres(double kelvin) {
+                return litresAt.applyAsDouble(kelvin);
+            }
+        }
+
+        private final Recipe recipe;
+        private final Map<List<Object>, Optional<BatchTotals>> maps = new java.util.HashMap<>();
+
+        Batches(Recipe recipe) {
+            this.recipe = recipe;
+        }
+
+        Batch batch(List<Component> order, double volumeFraction, double[] amounts) {
+            Optional<BatchTotals> map = maps.computeIfAbsent(List.of(order, volumeFraction),
+                    k -> BatchTotals.of(recipe, order, volumeFraction));
+            if (map.isPresent()) {
+                double[] totals = new double[order.size()];
+                double water = map.get().totals(amounts, totals);
+                return new Batch(totals, water, kelvin -> map.get().volumeLitres(amounts, water, kelvin));
+            }
+            List<Ingredient> ings = recipe.ingredients();
+            List<Ingredient> changed = new ArrayList<>();
+            Map<Ingredient, Double> doses = new LinkedHashMap<>();
+            for (int k = 0; k < ings.size(); k++) {
+                Ingredient i = ings.get(k);
+                if (i.kind() == Ingredient.Kind.TITRANT) {
+                    changed.add(i);
+                    if (amounts[k] > 0) {
+                        doses.put(i, amounts[k]);
+                    }
+                } else {
+                    changed.add(new Ingredient(i.line(), i.substance(), i.kind(), amounts[k], i.stockMolarity(),
+                            i.stockDensity()));
+                }
+            }
+            Solution s = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin())
+                    .solution(doses, volumeFraction);
+            double[] totals = new double[order.size()];
+            for (int j = 0; j < totals.length; j++) {
+                totals[j] = s.totals().getOrDefault(order.get(j), 0.0);
+            }
+            return new Batch(totals, s.waterKg(), s::volumeLitres);
         }
     }
 

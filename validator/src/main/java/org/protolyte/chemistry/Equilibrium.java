@@ -172,6 +172,29 @@ public final class Equilibrium {
          */
         public Point point(Map<Component, Double> totals, Point warm) {
             p.load(totals);
+            return point(warm);
+        }
+
+        /** The same with the totals in the order of {@link #components()}. */
+        public Point point(double[] totals, Point warm) {
+            if (totals.length != p.total.length) {
+                throw new IllegalArgumentException("expected " + p.total.length + " totals, got " + totals.length);
+            }
+            for (int j = 0; j < totals.length; j++) {
+                if (!(totals[j] >= 0) || !Double.isFinite(totals[j])) {
+                    throw new IllegalArgumentException("total of " + p.components[j].name() + " must be ≥ 0");
+                }
+                p.total[j] = totals[j];
+            }
+            return point(warm);
+        }
+
+        /** The components, in the order {@link #point(double[], Point)} takes their totals. */
+        public List<Component> components() {
+            return List.of(p.components);
+        }
+
+        private Point point(Point warm) {
             frozen(p.total, p.kelvin);
             p.checkWaterRange();
             double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
@@ -300,6 +323,8 @@ public final class Equilibrium {
         final double[] powers;             // aH^p, p = 0 … the most protons a species carries
         final boolean linear;              // protons within 0 … 12: the linear path is safe to try
         final double[] byCharge = new double[17];     // log10 γ for charges −8 … +8 at the current I
+        final double[] inverseGammaByCharge = new double[17];
+        final double[] beta;                          // 10^log β (the linear path)
         /** Working arrays of one evaluation, reused: a solve makes no garbage per evaluation. */
         final double[] work;
         final double[] workW;
@@ -361,7 +386,11 @@ public final class Equilibrium {
             boolean ok = true;
             for (int i = 0; i < n; i++) {
                 maxProtons = Math.max(maxProtons, protons[i]);
-                ok &= protons[i] >= 0 && protons[i] <= 12 && Math.abs(log10Beta[i]) < 250;
+                ok &= protons[i] >= 0 && protons[i] <= 12 && Math.abs(log10Beta[i]) < 250 && Math.abs(charge[i]) <= 8;
+            }
+            beta = new double[n];
+            for (int i = 0; i < n; i++) {
+                beta[i] = Math.pow(10, log10Beta[i]);
             }
             linear = ok;
             powers = new double[maxProtons + 1];
@@ -466,9 +495,16 @@ public final class Equilibrium {
         /** γ depends on the charge and I only (ActivityModel), so it is computed once per charge. */
         void setActivityCoefficients(double ionicStrength) {
             java.util.Arrays.fill(byCharge, Double.NaN);
+            java.util.Arrays.fill(inverseGammaByCharge, Double.NaN);
             for (int i = 0; i < n; i++) {
                 log10Gamma[i] = log10Gamma(charge[i], ionicStrength);
-                betaOverGamma[i] = Math.pow(10, log10Beta[i] - log10Gamma[i]);
+                if (linear) {
+                    int k = charge[i] + byCharge.length / 2;
+                    if (Double.isNaN(inverseGammaByCharge[k])) {
+                        inverseGammaByCharge[k] = Math.pow(10, -log10Gamma[i]);
+                    }
+                    betaOverGamma[i] = beta[i] * inverseGammaByCharge[k];
+                }
             }
             log10GammaH = log10Gamma(1, ionicStrength);
             log10GammaOH = log10Gamma(-1, ionicStrength);

@@ -89,7 +89,7 @@ class RobustnessTest {
                 scale.put(weighed.get(i), (mask >> i & 1) == 1 ? 1 + t : 1 - t);
             }
             double pH = new Robustness.Sampler(new Analyzer(EQUILIBRIUM), r,
-                    new Robustness.Nominal(new double[0], new double[0])).sample(scale, 0)[0][0];
+                    new Robustness.Nominal(new double[0], new double[0]), new Robustness.Batches(r)).sample(scale, 0)[0][0];
             lo = Math.min(lo, pH);
             hi = Math.max(hi, pH);
         }
