@@ -19,6 +19,7 @@ import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.document.Formulation;
 import org.protolyte.document.DocumentException;
 import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.recipe.BatchTotals;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
@@ -30,8 +31,9 @@ import org.protolyte.recipe.Solution;
  * <li>batch to batch: each weighed amount uniform within its tolerance, and for a q.s. recipe the meter
  *     reading (normal) that sets the dose — reported as the distribution of pH and buffer capacity per
  *     condition and the probability of a batch leaving the pH target;</li>
- * <li>systematic: the constants (each pKa normal with its standard uncertainty), the same for every batch,
- *     so never mixed into that probability — reported as the spread of the predicted (nominal) pH.</li>
+ * <li>systematic: the constants (each step's pKa and ΔH° a normal pair with their standard uncertainties and
+ *     correlation, and pKw), the same for every batch, so never mixed into that probability — reported as the
+ *     spread of the predicted (nominal) pH.</li>
  * </ul>
  * Also the worst-case corners of the tolerance box (chosen by the sign of each component's sensitivity)
  * and the local sensitivities, dpH per +1 % of each component with the q.s. dosed again.
@@ -155,13 +157,19 @@ public final class Robustness {
         for (int w = 0; w < worlds; w++) {
             Map<AcidBaseSystem, double[]> shifts = new LinkedHashMap<>();
             for (AcidBaseSystem sys : systemsOf(recipe)) {
-                double[] d = new double[sys.steps().size()];
-                for (int k = 0; k < d.length; k++) {
-                    d[k] = sys.steps().get(k).uncertainty() * random.nextGaussian();
+                double[] d = new double[2 * sys.steps().size()];
+                for (int k = 0; k < sys.steps().size(); k++) {
+                    // pKa and ΔH° of one step come from one fit: a correlated normal pair
+                    DissociationStep step = sys.steps().get(k);
+                    double a = random.nextGaussian();
+                    double b = random.nextGaussian();
+                    double rho = step.correlation();
+                    d[2 * k] = step.uncertainty() * a;
+                    d[2 * k + 1] = step.deltaHUncertainty() * (rho * a + Math.sqrt(1 - rho * rho) * b);
                 }
                 shifts.put(sys, d);
             }
-            Analyzer shifted = new Analyzer(equilibrium.withPKaShifts(shifts)
+            Analyzer shifted = new Analyzer(equilibrium.withStepShifts(shifts)
                     .withPKwShift(Equilibrium.PKW_UNCERTAINTY * random.nextGaussian()));
             double[][] r = new Sampler(shifted, recipe, nominal, batches).nominal();
             if (r != null) {

@@ -52,15 +52,18 @@ public final class Equilibrium {
 
     private final ActivityModel activity;
     private final Map<Species, Double> logBetaShifts;
+    private final Map<Species, Double> deltaHShifts;    // J/mol on the dissociation steps the species carries
     private final double pKwShift;
 
     public Equilibrium(ActivityModel activity) {
-        this(activity, Map.of(), 0);
+        this(activity, Map.of(), Map.of(), 0);
     }
 
-    private Equilibrium(ActivityModel activity, Map<Species, Double> logBetaShifts, double pKwShift) {
+    private Equilibrium(ActivityModel activity, Map<Species, Double> logBetaShifts, Map<Species, Double> deltaHShifts,
+                        double pKwShift) {
         this.activity = activity;
         this.logBetaShifts = Map.copyOf(logBetaShifts);
+        this.deltaHShifts = Map.copyOf(deltaHShifts);
         this.pKwShift = pKwShift;
     }
 
@@ -69,31 +72,48 @@ public final class Equilibrium {
      * carries that step's proton has its log β raised by delta. For propagating a constant's uncertainty.
      */
     public Equilibrium withPKaShift(AcidBaseSystem system, int step, double delta) {
-        Map<Species, Double> shifts = new java.util.HashMap<>(logBetaShifts);
-        List<Species> species = system.species();
-        for (int i = 0; i <= step; i++) {
-            shifts.merge(species.get(i), delta, Double::sum);
-        }
-        return new Equilibrium(activity, shifts, pKwShift);
+        return withStepShifts(Map.of(system, step(system, step, delta, 0)));
     }
 
-    /** The same equilibrium with several steps' pKa moved at once: {@code deltas.get(system)[step]}. */
-    public Equilibrium withPKaShifts(Map<AcidBaseSystem, double[]> deltas) {
-        Map<Species, Double> shifts = new java.util.HashMap<>(logBetaShifts);
-        for (Map.Entry<AcidBaseSystem, double[]> d : deltas.entrySet()) {
-            List<Species> species = d.getKey().species();
-            for (int k = 0; k < d.getValue().length; k++) {
-                for (int i = 0; i <= k; i++) {       // as withPKaShift: every species carrying step k's proton
-                    shifts.merge(species.get(i), d.getValue()[k], Double::sum);
+    /** The same with one step's ΔH° of ionization raised by {@code delta} J/mol: its pKa moves away from 25 °C. */
+    public Equilibrium withDeltaHShift(AcidBaseSystem system, int step, double delta) {
+        return withStepShifts(Map.of(system, step(system, step, 0, delta)));
+    }
+
+    private static double[] step(AcidBaseSystem system, int step, double dPKa, double dDeltaH) {
+        double[] d = new double[2 * system.steps().size()];
+        d[2 * step] = dPKa;
+        d[2 * step + 1] = dDeltaH;
+        return d;
+    }
+
+    /**
+     * The same equilibrium with several steps moved at once: {@code shifts.get(system)} holds, for step k, the
+     * pKa change at [2k] and the ΔH° change (J/mol) at [2k + 1].
+     */
+    public Equilibrium withStepShifts(Map<AcidBaseSystem, double[]> shifts) {
+        Map<Species, Double> logs = new java.util.HashMap<>(logBetaShifts);
+        Map<Species, Double> enthalpies = new java.util.HashMap<>(deltaHShifts);
+        for (Map.Entry<AcidBaseSystem, double[]> e : shifts.entrySet()) {
+            List<Species> species = e.getKey().species();
+            double[] d = e.getValue();
+            for (int k = 0; 2 * k < d.length; k++) {
+                for (int i = 0; i <= k; i++) {       // every species carrying step k's proton
+                    if (d[2 * k] != 0) {
+                        logs.merge(species.get(i), d[2 * k], Double::sum);
+                    }
+                    if (d[2 * k + 1] != 0) {
+                        enthalpies.merge(species.get(i), d[2 * k + 1], Double::sum);
+                    }
                 }
             }
         }
-        return new Equilibrium(activity, shifts, pKwShift);
+        return new Equilibrium(activity, logs, enthalpies, pKwShift);
     }
 
     /** The same equilibrium with pKw raised by {@code delta}. */
     public Equilibrium withPKwShift(double delta) {
-        return new Equilibrium(activity, logBetaShifts, pKwShift + delta);
+        return new Equilibrium(activity, logBetaShifts, deltaHShifts, pKwShift + delta);
     }
 
     public ActivityModel activityModel() {
@@ -364,7 +384,8 @@ public final class Equilibrium {
                 comp[i] = index.get(sp[i].components().keySet().iterator().next());
                 protons[i] = sp[i].protons();
                 charge[i] = sp[i].charge();
-                log10Beta[i] = sp[i].formation().log10K(kelvin) + logBetaShifts.getOrDefault(sp[i], 0.0);
+                log10Beta[i] = sp[i].formation().log10K(kelvin) + logBetaShifts.getOrDefault(sp[i], 0.0)
+                        + DissociationStep.pKaChangeFromDeltaH(deltaHShifts.getOrDefault(sp[i], 0.0), kelvin);
             }
             this.index = index;
             components = index.keySet().toArray(new Component[0]);

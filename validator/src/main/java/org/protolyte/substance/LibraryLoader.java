@@ -152,7 +152,8 @@ public final class LibraryLoader {
                 }
                 steps.add(new DissociationStep(s.get("pKa").asDouble(), s.get("deltaH").asDouble() * 1000,
                         s.path("deltaCp").asDouble(0), s.get("uncertainty").asDouble(),
-                        TemperatureRange.celsius(from, to)));
+                        TemperatureRange.celsius(from, to), s.path("deltaHUncertainty").asDouble(0) * 1000,
+                        s.path("pKaDeltaHCorrelation").asDouble(0)));
                 sources.add(s.get("source").asString());
             }
             try {

@@ -34,8 +34,9 @@ class RealConditionsTest {
             + " {\"substance\": \"Tris hydrochloride\", \"amount\": \"50 mmol/L\"}]";
 
     /**
-     * Tris: dpH/dT ≈ −0.028 per K near 25 °C (from Goldberg et al. 2002's ΔH° = 47.45 kJ/mol, as quoted; and the
-     * supplier tables' −0.028). From 25 to 37 °C an equimolar Tris buffer drifts by about −0.34.
+     * Tris: dpH/dT ≈ −0.028 per K near 25 °C, the issue's check value from ΔH° in Goldberg et al. 2002 (47.45 kJ/mol,
+     * from memory; 47.53 ± 0.13 kJ/mol read in J. Solution Chem. 16 (1987) gives −0.0279 by van 't Hoff). From 25 to
+     * 37 °C an equimolar Tris buffer drifts by about −0.34.
      */
     @Test
     void trisDriftsByItsTemperatureCoefficientAndIsNamedAsTheCause() {

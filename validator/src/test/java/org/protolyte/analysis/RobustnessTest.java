@@ -10,6 +10,8 @@ import java.util.List;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.FormulationReader;
@@ -105,5 +107,37 @@ class RobustnessTest {
         var a = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(300, 42, 0.01, 0.01), x -> { });
         var b = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(300, 42, 0.01, 0.01), x -> { });
         assertEquals(a.conditions().get(0).pH(), b.conditions().get(0).pH());
+    }
+
+    /**
+     * A step's pKa and ΔH° drawn as a correlated pair. For a buffer at its pKa (dpH/dpKa ≈ 1) at 45 °C the pKa
+     * moves by u_pKa·a and by u_ΔH/(R ln10)·(1/T − 1/298.15)·b: with u_pKa = 0.01, u_ΔH = 8 kJ/mol that is
+     * c_H = −0.0881, and σ² = 0.01² + c_H² + 2ρ·0.01·c_H (derived). The sign of ρ must show in both the linear
+     * uncertainty and the Monte Carlo's systematic spread.
+     */
+    @ParameterizedTest(name = "correlation {0}")
+    @ValueSource(doubles = {0.9, -0.9})
+    void correlatedPKaAndDeltaHSpreadAsTheCovarianceSays(double rho) throws Exception {
+        String library = "{\"document\": \"substance-library\", \"formatVersion\": 1,"
+                + " \"systems\": [{\"name\": \"XB\", \"forms\": [{\"name\": \"HXB\", \"charge\": 0}, {\"name\": \"XB-\", \"charge\": -1}],"
+                + " \"steps\": [{\"pKa\": 7.0, \"uncertainty\": 0.01, \"deltaH\": 40, \"deltaHUncertainty\": 8,"
+                + " \"pKaDeltaHCorrelation\": " + rho + ", \"deltaCp\": 0, \"validFrom\": 0, \"validTo\": 60, \"source\": \"test\"}]}],"
+                + " \"substances\": [{\"name\": \"HXB acid\", \"molarMass\": 200, \"composition\": {\"systems\": [{\"system\": \"XB\", \"form\": \"HXB\", \"count\": 1}]}},"
+                + " {\"name\": \"NaXB salt\", \"molarMass\": 222, \"composition\": {\"ions\": {\"Na+\": 1}, \"systems\": [{\"system\": \"XB\", \"form\": \"XB-\", \"count\": 1}]}}]}";
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-RHO\", \"revision\": \"A\","
+                + " \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": ["
+                + "{\"substance\": \"HXB acid\", \"amount\": \"20 mmol/L\"}, {\"substance\": \"NaXB salt\", \"amount\": \"20 mmol/L\"}],"
+                + " \"conditions\": [{\"name\": \"warm\", \"temperature\": \"45 Cel\"}]}";
+        var lib = new LibraryLoader(SCHEMAS).addShipped().add("xb.json", library.getBytes(StandardCharsets.UTF_8), true).build();
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
+        Recipe r = new RecipeResolver(lib).resolve(f);
+        double cH = 8000 / (8.314462618 * Math.log(10)) * (1 / 318.15 - 1 / 298.15);
+        double expected = Math.sqrt(0.01 * 0.01 + cH * cH + 2 * rho * 0.01 * cH);
+        double linear = new Analyzer(EQUILIBRIUM).analyze(r).conditions().get(0).uncertainty().orElseThrow().pH();
+        double mc = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(10_000, 5, 0.01, 0.01), x -> { })
+                .conditions().get(0).systematicPH().standardDeviation();
+        // pKw adds 0.01 × (dpH/dpKw ≈ 0 in a buffer); 500 worlds: relative standard error of σ about 3 %
+        assertEquals(expected, linear, 0.03 * expected);
+        assertEquals(expected, mc, 0.12 * expected);
     }
 }
