@@ -24,7 +24,7 @@ class ValuesFromMemoryTest {
      * from 9 to 62 systems and the critical compilations (Goldberg et al. 2002 Table 1, NIST SRD 46) could not be
      * read here; lower it as values are verified.
      */
-    private static final int CEILING = 98;
+    private static final int CEILING = 95;
 
     @Test
     void recalledConstantsAreListedAndDoNotGrow() throws IOException {
