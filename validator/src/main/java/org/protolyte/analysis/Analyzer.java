@@ -316,30 +316,24 @@ public final class Analyzer {
      */
     Equilibrium.Prepared prepare(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
                                  java.util.Set<Component> extraIons) {
-        List<Species> species = new ArrayList<>(solution.species());
+        java.util.Set<Species> species = new java.util.LinkedHashSet<>(solution.species());
         // a fixed order (by name), so that problems prepared from different solutions of one recipe agree
         java.util.Set<Component> components = new java.util.TreeSet<>(
                 java.util.Comparator.comparing(Component::name).thenComparingInt(Component::charge));
         components.addAll(solution.totals().keySet());
         for (Component c : extraIons) {
             components.add(c);
-            if (!species.contains(Species.free(c))) {
-                species.add(Species.free(c));
-            }
+            species.add(Species.free(c));
         }
         if (co2.isEmpty()) {
-            return equilibrium.prepare(species, components, kelvin, Map.of());
+            return equilibrium.prepare(List.copyOf(species), components, kelvin, Map.of());
         }
         AcidBaseSystem carbonate = recipe.library().system(CARBONATE).orElseThrow(() -> new IndeterminateException(
                 Caveat.indeterminate("no-carbonate-system", "the library has no 'carbonate' system for a CO2 condition")));
-        for (Species x : carbonate.species()) {
-            if (!species.contains(x)) {
-                species.add(x);
-            }
-        }
+        species.addAll(carbonate.species());
         components.add(carbonate.basis());
         Species dissolved = carbonate.species().get(0);
-        return equilibrium.prepare(species, components, kelvin,
+        return equilibrium.prepare(List.copyOf(species), components, kelvin,
                 Map.of(dissolved, CarbonDioxide.dissolvedMolality(kelvin, co2.getAsDouble())));
     }
 
