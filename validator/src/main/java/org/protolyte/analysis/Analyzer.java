@@ -186,17 +186,22 @@ public final class Analyzer {
      * with the buffer capacity as the slope (dC/dpH = β), kept inside a bracket and bisected where a step leaves it.
      */
     private double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
-        EquilibriumState s0 = solve(recipe, solution, kelvin, co2, Map.of());
+        Component sodium = recipe.library().ion("Na+").orElseThrow();
+        Component chloride = recipe.library().ion("Cl-").orElseThrow();
+        Equilibrium.Prepared problem = prepare(recipe, solution, kelvin, co2, java.util.Set.of(sodium, chloride));
+        Map<Component, Double> totals = new LinkedHashMap<>(solution.totals());
+        Equilibrium.Point s0 = problem.trial(totals, null);
         if (Math.abs(s0.pH() - goal) < 1e-9) {
             return 0;
         }
         boolean base = s0.pH() < goal;
-        Component ion = recipe.library().ion(base ? "Na+" : "Cl-").orElseThrow();
+        Component ion = base ? sodium : chloride;
+        double present = totals.getOrDefault(ion, 0.0);
         double sign = base ? 1 : -1;             // base raises the pH, acid lowers it
         double lo = 0;
         double hi = MAX_TITRANT_MOLALITY;
         double x = 0;
-        EquilibriumState s = s0;
+        Equilibrium.Point s = s0;
         for (int i = 0; i < 100; i++) {
             double f = sign * (goal - s.pH());    // > 0 while more is needed
             if (Math.abs(f) < 1e-10) {
@@ -210,7 +215,8 @@ public final class Analyzer {
             double step = s.bufferCapacity() * f;
             double next = x + step;
             x = next > lo && next < hi ? next : (lo + hi) / 2;
-            s = solve(recipe, solution, kelvin, co2, Map.of(ion, x));
+            totals.put(ion, present + x);
+            s = problem.trial(totals, s);
             if (hi - lo < 1e-15) {
                 break;
             }

@@ -214,6 +214,22 @@ public final class Equilibrium {
             return List.of(p.components);
         }
 
+        /**
+         * A step of a search (a load, a dose): the self-consistent pH, I and β whatever the caveats, which only the
+         * search's result is judged by. Throws only where no number exists (frozen, outside water's range, no root,
+         * no convergence).
+         */
+        public Point trial(Map<Component, Double> totals, Point warm) {
+            p.load(totals);
+            frozen(p.total, p.kelvin);
+            p.checkWaterRange();
+            double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
+                    : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
+            p.setActivityCoefficients(r[1]);
+            p.molalities(r[0]);
+            return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
+        }
+
         private Point point(Point warm) {
             frozen(p.total, p.kelvin);
             p.checkWaterRange();

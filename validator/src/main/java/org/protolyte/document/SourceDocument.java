@@ -12,6 +12,12 @@ public record SourceDocument(String source, JsonNode root, Map<String, Location>
         locations = Map.copyOf(locations);
     }
 
+    /** Equal documents share their source; hashing the whole tree and its locations is not needed. */
+    @Override
+    public int hashCode() {
+        return source.hashCode();
+    }
+
     /** The location of the pointer, or of its nearest parent that has one. */
     public Optional<Location> locate(String pointer) {
         String p = pointer;

@@ -13,6 +13,12 @@ public record RulePack(String name, String version, Optional<String> title, List
                        Optional<String> extendsPack, boolean documentWaivers, SourceDocument document,
                        String sha256, boolean shipped) {
 
+    /** Equal packs share name and digest; hashing every rule and the source document is not needed. */
+    @Override
+    public int hashCode() {
+        return 31 * name.hashCode() + sha256.hashCode();
+    }
+
     public RulePack {
         appliesTo = List.copyOf(appliesTo);
     }
