@@ -349,13 +349,14 @@ public final class Analyzer {
             EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
             double perLitre = solution.waterKg() / volume;
             boolean determinate = s.determinate();
-            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre, volume,
+            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre,
+                    s.osmolality() * perLitre, volume,
                     buffers(recipe, solution, s, perLitre),
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
                     determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
                     determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty());
         } catch (IndeterminateException e) {
-            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, volume, List.of(),
+            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, Double.NaN, volume, List.of(),
                     OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty());
         }
     }

@@ -13,6 +13,8 @@ import org.protolyte.document.Formulation;
  * is present but a caveat is indeterminate, its numbers must not be shown as results.
  *
  * @param bufferCapacityPerLitre mol per litre of solution per pH unit, at the condition's temperature
+ * @param osmolarity             osmol per litre of solution at the condition's temperature (the state's osmolality
+ *                               times kg of water per litre); NaN without a state
  * @param buffers                each acid–base system's part of it, largest first
  * @param pHInAir                for a closed condition: the pH after equilibrating with room air
  * @param loads                  strong acid and base it takes before leaving the pH target
@@ -21,7 +23,8 @@ import org.protolyte.document.Formulation;
  * @param uncertainty            from the constants' uncertainties (see {@link Uncertainty})
  */
 public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
-                              List<Caveat> caveats, double bufferCapacityPerLitre, double volumeLitres,
+                              List<Caveat> caveats, double bufferCapacityPerLitre, double osmolarity,
+                              double volumeLitres,
                               List<BufferContribution> buffers, OptionalDouble pHInAir, Optional<Loads> loads,
                               OptionalDouble co2ForTarget, Optional<Uncertainty> uncertainty) {
 
@@ -31,7 +34,8 @@ public record ConditionResult(Formulation.Condition condition, Optional<Equilibr
     }
 
     public ConditionResult withUncertainty(Uncertainty u) {
-        return new ConditionResult(condition, state, caveats, bufferCapacityPerLitre, volumeLitres, buffers, pHInAir,
+        return new ConditionResult(condition, state, caveats, bufferCapacityPerLitre, osmolarity, volumeLitres, buffers,
+                pHInAir,
                 loads, co2ForTarget, Optional.of(u));
     }
 

@@ -21,6 +21,21 @@ public final class Davies implements ActivityModel {
         return -a * charge * charge * (s / (1 + s) - 0.3 * ionicStrength);
     }
 
+    /**
+     * With ln γ_i = z_i² f(I), f = −A ln10 (√I/(1+√I) − 0.3 I), the excess Gibbs energy is 2 F(I), F = ∫₀^I f, and
+     * Gibbs–Duhem gives Σ m_i (φ − 1) = 2 (I f − F), where ∫₀^I √x/(1+√x) dx = I − 2√I + 2 ln(1+√I) (derived here; the
+     * single-salt case is Bjerrum's relation φ − 1 = ln γ± − (1/m) ∫ ln γ± dm).
+     */
+    @Override
+    public double osmoticExcess(double ionicStrength, double a) {
+        double i = ionicStrength;
+        double s = Math.sqrt(i);
+        double k = a * Thermo.LN10;
+        double f = -k * (s / (1 + s) - 0.3 * i);
+        double integral = -k * (i - 2 * s + 2 * Math.log1p(s) - 0.15 * i * i);
+        return 2 * (i * f - integral);
+    }
+
     @Override
     public double warnAbove() {
         return 0.2;

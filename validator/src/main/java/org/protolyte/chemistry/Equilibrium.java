@@ -765,8 +765,9 @@ public final class Equilibrium {
                     openSet.add(components[j]);
                 }
             }
+            double total = particles + mH + mOH;
             return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,
-                    particles + mH + mOH, out, caveats, byComponent, openSet);
+                    total, total + activity.osmoticExcess(ionicStrength, a), out, caveats, byComponent, openSet);
         }
     }
 }

@@ -8,11 +8,12 @@ import java.util.Set;
  * A solved equilibrium at one temperature. pH = −log10(γH·mH) with γH from the activity model
  * (conventional scale, see {@link Equilibrium}). Buffer capacity is in mol/kg water per pH unit, in
  * total and per component (its term of the sum; water's own term is the rest); open components exchange
- * with a gas phase.
+ * with a gas phase. Osmolality (osmol/kg water) is the particle molality corrected by the activity model's osmotic
+ * coefficient; the dissociation state comes from the solution, so a half-neutralised buffer counts its real particles.
  */
 public record EquilibriumState(double kelvin, double pH, double ionicStrength, double bufferCapacity,
                                double pKw, double hydrogenMolality, double hydroxideMolality,
-                               double particleMolality, List<SpeciesAmount> species, List<Caveat> caveats,
+                               double particleMolality, double osmolality, List<SpeciesAmount> species, List<Caveat> caveats,
                                Map<Component, Double> componentBufferCapacity, Set<Component> openComponents) {
 
     public EquilibriumState {

@@ -209,6 +209,8 @@ public final class JsonRenderer {
                 o.put("bufferCapacityPerKgWater", Numbers.significant(s.bufferCapacity() * 1000, 4));
             }
             o.put("ionicStrength", Numbers.significant(s.ionicStrength(), 4));
+            o.put("osmolality", Numbers.significant(s.osmolality() * 1000, 4));
+            o.put("osmolarity", Numbers.significant(c.osmolarity() * 1000, 4));
             o.put("pKw", Numbers.decimals(s.pKw(), 3));
             c.pHInAir().ifPresent(x -> o.put("pHInAir", Numbers.decimals(x, 3)));
             c.co2ForTarget().ifPresent(x -> o.put("co2ForTarget", Numbers.significant(x / 1000, 3)));

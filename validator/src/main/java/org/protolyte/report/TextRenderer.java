@@ -119,8 +119,8 @@ public final class TextRenderer {
             t.pHAfterMakingUp().ifPresent(x -> b.append(String.format(Locale.ROOT,
                     "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
-        b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s%n", "condition", "T (°C)", "pH",
-                "β (mmol/L/pH)", "I (mol/kg)"));
+        b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s %9s%n", "condition", "T (°C)", "pH",
+                "β (mmol/L/pH)", "I (mol/kg)", "mOsm/kg"));
         Systems systems = new Systems(a.recipe().library());
         for (ConditionResult c : a.conditions()) {
             String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
@@ -128,13 +128,14 @@ public final class TextRenderer {
                 EquilibriumState s = c.state().orElseThrow();
                 String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))
                         .orElse(String.format(Locale.ROOT, "%.2f", s.pH()));
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s   %s%n", name,
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9.0f   %s%n", name,
                         Numbers.celsius(c.condition().kelvin()), pH,
                         Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
-                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), speciation(s, systems)));
+                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
+                        speciation(s, systems)));
             } else {
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s   (see diagnostics)%n", name,
-                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—"));
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
+                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));
             }
         }
         for (var d : a.drifts()) {

@@ -5,6 +5,11 @@ public final class IdealActivity implements ActivityModel {
     public static final IdealActivity INSTANCE = new IdealActivity();
 
     @Override
+    public double osmoticExcess(double ionicStrength, double debyeHuckelA) {
+        return 0;
+    }
+
+    @Override
     public double log10Gamma(int charge, double ionicStrength, double debyeHuckelA) {
         return 0;
     }

@@ -231,11 +231,11 @@ class RulePackLoadingTest {
     @Test
     void unknownCheckKindIsRefusedAtItsCheckListingTheKnownKinds() {
         DocumentException e = refused(pack("site", """
-                    { "id": "site-osmolality", "check": "osmolality-range", "severity": "warning",
+                    { "id": "site-osmolality", "check": "tonicity-by-freezing-point", "severity": "warning",
                       "summary": "Osmolality within range.", "explanation": "Tonicity matters.",
                       "references": ["common practice"] }"""));
         Problem p = problemAt(e, "/rules/0/check");
-        assertTrue(p.message().contains("osmolality-range"), p::toString);
+        assertTrue(p.message().contains("tonicity-by-freezing-point"), p::toString);
         for (String kind : CheckKinds.load().all().keySet()) {
             assertTrue(p.message().contains(kind), () -> kind + " not listed: " + p);
         }
@@ -382,7 +382,7 @@ class RulePackLoadingTest {
     void everyBrokenEntryOfAPackIsReportedAtOnce() {
         DocumentException e = refused(pack("site", """
                     { "id": "pka-near-target", "parameters": { "maxDistance": "one" } },
-                    { "id": "site-osmolality", "check": "osmolality-range", "severity": "warning",
+                    { "id": "site-osmolality", "check": "tonicity-by-freezing-point", "severity": "warning",
                       "summary": "s", "explanation": "e", "references": ["common practice"] }"""));
         problemAt(e, "/rules/0/parameters/maxDistance");
         problemAt(e, "/rules/1/check");
