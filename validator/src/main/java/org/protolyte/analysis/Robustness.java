@@ -29,7 +29,7 @@ import org.protolyte.recipe.Solution;
  * How much a recipe can take, by Monte Carlo through the engine, keeping two kinds of uncertainty apart:
  * <ul>
  * <li>batch to batch: each weighed amount uniform within its tolerance, and for a q.s. recipe the meter
- *     reading (normal) that sets the dose — reported as the distribution of pH and buffer capacity per
+ *     reading (normal) that sets the dose — reported as the distribution of pH, buffer capacity and osmolality per
  *     condition and the probability of a batch leaving the pH target;</li>
  * <li>systematic: the constants (each step's pKa and ΔH° a normal pair with their standard uncertainties and
  *     correlation, and pKw), the same for every batch, so never mixed into that probability — reported as the
@@ -51,7 +51,7 @@ public final class Robustness {
     public record Interval(double mean, double standardDeviation, double p025, double p975) {
     }
 
-    public record ConditionRobustness(String condition, Interval pH, Interval bufferCapacity,
+    public record ConditionRobustness(String condition, Interval pH, Interval bufferCapacity, Interval osmolality,
                                       OptionalDouble probabilityOutsideTarget, Interval systematicPH,
                                       double lowestCornerPH, double highestCornerPH, Map<String, Double> sensitivities) {
     }
@@ -82,6 +82,7 @@ public final class Robustness {
         int n = conditions.size();
         DescriptiveStatistics[] pH = stats(n);
         DescriptiveStatistics[] beta = stats(n);
+        DescriptiveStatistics[] osmolality = stats(n);
         int[] outside = new int[n];
         int solved = 0;
         for (int k = 0; k < settings.samples(); k++) {
@@ -97,6 +98,7 @@ public final class Robustness {
                 for (int c = 0; c < n; c++) {
                     pH[c].addValue(r[0][c]);
                     beta[c].addValue(r[1][c] * 1000);
+                    osmolality[c].addValue(r[2][c] * 1000);
                     if (outsideTarget(recipe, conditions.get(c), r[0][c])) {
                         outside[c]++;
                     }
@@ -115,7 +117,7 @@ public final class Robustness {
                     .orElse(false);
             Map<String, Double> sensitivities = sensitivities(sampler, weighed, c, nominal);
             double[] corners = corners(sampler, weighed, tolerances, sensitivities, c);
-            out.add(new ConditionRobustness(cond.name(), interval(pH[c]), interval(beta[c]),
+            out.add(new ConditionRobustness(cond.name(), interval(pH[c]), interval(beta[c]), interval(osmolality[c]),
                     atTarget && solved > 0 ? OptionalDouble.of((double) outside[c] / solved) : OptionalDouble.empty(),
                     interval(systematic[c]), corners[0], corners[1], sensitivities));
         }
@@ -266,7 +268,7 @@ public final class Robustness {
         /**
          * One batch: weighed amounts scaled, the q.s. dosed again so that the meter reads its setpoint plus
          * {@code meterError} (secant steps from the nominal dose), then every condition solved: {pH[], β[] in
-         * mol/L per pH}. Null where the batch cannot be solved.
+         * mol/L per pH, osmolality[] in osmol/kg}. Null where the batch cannot be solved.
          */
         double[][] sample(Map<Ingredient, Double> scale, double meterError) {
             List<Ingredient> ings = recipe.ingredients();
@@ -282,7 +284,7 @@ public final class Robustness {
                     }
                 }
                 List<Formulation.Condition> cs = recipe.formulation().conditions();
-                double[][] out = new double[2][cs.size()];
+                double[][] out = new double[3][cs.size()];
                 for (int c = 0; c < cs.size(); c++) {
                     Batches.Batch b = batches.batch(conditions[c].components(), 1, x);
                     Equilibrium.Point p = conditions[c].point(b.totals(), warm[c]);
@@ -291,6 +293,7 @@ public final class Robustness {
                     }
                     out[0][c] = p.pH();
                     out[1][c] = p.bufferCapacity() * b.waterKg() / b.volumeLitres(cs.get(c).kelvin());
+                    out[2][c] = p.osmolality();
                 }
                 return out;
             } catch (IndeterminateException | IllegalStateException | DocumentException e) {

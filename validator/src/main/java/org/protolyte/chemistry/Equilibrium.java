@@ -159,8 +159,8 @@ public final class Equilibrium {
         return new Prepared(new Problem(species, components, kelvin, fixedSpecies));
     }
 
-    /** pH, ionic strength (mol/kg) and buffer capacity (mol/kg per pH) of one solve, without the speciation. */
-    public record Point(double pH, double ionicStrength, double bufferCapacity) {
+    /** pH, ionic strength (mol/kg), buffer capacity (mol/kg per pH) and osmolality (osmol/kg) of one solve. */
+    public record Point(double pH, double ionicStrength, double bufferCapacity, double osmolality) {
     }
 
     /**
@@ -226,8 +226,7 @@ public final class Equilibrium {
             double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
                     : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
             p.setActivityCoefficients(r[1]);
-            p.molalities(r[0]);
-            return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
+            return p.point(r[0], r[1]);
         }
 
         private Point point(Point warm) {
@@ -243,8 +242,7 @@ public final class Equilibrium {
                     throw new IndeterminateException(c);
                 }
             }
-            p.molalities(r[0]);
-            return new Point(r[0], r[1], Thermo.LN10 * p.bufferSumOfWork(r[0]));
+            return p.point(r[0], r[1]);
         }
 
         /**
@@ -719,6 +717,17 @@ public final class Equilibrium {
                 sum += t;
             }
             return sum;
+        }
+
+        /** The fast path's result at the solution (pH, I): β and osmolality from the molalities there. */
+        Point point(double pH, double ionicStrength) {
+            double[] m = molalities(pH);
+            double particles = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            for (int i = 0; i < n; i++) {
+                particles += m[i];
+            }
+            return new Point(pH, ionicStrength, Thermo.LN10 * bufferSumOfWork(pH),
+                    particles + activity.osmoticExcess(ionicStrength, a));
         }
 
         /** I from the working molalities the last evaluation at this pH filled. */

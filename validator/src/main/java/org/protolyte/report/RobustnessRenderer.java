@@ -28,13 +28,16 @@ public final class RobustnessRenderer {
                     + "the diagnostics").append(NL).append(RunReport.CAUTION).append(NL);
             return b.toString();
         }
-        b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-10s %-22s %s%n", "condition", "pH batch mean [2.5–97.5 %]",
-                "β mmol/L/pH [2.5–97.5]", "P(outside)", "systematic pH [2.5–97.5]", "worst corners"));
+        b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-18s %-10s %-22s %s%n", "condition",
+                "pH batch mean [2.5–97.5 %]", "β mmol/L/pH [2.5–97.5]", "mOsm/kg [2.5–97.5]", "P(outside)",
+                "systematic pH [2.5–97.5]", "worst corners"));
         for (Robustness.ConditionRobustness c : r.conditions()) {
-            b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-10s %-22s %.3f … %.3f%n", c.condition(),
+            b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-18s %-10s %-22s %.3f … %.3f%n", c.condition(),
                     String.format(Locale.ROOT, "%.3f [%.3f–%.3f]", c.pH().mean(), c.pH().p025(), c.pH().p975()),
                     String.format(Locale.ROOT, "%.3g [%.3g–%.3g]", c.bufferCapacity().mean(), c.bufferCapacity().p025(),
                             c.bufferCapacity().p975()),
+                    String.format(Locale.ROOT, "%.0f [%.0f–%.0f]", c.osmolality().mean(), c.osmolality().p025(),
+                            c.osmolality().p975()),
                     c.probabilityOutsideTarget().isPresent()
                             ? String.format(Locale.ROOT, "%.1f %%", c.probabilityOutsideTarget().getAsDouble() * 100) : "—",
                     String.format(Locale.ROOT, "%.3f [%.3f–%.3f]", c.systematicPH().mean(), c.systematicPH().p025(),
@@ -72,6 +75,7 @@ public final class RobustnessRenderer {
             ObjectNode o = conditions.addObject().put("name", c.condition());
             interval(o.putObject("pH"), c.pH());
             interval(o.putObject("bufferCapacity"), c.bufferCapacity());
+            interval(o.putObject("osmolality"), c.osmolality());
             c.probabilityOutsideTarget().ifPresent(p -> o.put("probabilityOutsideTarget", p));
             interval(o.putObject("systematicPH"), c.systematicPH());
             o.put("lowestCornerPH", c.lowestCornerPH()).put("highestCornerPH", c.highestCornerPH());

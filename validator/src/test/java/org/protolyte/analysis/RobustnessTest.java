@@ -140,4 +140,16 @@ class RobustnessTest {
         assertEquals(expected, linear, 0.03 * expected);
         assertEquals(expected, mc, 0.12 * expected);
     }
+
+    /** The batches' osmolality centres on the analysis's own (the affine batch map and the full analysis agree). */
+    @Test
+    void batchOsmolalityCentresOnTheAnalysedValue() {
+        Recipe r = recipe(PHOSPHATE);
+        double analysed = new Analyzer(EQUILIBRIUM).analyze(r).conditions().get(0).state().orElseThrow().osmolality() * 1000;
+        Robustness.Interval mc = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(2000, 3, 0.01, 0.01), x -> { })
+                .conditions().get(0).osmolality();
+        // uniform ±1 % weighings: the mean is the nominal within a few hundredths of a mOsm/kg
+        assertEquals(analysed, mc.mean(), 0.1);
+        assertTrue(mc.p975() > mc.p025());
+    }
 }
