@@ -62,13 +62,23 @@ public final class Analyzer {
             results.add(condition(recipe, solution, c));
         }
         titrants.replaceAll(t -> explicitSetpointForTarget(recipe, t));
-        results = new ConstantsPropagation(equilibrium).apply(recipe, solution, results);
-        return new FormulationAnalysis(recipe, solution, results, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, results), drifts(recipe, results),
-                titratableAcidity(recipe, solution), Optional.empty());
+        int n = results.size();
+        Optional<Solution> working = recipe.formulation().dilution()
+                .map(d -> solution.diluted(d.factor(), recipe.makeUpKelvin()));
+        working.ifPresent(w -> recipe.formulation().conditions().forEach(c -> results.add(condition(recipe, w, c))));
+        List<ConditionResult> all = new ConstantsPropagation(equilibrium).apply(recipe, solution, results);
+        List<ConditionResult> own = all.subList(0, n);
+        Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
+                recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
+        return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
+                sensitivities(recipe, doses, own), drifts(recipe, own),
+                titratableAcidity(recipe, solution), Optional.empty(), diluted);
     }
 
-    /** pH and buffer capacity (mol/L per pH) of every condition, q.s. included; NaN where not determinate. */
+    /**
+     * pH and buffer capacity (mol/L per pH) of every condition, q.s. included, then of every condition of the working
+     * solution where the document is a concentrate; NaN where not determinate.
+     */
     double[][] core(Recipe recipe) {
         List<Caveat> ignored = new ArrayList<>();
         Map<Ingredient, Double> doses = new HashMap<>();
@@ -79,11 +89,15 @@ public final class Analyzer {
         } catch (DocumentException e) {
             return null;
         }
-        Solution solution = recipe.solution(doses);
+        Solution concentrate = recipe.solution(doses);
         List<Formulation.Condition> conditions = recipe.formulation().conditions();
-        double[][] out = new double[2][conditions.size()];
-        for (int i = 0; i < conditions.size(); i++) {
-            Formulation.Condition c = conditions.get(i);
+        int n = conditions.size();
+        boolean diluted = recipe.formulation().dilution().isPresent();
+        double[][] out = new double[2][diluted ? 2 * n : n];
+        for (int i = 0; i < out[0].length; i++) {
+            Formulation.Condition c = conditions.get(i % n);
+            Solution solution = i < n ? concentrate
+                    : concentrate.diluted(recipe.formulation().dilution().orElseThrow().factor(), recipe.makeUpKelvin());
             try {
                 EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
                 out[0][i] = s.pH();

@@ -1,5 +1,7 @@
 package org.protolyte.analysis;
 
+import org.protolyte.document.Formulation;
+
 import java.util.List;
 import java.util.Optional;
 
@@ -16,11 +18,18 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
                                   Optional<TitratableAcidity> titratableAcidity,
-                                  Optional<Robustness.Result> robustness) {
+                                  Optional<Robustness.Result> robustness, Optional<WorkingSolution> working) {
+
+    /** A concentrate's working solution: the dilution and every condition again (rules judge the document itself). */
+    public record WorkingSolution(Formulation.Dilution dilution, Solution solution, List<ConditionResult> conditions) {
+        public WorkingSolution {
+            conditions = List.copyOf(conditions);
+        }
+    }
 
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, Optional.of(r));
+                drifts, titratableAcidity, Optional.of(r), working);
     }
 
     public FormulationAnalysis {

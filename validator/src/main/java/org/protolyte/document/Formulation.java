@@ -12,7 +12,12 @@ import org.protolyte.units.Quantity;
  */
 public record Formulation(SourceDocument document, String id, Optional<String> title, Optional<String> revision,
                           Optional<String> intendedUse, Basis basis, List<Line> components,
-                          Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres) {
+                          Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres,
+                          Optional<Dilution> dilution) {
+
+    /** A concentrate diluted before use: final volume per volume of concentrate, with the diluent's name. */
+    public record Dilution(double factor, String diluent, String pointer) {
+    }
 
     /** Two temperatures within 0.005 K are the same condition (document values carry two decimals of °C). */
     public static boolean sameTemperature(double kelvin, double other) {

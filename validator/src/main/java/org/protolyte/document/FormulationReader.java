@@ -77,8 +77,16 @@ public final class FormulationReader {
             if (!problems.isEmpty()) {
                 throw new DocumentException(problems);
             }
+            Optional<Formulation.Dilution> dilution = Optional.empty();
+            if (root.has("dilution")) {
+                JsonNode d = root.get("dilution");
+                double factor = d.has("factor") ? d.get("factor").asDouble()
+                        : (d.get("parts").get("concentrate").asDouble() + d.get("parts").get("diluent").asDouble())
+                                / d.get("parts").get("concentrate").asDouble();
+                dilution = Optional.of(new Formulation.Dilution(factor, d.path("diluent").asString("water"), "/dilution"));
+            }
             return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
-                    text(root, "intendedUse"), basis, lines, target, conditions, dose);
+                    text(root, "intendedUse"), basis, lines, target, conditions, dose, dilution);
         }
 
         private static Optional<String> text(JsonNode n, String field) {

@@ -47,6 +47,16 @@ public final class RecipeResolver {
                 problems.add(f.document().problem(e.pointer, e.getMessage()));
             }
         }
+        f.dilution().ifPresent(d -> {
+            try {
+                if (!library.lookup(d.diluent()).solvent()) {
+                    problems.add(f.document().problem(d.pointer() + "/diluent", "the diluent '" + d.diluent()
+                            + "' is not water; only dilution with water is computed so far"));
+                }
+            } catch (LookupException e) {
+                problems.add(f.document().problem(d.pointer() + "/diluent", e.getMessage()));
+            }
+        });
         if (!problems.isEmpty()) {
             throw new DocumentException(problems);
         }

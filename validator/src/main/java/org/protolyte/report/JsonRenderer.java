@@ -152,6 +152,13 @@ public final class JsonRenderer {
         for (ConditionResult c : a.conditions()) {
             conditions.add(condition(c, systems, !f.basis().finalVolume(), a.solution().waterKg()));
         }
+        a.working().ifPresent(w -> {
+            ObjectNode o = n.putObject("workingSolution");
+            o.put("dilutionFactor", Numbers.significant(w.dilution().factor(), 6));
+            o.put("diluent", w.dilution().diluent());
+            ArrayNode cs = o.putArray("conditions");
+            w.conditions().forEach(c -> cs.add(condition(c, systems, false, w.solution().waterKg())));
+        });
         ArrayNode titrants = n.putArray("titrants");
         for (TitrantResult t : a.titrants()) {
             titrants.add(titrant(t, f));

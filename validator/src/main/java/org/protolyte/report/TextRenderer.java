@@ -119,25 +119,14 @@ public final class TextRenderer {
             t.pHAfterMakingUp().ifPresent(x -> b.append(String.format(Locale.ROOT,
                     "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
-        b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s %9s%n", "condition", "T (°C)", "pH",
-                "β (mmol/L/pH)", "I (mol/kg)", "mOsm/kg"));
         Systems systems = new Systems(a.recipe().library());
-        for (ConditionResult c : a.conditions()) {
-            String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
-            if (c.determinate()) {
-                EquilibriumState s = c.state().orElseThrow();
-                String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))
-                        .orElse(String.format(Locale.ROOT, "%.2f", s.pH()));
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9.0f   %s%n", name,
-                        Numbers.celsius(c.condition().kelvin()), pH,
-                        Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
-                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
-                        speciation(s, systems)));
-            } else {
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
-                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));
-            }
-        }
+        conditionTable(b, a.conditions(), systems);
+        a.working().ifPresent(w -> {
+            b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s (pH change is from ionic "
+                    + "strength and dilution):%n", Numbers.significant(w.dilution().factor(), 4).toPlainString(),
+                    w.dilution().diluent()));
+            conditionTable(b, w.conditions(), systems);
+        });
         for (var d : a.drifts()) {
             String cause = d.co2Change().map(x -> ", mostly the change of " + x).orElseGet(() -> d.system()
                     .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", x, d.dpKadT())).orElse(""));
@@ -193,5 +182,27 @@ public final class TextRenderer {
         List<String> parts = new ArrayList<>();
         bySystem.forEach((k, v) -> parts.add(k + ": " + String.join(", ", v)));
         return String.join("; ", parts);
+    }
+
+    /** One row per condition: temperature, pH with its uncertainty, β, I, osmolality and the main forms. */
+    private static void conditionTable(StringBuilder b, List<ConditionResult> conditions, Systems systems) {
+        b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s %9s%n", "condition", "T (°C)", "pH",
+                "β (mmol/L/pH)", "I (mol/kg)", "mOsm/kg"));
+        for (ConditionResult c : conditions) {
+            String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
+            if (c.determinate()) {
+                EquilibriumState s = c.state().orElseThrow();
+                String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))
+                        .orElse(String.format(Locale.ROOT, "%.2f", s.pH()));
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9.0f   %s%n", name,
+                        Numbers.celsius(c.condition().kelvin()), pH,
+                        Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
+                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
+                        speciation(s, systems)));
+            } else {
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
+                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));
+            }
+        }
     }
 }
