@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
@@ -775,8 +776,22 @@ public final class Equilibrium {
                 }
             }
             double total = particles + mH + mOH;
+            double osmolality = total + activity.osmoticExcess(ionicStrength, a);
+            String model = activity.name();
+            double[] saline = new double[3];      // free Na+, K+, Cl-
+            for (int i = 0; i < n; i++) {
+                if (sp[i].protons() == 0 && sp[i].components().size() == 1 && Pitzer.covers(sp[i].name())) {
+                    saline["Na+".equals(sp[i].name()) ? 0 : "K+".equals(sp[i].name()) ? 1 : 2] += m[i];
+                }
+            }
+            double strong = saline[0] + saline[1] + saline[2];
+            OptionalDouble phi = Pitzer.osmoticCoefficient(saline[0], saline[1], saline[2], kelvin);
+            if (ionicStrength > activity.warnAbove() && 0.5 * strong >= 0.75 * ionicStrength && phi.isPresent()) {
+                osmolality = phi.getAsDouble() * strong + (total - strong);
+                model = "Pitzer for Na+, K+ and Cl- (Pitzer and Mayorga 1973), the other solutes ideal";
+            }
             return new EquilibriumState(kelvin, pH, ionicStrength, beta, -Math.log10(kw), mH, mOH,
-                    total, total + activity.osmoticExcess(ionicStrength, a), out, caveats, byComponent, openSet);
+                    total, osmolality, model, out, caveats, byComponent, openSet);
         }
     }
 }

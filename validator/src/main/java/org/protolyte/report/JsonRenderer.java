@@ -218,6 +218,7 @@ public final class JsonRenderer {
             o.put("ionicStrength", Numbers.significant(s.ionicStrength(), 4));
             o.put("osmolality", Numbers.significant(s.osmolality() * 1000, 4));
             o.put("osmolarity", Numbers.significant(c.osmolarity() * 1000, 4));
+            o.put("osmolalityModel", s.osmolalityModel());
             o.put("pKw", Numbers.decimals(s.pKw(), 3));
             c.pHInAir().ifPresent(x -> o.put("pHInAir", Numbers.decimals(x, 3)));
             c.co2ForTarget().ifPresent(x -> o.put("co2ForTarget", Numbers.significant(x / 1000, 3)));
@@ -242,6 +243,10 @@ public final class JsonRenderer {
             o.putNull("pH");
             o.putNull("bufferCapacity");
             o.putNull("ionicStrength");
+            c.state().filter(s -> s.osmolalityModel().startsWith("Pitzer")).ifPresent(s -> {
+                o.put("osmolality", Numbers.significant(s.osmolality() * 1000, 4));
+                o.put("osmolalityModel", s.osmolalityModel());
+            });
             o.putArray("species");
         }
         return o;

@@ -1,6 +1,7 @@
 package org.protolyte.reference;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -48,5 +49,18 @@ class OsmolalityTest {
                 .with("glucose anhydrous", 0.1).condition(25).state().orElseThrow();
         assertEquals(0.175, s.particleMolality(), 0.001);
         assertEquals(s.particleMolality(), s.osmolality(), 0.004);
+    }
+
+    /**
+     * Above 0.2 mol/kg a saline solution's osmotic coefficient is Pitzer's: 1 mol/kg NaCl has φ = 0.9355 (Robinson
+     * and Stokes, from memory), 1871 mOsm/kg, where Davies would give about 2 % more; the pH there is indeterminate,
+     * the osmolality is not.
+     */
+    @Test
+    void aSalineConcentrateTakesPitzersOsmoticCoefficient() {
+        var c = ReferenceDocuments.solution().with("sodium chloride", 1.0).condition(25);
+        EquilibriumState s = c.state().orElseThrow();
+        assertEquals(1871, s.osmolality() * 1000, 8);
+        assertTrue(s.osmolalityModel().startsWith("Pitzer"), s.osmolalityModel());
     }
 }
