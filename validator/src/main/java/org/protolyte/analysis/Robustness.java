@@ -367,23 +367,7 @@ public final class Robustness {
                 double water = map.get().totals(amounts, totals);
                 return new Batch(totals, water, kelvin -> map.get().volumeLitres(amounts, water, kelvin));
             }
-            List<Ingredient> ings = recipe.ingredients();
-            List<Ingredient> changed = new ArrayList<>();
-            Map<Ingredient, Double> doses = new LinkedHashMap<>();
-            for (int k = 0; k < ings.size(); k++) {
-                Ingredient i = ings.get(k);
-                if (i.kind() == Ingredient.Kind.TITRANT) {
-                    changed.add(i);
-                    if (amounts[k] > 0) {
-                        doses.put(i, amounts[k]);
-                    }
-                } else {
-                    changed.add(new Ingredient(i.line(), i.substance(), i.kind(), amounts[k], i.stockMolarity(),
-                            i.stockDensity()));
-                }
-            }
-            Solution s = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin())
-                    .solution(doses, volumeFraction);
+            Solution s = BatchTotals.solution(recipe, amounts, volumeFraction);
             double[] totals = new double[order.size()];
             for (int j = 0; j < totals.length; j++) {
                 totals[j] = s.totals().getOrDefault(order.get(j), 0.0);

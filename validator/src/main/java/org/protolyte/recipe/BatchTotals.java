@@ -136,7 +136,11 @@ public final class BatchTotals {
         return ingredients;
     }
 
-    private static Solution solution(Recipe recipe, double[] amounts, double volumeFraction) {
+    /**
+     * The batch with these amounts (per ingredient, in the recipe's order; titrant moles) made the long way, through
+     * {@link Recipe#solution}: what the map reproduces, and what a recipe without a map uses.
+     */
+    public static Solution solution(Recipe recipe, double[] amounts, double volumeFraction) {
         List<Ingredient> ings = recipe.ingredients();
         List<Ingredient> changed = new java.util.ArrayList<>();
         Map<Ingredient, Double> doses = new java.util.LinkedHashMap<>();
