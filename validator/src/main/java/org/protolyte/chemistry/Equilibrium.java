@@ -257,14 +257,14 @@ public final class Equilibrium {
             for (int k = 0; k < 30; k++) {
                 p.setActivityCoefficients(ionicStrength);
                 double f = p.chargeBalance(pH);
-                double next = ionicStrength;
                 double slope = -Thermo.LN10 * p.bufferSumOfWork(pH);
                 double nextI = p.ionicStrengthOfWork(pH);
                 double nextPH = pH - f / slope;
                 if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
                     return null;
                 }
-                boolean settled = Math.abs(nextPH - pH) < 1e-12 && Math.abs(nextI - next) <= 1e-13 + 1e-10 * next;
+                boolean settled = Math.abs(nextPH - pH) < 1e-12
+                        && Math.abs(nextI - ionicStrength) <= 1e-13 + 1e-10 * ionicStrength;
                 pH = nextPH;
                 ionicStrength = nextI;
                 if (settled) {
@@ -281,12 +281,10 @@ public final class Equilibrium {
                 if (r != null) {
                     return r;
                 }
-                startPH = Double.NaN;
-                startI = Double.NaN;
             }
-            double ionicStrength = !Double.isNaN(fixedIonicStrength) ? fixedIonicStrength
-                    : Double.isNaN(startI) ? p.strongIonicStrength() : startI;
-            double pH = startPH;
+            // from scratch: the bracketed root at each ionic strength, starting from the strong ions alone
+            double ionicStrength = Double.isNaN(fixedIonicStrength) ? p.strongIonicStrength() : fixedIonicStrength;
+            double pH = Double.NaN;
             for (int i = 0; i < MAX_ITERATIONS; i++) {
                 p.setActivityCoefficients(ionicStrength);
                 pH = p.chargeBalanceRoot(pH);
@@ -356,7 +354,7 @@ public final class Equilibrium {
         final double[] log10Gamma;
         final double[] betaOverGamma;      // 10^(log β − log γ) at the current I (the linear path of molalities)
         final double[] powers;             // aH^p, p = 0 … the most protons a species carries
-        final boolean linear;              // protons within 0 … 12: the linear path is safe to try
+        final boolean linear;              // protons 0 … 12, |log β| < 250, |z| ≤ 8: the linear path is safe to try
         final double[] byCharge = new double[17];     // log10 γ for charges −8 … +8 at the current I
         final double[] inverseGammaByCharge = new double[17];
         final double[] beta;                          // 10^log β (the linear path)
