@@ -348,6 +348,12 @@ public final class Equilibrium {
         final double[] log10Beta;
         final Map<Component, Integer> index;
         final Component[] components;
+        /** Per species: null for a species of one component; for a complex its components and their counts. */
+        final int[][] complexParts;
+        final int[][] complexCounts;
+        final boolean complexes;
+        final double[] freeBasis;          // per component, mol/kg: the free basis species (complexes only; warm start)
+        final double[] log10GammaComponent; // per component: log10 γ of its free basis at the current I
         final double[] total;
         final double kw;
         final double a;
@@ -379,11 +385,7 @@ public final class Equilibrium {
             }
             List<Species> used = new ArrayList<>();
             for (Species s : species) {
-                if (s.components().size() != 1 || s.components().values().iterator().next() != 1) {
-                    throw new IllegalArgumentException("species " + s.name()
-                            + " combines several components; complexes are not solved yet");
-                }
-                if (index.containsKey(s.components().keySet().iterator().next())) {
+                if (index.keySet().containsAll(s.components().keySet())) {
                     used.add(s);
                 }
             }
@@ -393,8 +395,26 @@ public final class Equilibrium {
             protons = new int[n];
             charge = new int[n];
             log10Beta = new double[n];
+            complexParts = new int[n][];
+            complexCounts = new int[n][];
+            boolean anyComplex = false;
             for (int i = 0; i < n; i++) {
-                comp[i] = index.get(sp[i].components().keySet().iterator().next());
+                Map<Component, Integer> parts = sp[i].components();
+                if (parts.size() > 1 || parts.values().iterator().next() != 1) {
+                    anyComplex = true;
+                    List<Component> ordered = new ArrayList<>(parts.keySet());
+                    // shown with its most negative part (the ligand): CaCit- under citrate
+                    ordered.sort(java.util.Comparator.comparingInt(Component::charge).thenComparing(Component::name));
+                    complexParts[i] = new int[ordered.size()];
+                    complexCounts[i] = new int[ordered.size()];
+                    for (int q = 0; q < ordered.size(); q++) {
+                        complexParts[i][q] = index.get(ordered.get(q));
+                        complexCounts[i][q] = parts.get(ordered.get(q));
+                    }
+                    comp[i] = complexParts[i][0];
+                } else {
+                    comp[i] = index.get(parts.keySet().iterator().next());
+                }
                 protons[i] = sp[i].protons();
                 charge[i] = sp[i].charge();
                 log10Beta[i] = sp[i].formation().log10K(kelvin) + logBetaShifts.getOrDefault(sp[i], 0.0)
@@ -406,7 +426,7 @@ public final class Equilibrium {
             for (int j = 0; j < components.length; j++) {
                 boolean hasSpecies = false;
                 for (int i = 0; i < n; i++) {
-                    hasSpecies |= comp[i] == j;
+                    hasSpecies |= complexParts[i] == null && comp[i] == j;
                 }
                 if (!hasSpecies) {
                     throw new IllegalArgumentException("component " + components[j].name() + " has no species");
@@ -426,7 +446,10 @@ public final class Equilibrium {
             for (int i = 0; i < n; i++) {
                 beta[i] = Math.pow(10, log10Beta[i]);
             }
-            linear = ok;
+            linear = ok && !anyComplex;
+            complexes = anyComplex;
+            freeBasis = new double[components.length];
+            log10GammaComponent = new double[components.length];
             powers = new double[maxProtons + 1];
             work = new double[n];
             workW = new double[n];
@@ -542,6 +565,9 @@ public final class Equilibrium {
             }
             log10GammaH = log10Gamma(1, ionicStrength);
             log10GammaOH = log10Gamma(-1, ionicStrength);
+            for (int j = 0; j < components.length; j++) {
+                log10GammaComponent[j] = log10Gamma(components[j].charge(), ionicStrength);
+            }
         }
 
         private double log10Gamma(int z, double ionicStrength) {
@@ -562,6 +588,9 @@ public final class Equilibrium {
          * of a double.
          */
         double[] molalities(double pH) {
+            if (complexes) {
+                return complexMolalities(pH);
+            }
             if (!linear) {
                 return logMolalities(pH);
             }
@@ -591,6 +620,156 @@ public final class Equilibrium {
                 m[i] = open(j) ? fixedMolality[j] * w[i] / w[fixedIndex[j]] : total[j] * w[i] / sum[j];
             }
             return m;
+        }
+
+        /**
+         * With complexes the components are coupled. Each component's own species follow its free basis b_j,
+         * m_s = b_j·w_s with w_s = β_s aH^p γ_j/γ_s, and a complex of several follows all of theirs,
+         * m_c = β_c aH^p Π_j (γ_j b_j)^ν_cj / γ_c. The mass balances T_j = b_j Σ_s w_s + Σ_c ν_cj m_c are solved for
+         * ln b by Newton's method: the Jacobian ∂T_j/∂ln b_k = δ_jk b_j Σ w + Σ_c ν_cj ν_ck m_c is symmetric and positive
+         * definite, the steps are limited, and each solve starts from the last one's b.
+         */
+        private double[] complexMolalities(double pH) {
+            int nc = components.length;
+            double[] w = workW;
+            double[] own = workSum;                   // Σ w over each component's own species
+            java.util.Arrays.fill(own, 0);
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] == null) {
+                    int j = comp[i];
+                    w[i] = Math.exp(Thermo.LN10 * (log10Beta[i] - protons[i] * pH + log10GammaComponent[j] - log10Gamma[i]));
+                    own[j] += w[i];
+                }
+            }
+            double[] b = freeBasis;
+            boolean[] unknown = new boolean[nc];
+            for (int j = 0; j < nc; j++) {
+                if (open(j)) {
+                    b[j] = fixedMolality[j] / w[fixedIndex[j]];
+                } else if (total[j] <= 0) {
+                    b[j] = 0;
+                } else {
+                    unknown[j] = true;
+                    if (!(b[j] > 0) || !Double.isFinite(b[j])) {
+                        b[j] = total[j] / own[j];
+                    }
+                }
+            }
+            double[] m = work;
+            for (int iteration = 0; ; iteration++) {
+                complexesFromBasis(pH, m);
+                double[] residual = new double[nc];
+                double[][] jacobian = new double[nc][nc];
+                double worst = 0;
+                for (int j = 0; j < nc; j++) {
+                    if (unknown[j]) {
+                        residual[j] = b[j] * own[j] - total[j];
+                        jacobian[j][j] = b[j] * own[j];
+                    }
+                }
+                for (int c = 0; c < n; c++) {
+                    if (complexParts[c] == null) {
+                        continue;
+                    }
+                    for (int q = 0; q < complexParts[c].length; q++) {
+                        int j = complexParts[c][q];
+                        if (!unknown[j]) {
+                            continue;
+                        }
+                        residual[j] += complexCounts[c][q] * m[c];
+                        for (int r = 0; r < complexParts[c].length; r++) {
+                            if (unknown[complexParts[c][r]]) {
+                                jacobian[j][complexParts[c][r]] += complexCounts[c][q] * complexCounts[c][r] * m[c];
+                            }
+                        }
+                    }
+                }
+                for (int j = 0; j < nc; j++) {
+                    if (unknown[j]) {
+                        // each balance relative to its total: rows of order one, whatever the concentrations
+                        residual[j] /= total[j];
+                        for (int k = 0; k < nc; k++) {
+                            jacobian[j][k] /= total[j];
+                        }
+                        worst = Math.max(worst, Math.abs(residual[j]));
+                    } else {
+                        jacobian[j][j] = 1;          // a fixed or absent component: its row says Δ = 0
+                    }
+                }
+                if (worst < 1e-13) {
+                    break;
+                }
+                if (iteration == 200) {
+                    throw new IndeterminateException(Caveat.indeterminate("complexation-not-converged",
+                            "the mass balances of the complexes did not converge"));
+                }
+                double[] step = new org.apache.commons.math3.linear.LUDecomposition(
+                        new org.apache.commons.math3.linear.Array2DRowRealMatrix(jacobian, false), 1e-300).getSolver()
+                        .solve(new org.apache.commons.math3.linear.ArrayRealVector(residual, false)).toArray();
+                double largest = 0;
+                for (double d : step) {
+                    largest = Math.max(largest, Math.abs(d));
+                }
+                double scale = largest > 2 ? 2 / largest : 1;     // at most a factor e² per step
+                for (int j = 0; j < nc; j++) {
+                    if (unknown[j]) {
+                        b[j] *= Math.exp(-scale * step[j]);
+                    }
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] == null) {
+                    m[i] = b[comp[i]] * w[i];
+                }
+            }
+            return m;
+        }
+
+        /** The complexes' molalities from the free bases b (see {@link #complexMolalities}). */
+        private void complexesFromBasis(double pH, double[] m) {
+            for (int c = 0; c < n; c++) {
+                if (complexParts[c] == null) {
+                    continue;
+                }
+                double log = log10Beta[c] - protons[c] * pH - log10Gamma[c];
+                boolean absent = false;
+                for (int q = 0; q < complexParts[c].length; q++) {
+                    int j = complexParts[c][q];
+                    absent |= !(freeBasis[j] > 0);
+                    log += complexCounts[c][q] * (log10GammaComponent[j] + Math.log10(freeBasis[j]));
+                }
+                m[c] = absent ? 0 : Math.exp(Thermo.LN10 * log);
+            }
+        }
+
+        /**
+         * With complexes: β/ln10 = −(df/dpH)/ln10 by central difference of the charge balance with the mass balances
+         * solved (at fixed γ, as the analytic form); each component's own term, for the report, from its own species.
+         */
+        private double complexBufferSum(double pH) {
+            double h = 1e-6;
+            double slope = (chargeBalance(pH + h) - chargeBalance(pH - h)) / (2 * h);
+            double[] m = molalities(pH);              // the working molalities of pH again
+            java.util.Arrays.fill(workTerm, 0);
+            double[] own = new double[components.length];
+            double[] meanP = new double[components.length];
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] == null) {
+                    own[comp[i]] += m[i];
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] == null && own[comp[i]] > 0) {
+                    meanP[comp[i]] += protons[i] * m[i] / own[comp[i]];
+                }
+            }
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] == null) {
+                    double d = protons[i] - meanP[comp[i]];
+                    workTerm[comp[i]] += m[i] * d * d;
+                }
+            }
+            return -slope / Thermo.LN10;
         }
 
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */
@@ -687,6 +866,9 @@ public final class Equilibrium {
          * working molalities the last evaluation at this pH filled.
          */
         double bufferSumOfWork(double pH) {
+            if (complexes) {
+                return complexBufferSum(pH);
+            }
             double[] m = work;
             double[] meanP = workSum;
             java.util.Arrays.fill(meanP, 0);
