@@ -354,6 +354,9 @@ public final class Equilibrium {
         final boolean complexes;
         final double[] freeBasis;          // per component, mol/kg: the free basis species (complexes only; warm start)
         final double[] log10GammaComponent; // per component: log10 γ of its free basis at the current I
+        final double[] complexEffect;
+        final boolean[] coupledComponent;  // in at least one complex
+        final int[] coupled;               // sized to the number of coupled components      // per complex outside its range: |ΔpH| per 0.1 in log K, once judged
         final double[] total;
         final double kw;
         final double a;
@@ -449,6 +452,21 @@ public final class Equilibrium {
             linear = ok && !anyComplex;
             complexes = anyComplex;
             freeBasis = new double[components.length];
+            coupledComponent = new boolean[components.length];
+            for (int i = 0; i < n; i++) {
+                if (complexParts[i] != null) {
+                    for (int j : complexParts[i]) {
+                        coupledComponent[j] = true;
+                    }
+                }
+            }
+            int count = 0;
+            for (boolean x : coupledComponent) {
+                count += x ? 1 : 0;
+            }
+            coupled = new int[count];
+            complexEffect = new double[n];
+            java.util.Arrays.fill(complexEffect, Double.NaN);
             log10GammaComponent = new double[components.length];
             powers = new double[maxProtons + 1];
             work = new double[n];
@@ -514,6 +532,12 @@ public final class Equilibrium {
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
                 TemperatureRange v = sp[i].formation().validity();
+                if (complexParts[i] != null) {
+                    if (!v.contains(kelvin)) {
+                        complexOutOfRange(i, pH, v, t, describeMinor, minor, out);
+                    }
+                    continue;
+                }
                 if (reported[j] || !(total[j] > 0 || open(j)) || v.contains(kelvin)) {
                     continue;
                 }
@@ -539,6 +563,37 @@ public final class Equilibrium {
                         t, String.join(", ", minor), EXTRAPOLATION_ERROR, MINOR_PH_EFFECT)));
             }
             return out;
+        }
+
+        /**
+         * A complex's constant outside its range: its own effect, found by moving its log β by the extrapolation bound
+         * and solving the charge balance again at the same activity coefficients. Judged at the first solve of the
+         * prepared problem (the batches of a study are near it) and kept.
+         */
+        private void complexOutOfRange(int c, double pH, TemperatureRange v, double t, boolean describeMinor,
+                                       List<String> minor, List<Caveat> out) {
+            if (Double.isNaN(complexEffect[c])) {
+                double saved = log10Beta[c];
+                log10Beta[c] = saved + EXTRAPOLATION_ERROR;
+                double moved;
+                try {
+                    moved = chargeBalanceRoot(pH);
+                } finally {
+                    log10Beta[c] = saved;
+                    molalities(pH);                   // the working molalities of pH again
+                }
+                complexEffect[c] = Math.abs(moved - pH);
+            }
+            double effect = complexEffect[c];
+            if (effect < MINOR_PH_EFFECT) {
+                if (describeMinor) {
+                    minor.add(String.format(Locale.ROOT, "%s (%s, pH effect %.1g)", sp[c].name(), v, effect));
+                }
+            } else {
+                out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
+                        "%.1f °C is outside %s, where the constant of the complex %s is valid, and it moves the pH by "
+                                + "%.3f per %.1f in log K", t, v, sp[c].name(), effect, EXTRAPOLATION_ERROR)));
+            }
         }
 
         double strongIonicStrength() {
@@ -642,59 +697,64 @@ public final class Equilibrium {
                 }
             }
             double[] b = freeBasis;
-            boolean[] unknown = new boolean[nc];
+            int[] unknown = new int[coupled.length];  // the coupled components solved for, as indices into b
+            int u = 0;
             for (int j = 0; j < nc; j++) {
                 if (open(j)) {
                     b[j] = fixedMolality[j] / w[fixedIndex[j]];
                 } else if (total[j] <= 0) {
                     b[j] = 0;
+                } else if (!coupledComponent[j]) {
+                    b[j] = total[j] / own[j];         // in no complex: its own species share its total
                 } else {
-                    unknown[j] = true;
+                    unknown[u++] = j;
                     if (!(b[j] > 0) || !Double.isFinite(b[j])) {
                         b[j] = total[j] / own[j];
                     }
                 }
             }
+            int[] position = new int[nc];
+            java.util.Arrays.fill(position, -1);
+            for (int q = 0; q < u; q++) {
+                position[unknown[q]] = q;
+            }
             double[] m = work;
-            for (int iteration = 0; ; iteration++) {
+            for (int iteration = 0; u > 0; iteration++) {
                 complexesFromBasis(pH, m);
-                double[] residual = new double[nc];
-                double[][] jacobian = new double[nc][nc];
-                double worst = 0;
-                for (int j = 0; j < nc; j++) {
-                    if (unknown[j]) {
-                        residual[j] = b[j] * own[j] - total[j];
-                        jacobian[j][j] = b[j] * own[j];
-                    }
+                double[] residual = new double[u];
+                double[][] jacobian = new double[u][u];
+                for (int q = 0; q < u; q++) {
+                    int j = unknown[q];
+                    residual[q] = b[j] * own[j] - total[j];
+                    jacobian[q][q] = b[j] * own[j];
                 }
                 for (int c = 0; c < n; c++) {
                     if (complexParts[c] == null) {
                         continue;
                     }
-                    for (int q = 0; q < complexParts[c].length; q++) {
-                        int j = complexParts[c][q];
-                        if (!unknown[j]) {
+                    for (int x = 0; x < complexParts[c].length; x++) {
+                        int row = position[complexParts[c][x]];
+                        if (row < 0) {
                             continue;
                         }
-                        residual[j] += complexCounts[c][q] * m[c];
-                        for (int r = 0; r < complexParts[c].length; r++) {
-                            if (unknown[complexParts[c][r]]) {
-                                jacobian[j][complexParts[c][r]] += complexCounts[c][q] * complexCounts[c][r] * m[c];
+                        residual[row] += complexCounts[c][x] * m[c];
+                        for (int y = 0; y < complexParts[c].length; y++) {
+                            int col = position[complexParts[c][y]];
+                            if (col >= 0) {
+                                jacobian[row][col] += complexCounts[c][x] * complexCounts[c][y] * m[c];
                             }
                         }
                     }
                 }
-                for (int j = 0; j < nc; j++) {
-                    if (unknown[j]) {
-                        // each balance relative to its total: rows of order one, whatever the concentrations
-                        residual[j] /= total[j];
-                        for (int k = 0; k < nc; k++) {
-                            jacobian[j][k] /= total[j];
-                        }
-                        worst = Math.max(worst, Math.abs(residual[j]));
-                    } else {
-                        jacobian[j][j] = 1;          // a fixed or absent component: its row says Δ = 0
+                double worst = 0;
+                for (int q = 0; q < u; q++) {
+                    // each balance relative to its total: rows of order one, whatever the concentrations
+                    double t = total[unknown[q]];
+                    residual[q] /= t;
+                    for (int k = 0; k < u; k++) {
+                        jacobian[q][k] /= t;
                     }
+                    worst = Math.max(worst, Math.abs(residual[q]));
                 }
                 if (worst < 1e-13) {
                     break;
@@ -711,11 +771,12 @@ public final class Equilibrium {
                     largest = Math.max(largest, Math.abs(d));
                 }
                 double scale = largest > 2 ? 2 / largest : 1;     // at most a factor e² per step
-                for (int j = 0; j < nc; j++) {
-                    if (unknown[j]) {
-                        b[j] *= Math.exp(-scale * step[j]);
-                    }
+                for (int q = 0; q < u; q++) {
+                    b[unknown[q]] *= Math.exp(-scale * step[q]);
                 }
+            }
+            if (u == 0) {
+                complexesFromBasis(pH, m);
             }
             for (int i = 0; i < n; i++) {
                 if (complexParts[i] == null) {

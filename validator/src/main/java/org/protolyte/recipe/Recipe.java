@@ -132,6 +132,11 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
                 species.addAll(system.species());
             }
         }
+        for (Species complex : library.complexes()) {       // every complex whose components are all present
+            if (totals.keySet().containsAll(complex.components().keySet())) {
+                species.add(complex);
+            }
+        }
         return new Solution(totals, new ArrayList<>(species), waterKg, moles, soluteVolume);
     }
 }

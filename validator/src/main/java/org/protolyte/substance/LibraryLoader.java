@@ -16,6 +16,8 @@ import java.util.Set;
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.DissociationStep;
+import org.protolyte.chemistry.FormationConstant;
+import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.TemperatureRange;
 import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
@@ -43,6 +45,8 @@ public final class LibraryLoader {
     private final SchemaCatalog schemas;
 
     private final Map<String, AcidBaseSystem> systems = new LinkedHashMap<>();
+    private final Map<String, Species> complexes = new LinkedHashMap<>();
+    private final Map<String, String> complexSources = new LinkedHashMap<>();
     private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
     private final Map<String, Component> solutes = new LinkedHashMap<>();
@@ -86,7 +90,8 @@ public final class LibraryLoader {
     }
 
     public SubstanceLibrary build() {
-        return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files);
+        return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files,
+                complexes, complexSources);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -110,6 +115,43 @@ public final class LibraryLoader {
                     "solute"));
             each(root, "substances", this::substance);
             each(root, "ambiguousNames", this::ambiguousName);
+            each(root, "complexes", this::complex);
+        }
+
+        /**
+         * A complex or ion pair: its components by name (an ion, a solute, or an acid–base system's least protonated
+         * form), the protons it carries beyond them, and its cumulative formation constant from those.
+         */
+        private void complex(JsonNode n, String pointer) {
+            Map<Component, Integer> parts = new LinkedHashMap<>();
+            for (var e : n.get("components").properties()) {
+                Component c = ions.get(e.getKey());
+                if (c == null) {
+                    c = solutes.get(e.getKey());
+                }
+                if (c == null) {
+                    c = systems.values().stream().map(AcidBaseSystem::basis).filter(b -> b.name().equals(e.getKey()))
+                            .findFirst().orElse(null);
+                }
+                if (c == null) {
+                    problems.add(doc.problem(pointer + "/components/" + e.getKey(), "'" + e.getKey() + "' is not an "
+                            + "ion, a solute or the least protonated form of an acid–base system in the library"));
+                    return;
+                }
+                parts.put(c, e.getValue().asInt());
+            }
+            double from = n.get("validFrom").asDouble();
+            double to = n.get("validTo").asDouble();
+            try {
+                Species s = new Species(n.get("name").asString(), n.get("charge").asInt(), parts,
+                        n.path("protons").asInt(0), new FormationConstant(n.get("log10K").asDouble(),
+                        n.path("deltaH").asDouble(0) * 1000, n.path("deltaCp").asDouble(0),
+                        n.get("uncertainty").asDouble(), TemperatureRange.celsius(from, to)));
+                named(complexes, n, pointer, s, "complex");
+                complexSources.put(s.name(), n.get("source").asString());
+            } catch (IllegalArgumentException e) {
+                problems.add(doc.problem(pointer, e.getMessage()));
+            }
         }
 
         private void each(JsonNode root, String field, java.util.function.BiConsumer<JsonNode, String> f) {

@@ -13,6 +13,7 @@ import java.util.Set;
 
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.Species;
 import org.protolyte.document.Suggestions;
 
 /**
@@ -30,11 +31,16 @@ public final class SubstanceLibrary {
     private final Map<String, Substance> index;           // by normalised name or synonym
     private final Map<String, List<String>> ambiguous;    // normalised shared name -> forms
     private final Map<String, String> files;              // library file -> SHA-256 of its bytes
+    private final List<Species> complexes;                // species of several components, in library order
+    private final Map<String, String> complexSources;
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
                      Map<String, Substance> substances, Map<String, Substance> index,
-                     Map<String, List<String>> ambiguous, Map<String, String> files) {
+                     Map<String, List<String>> ambiguous, Map<String, String> files,
+                     Map<String, Species> complexes, Map<String, String> complexSources) {
+        this.complexes = List.copyOf(complexes.values());
+        this.complexSources = Map.copyOf(complexSources);
         this.systems = Map.copyOf(systems);
         this.stepSources = Map.copyOf(stepSources);
         this.ions = Map.copyOf(ions);
@@ -109,6 +115,15 @@ public final class SubstanceLibrary {
 
     public Collection<AcidBaseSystem> systems() {
         return systems.values();
+    }
+
+    /** Complexes and ion pairs: species of several components with their formation constants. */
+    public List<Species> complexes() {
+        return complexes;
+    }
+
+    public String complexSource(String name) {
+        return complexSources.getOrDefault(name, "");
     }
 
     /** The source of each dissociation step of a system, in step order. */

@@ -1,0 +1,65 @@
+package org.protolyte.substance;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.analysis.Analyzer;
+import org.protolyte.analysis.ConditionResult;
+import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.recipe.RecipeResolver;
+
+/**
+ * Complexes declared in a library reach the recipe: a calcium citrate complex with an invented constant (a test
+ * value, not data) appears in the speciation, takes calcium and citrate from their balances and lowers the pH of a
+ * citrate buffer (binding the most deprotonated form releases protons, derived).
+ */
+class UserComplexesTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+
+    private static SubstanceLibrary library(String complexes) {
+        String json = "{\"document\": \"substance-library\", \"formatVersion\": 1, \"complexes\": [" + complexes + "]}";
+        return new LibraryLoader(SCHEMAS).addShipped().add("site.json", json.getBytes(StandardCharsets.UTF_8), true).build();
+    }
+
+    private static ConditionResult use(SubstanceLibrary lib) {
+        String doc = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-CX\", \"basis\": {\"finalVolume\": \"1 L\"},"
+                + " \"components\": [{\"substance\": \"citric acid anhydrous\", \"amount\": \"10 mmol/L\"},"
+                + " {\"substance\": \"trisodium citrate dihydrate\", \"amount\": \"10 mmol/L\"},"
+                + " {\"substance\": \"calcium chloride dihydrate\", \"amount\": \"5 mmol/L\"}],"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", doc.getBytes(StandardCharsets.UTF_8)));
+        return new Analyzer(new Equilibrium(Davies.INSTANCE)).analyze(new RecipeResolver(lib).resolve(f)).conditions().get(0);
+    }
+
+    private static final String CACIT = "{\"name\": \"CaCit-\", \"charge\": -1, \"components\": {\"Ca+2\": 1, \"Cit-3\": 1},"
+            + " \"log10K\": 4.5, \"uncertainty\": 0.1, \"validFrom\": 0, \"validTo\": 50, \"source\": \"test value\"}";
+
+    @Test
+    void aDeclaredComplexBindsAndReleasesProtons() {
+        ConditionResult without = use(library(""));
+        ConditionResult with = use(library(CACIT));
+        double bound = with.state().orElseThrow().species().stream().filter(s -> s.species().name().equals("CaCit-"))
+                .findFirst().orElseThrow().molality();
+        assertTrue(bound > 0.001 && bound < 0.005, "CaCit- " + bound);
+        assertTrue(with.state().orElseThrow().pH() < without.state().orElseThrow().pH() - 0.05);
+        assertEquals(without.state().orElseThrow().particleMolality() - bound,
+                with.state().orElseThrow().particleMolality(), 2e-4, "a complex of two is one particle, less the protons released");
+    }
+
+    @Test
+    void aComplexOfUnknownComponentsIsRefusedAtItsPlace() {
+        DocumentException e = org.junit.jupiter.api.Assertions.assertThrows(DocumentException.class, () -> library(
+                "{\"name\": \"XY\", \"charge\": 0, \"components\": {\"X+2\": 1, \"Cit-3\": 1}, \"log10K\": 1,"
+                        + " \"uncertainty\": 0.1, \"validFrom\": 0, \"validTo\": 50, \"source\": \"test value\"}"));
+        assertTrue(e.getMessage().contains("/complexes/0/components/X+2"), e.getMessage());
+    }
+}
