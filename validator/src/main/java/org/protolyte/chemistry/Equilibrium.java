@@ -804,16 +804,90 @@ public final class Equilibrium {
         }
 
         /**
-         * With complexes: β/ln10 = −(df/dpH)/ln10 by central difference of the charge balance with the mass balances
-         * solved (at fixed γ, as the analytic form); each component's own term, for the report, from its own species.
+         * With complexes: β = −df/dpH with every mass balance held, by implicit differentiation at fixed γ. At fixed
+         * free bases ∂m_s/∂pH = −ln10·p_s·m_s; the bases follow from J·(d ln b/dpH) = ln10·(Σ_s ν_sj p_s m_s)_j with
+         * J_jk = Σ_s ν_sj ν_sk m_s (a component in no complex on its own: J = T_j; an open one: d ln b/dpH = ln10·p of
+         * its fixed species). Then df/dpH = −ln10 (mH + mOH + Σ z_s p_s m_s) + Σ_k (Σ_s z_s ν_sk m_s) d ln b_k/dpH.
+         * Each component's own term, for the report, is the uncoupled formula over its own species.
          */
         private double complexBufferSum(double pH) {
-            double h = 1e-6;
-            double slope = (chargeBalance(pH + h) - chargeBalance(pH - h)) / (2 * h);
-            double[] m = molalities(pH);              // the working molalities of pH again
+            int nc = components.length;
+            double[] m = work;
+            double mH = Math.exp(Thermo.LN10 * (-pH - log10GammaH));
+            double mOH = kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            double[] rhs = new double[nc];            // Σ_s ν_sj p_s m_s
+            double[] chargeWeight = new double[nc];   // Σ_s z_s ν_sj m_s
+            double[][] jacobian = new double[nc][nc];
+            double direct = mH + mOH;                 // −(∂f/∂pH at fixed b)/ln10
+            for (int i = 0; i < n; i++) {
+                direct += charge[i] * protons[i] * m[i];
+                if (complexParts[i] == null) {
+                    int j = comp[i];
+                    rhs[j] += protons[i] * m[i];
+                    chargeWeight[j] += charge[i] * m[i];
+                    jacobian[j][j] += m[i];
+                } else {
+                    for (int x = 0; x < complexParts[i].length; x++) {
+                        int j = complexParts[i][x];
+                        rhs[j] += complexCounts[i][x] * protons[i] * m[i];
+                        chargeWeight[j] += charge[i] * complexCounts[i][x] * m[i];
+                        for (int y = 0; y < complexParts[i].length; y++) {
+                            jacobian[j][complexParts[i][y]] += complexCounts[i][x] * complexCounts[i][y] * m[i];
+                        }
+                    }
+                }
+            }
+            double[] slope = new double[nc];          // d ln b_j/dpH, divided by ln10
+            for (int j = 0; j < nc; j++) {
+                if (open(j)) {
+                    slope[j] = protons[fixedIndex[j]];
+                    for (int k = 0; k < nc; k++) {    // its row: d ln b_j/dpH is known
+                        jacobian[j][k] = k == j ? 1 : 0;
+                    }
+                    rhs[j] = slope[j];
+                } else if (!(total[j] > 0)) {
+                    for (int k = 0; k < nc; k++) {
+                        jacobian[j][k] = k == j ? 1 : 0;
+                    }
+                    rhs[j] = 0;
+                } else {
+                    for (int k = 0; k < nc; k++) {    // an open or absent component's column is moved to the right
+                        if (k != j && (open(k) || !(total[k] > 0))) {
+                            jacobian[j][k] = 0;
+                        }
+                    }
+                }
+            }
+            for (int j = 0; j < nc; j++) {            // the known slopes of open components enter the other rows
+                if (!open(j) && total[j] > 0) {
+                    for (int i = 0; i < n; i++) {
+                        if (complexParts[i] == null) {
+                            continue;
+                        }
+                        int nuJ = 0;
+                        for (int x = 0; x < complexParts[i].length; x++) {
+                            nuJ += complexParts[i][x] == j ? complexCounts[i][x] : 0;
+                        }
+                        for (int x = 0; nuJ > 0 && x < complexParts[i].length; x++) {
+                            int k = complexParts[i][x];
+                            if (open(k)) {
+                                rhs[j] -= nuJ * complexCounts[i][x] * m[i] * protons[fixedIndex[k]];
+                            }
+                        }
+                    }
+                }
+            }
+            double[] d = new org.apache.commons.math3.linear.LUDecomposition(
+                    new org.apache.commons.math3.linear.Array2DRowRealMatrix(jacobian, false), 1e-300).getSolver()
+                    .solve(new org.apache.commons.math3.linear.ArrayRealVector(rhs, false)).toArray();
+            double sum = direct;
+            for (int k = 0; k < nc; k++) {
+                sum -= chargeWeight[k] * d[k];
+            }
+            // each component's own term, for the report
             java.util.Arrays.fill(workTerm, 0);
-            double[] own = new double[components.length];
-            double[] meanP = new double[components.length];
+            double[] own = new double[nc];
+            double[] meanP = new double[nc];
             for (int i = 0; i < n; i++) {
                 if (complexParts[i] == null) {
                     own[comp[i]] += m[i];
@@ -826,11 +900,11 @@ public final class Equilibrium {
             }
             for (int i = 0; i < n; i++) {
                 if (complexParts[i] == null) {
-                    double d = protons[i] - meanP[comp[i]];
-                    workTerm[comp[i]] += m[i] * d * d;
+                    double dev = protons[i] - meanP[comp[i]];
+                    workTerm[comp[i]] += m[i] * dev * dev;
                 }
             }
-            return -slope / Thermo.LN10;
+            return sum;
         }
 
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */

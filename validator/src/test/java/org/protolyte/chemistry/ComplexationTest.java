@@ -114,4 +114,27 @@ class ComplexationTest {
                 - free.hydrogenMolality() - free.hydroxideMolality();
         assertEquals(complex - protonsReleased, free.particleMolality() - bound.particleMolality(), 1e-12);
     }
+
+    /**
+     * The buffer capacity with complexes (implicit differentiation) is the slope of the titration: strong base added
+     * per pH at fixed activity coefficients, β ≈ ΔC_Na/ΔpH by central difference (derived).
+     */
+    @Test
+    void bufferCapacityIsTheSlopeOfTheTitration() {
+        EquilibriumState s = solve(6.0, 0.005, 0.02);
+        double i = s.ionicStrength();
+        double h = 1e-6;
+        double up = solveAt(6.0, 0.005, 0.02 + h, i).pH();
+        double down = solveAt(6.0, 0.005, 0.02 - h, i).pH();
+        assertEquals(2 * h / (up - down), solveAt(6.0, 0.005, 0.02, i).bufferCapacity(), 1e-5 * s.bufferCapacity());
+    }
+
+    private static EquilibriumState solveAt(double logK, double metal, double sodium, double ionicStrength) {
+        Map<Component, Double> totals = new LinkedHashMap<>();
+        totals.put(CITRATE.basis(), 0.01);
+        totals.put(M, metal);
+        totals.put(CL, 2 * metal);
+        totals.put(NA, sodium);
+        return DAVIES.solve(species(logK), totals, 298.15, ionicStrength);
+    }
 }
