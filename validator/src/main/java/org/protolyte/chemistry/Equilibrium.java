@@ -763,9 +763,7 @@ public final class Equilibrium {
                     throw new IndeterminateException(Caveat.indeterminate("complexation-not-converged",
                             "the mass balances of the complexes did not converge"));
                 }
-                double[] step = new org.apache.commons.math3.linear.LUDecomposition(
-                        new org.apache.commons.math3.linear.Array2DRowRealMatrix(jacobian, false), 1e-300).getSolver()
-                        .solve(new org.apache.commons.math3.linear.ArrayRealVector(residual, false)).toArray();
+                double[] step = solveInPlace(jacobian, residual);
                 double largest = 0;
                 for (double d : step) {
                     largest = Math.max(largest, Math.abs(d));
@@ -784,6 +782,49 @@ public final class Equilibrium {
                 }
             }
             return m;
+        }
+
+        /**
+         * Solves A x = y by Gaussian elimination with partial pivoting, overwriting both; returns y as x. The systems
+         * are a handful of coupled components, where a library call's allocations would cost more than the algebra.
+         */
+        private static double[] solveInPlace(double[][] a, double[] y) {
+            int size = y.length;
+            for (int col = 0; col < size; col++) {
+                int pivot = col;
+                for (int r = col + 1; r < size; r++) {
+                    if (Math.abs(a[r][col]) > Math.abs(a[pivot][col])) {
+                        pivot = r;
+                    }
+                }
+                if (!(Math.abs(a[pivot][col]) > 0)) {
+                    throw new IndeterminateException(Caveat.indeterminate("complexation-singular",
+                            "the mass balances of the complexes are singular"));
+                }
+                double[] row = a[pivot];
+                a[pivot] = a[col];
+                a[col] = row;
+                double t = y[pivot];
+                y[pivot] = y[col];
+                y[col] = t;
+                for (int r = col + 1; r < size; r++) {
+                    double f = a[r][col] / a[col][col];
+                    if (f != 0) {
+                        for (int k = col; k < size; k++) {
+                            a[r][k] -= f * a[col][k];
+                        }
+                        y[r] -= f * y[col];
+                    }
+                }
+            }
+            for (int r = size - 1; r >= 0; r--) {
+                double v = y[r];
+                for (int k = r + 1; k < size; k++) {
+                    v -= a[r][k] * y[k];
+                }
+                y[r] = v / a[r][r];
+            }
+            return y;
         }
 
         /** The complexes' molalities from the free bases b (see {@link #complexMolalities}). */
@@ -877,9 +918,7 @@ public final class Equilibrium {
                     }
                 }
             }
-            double[] d = new org.apache.commons.math3.linear.LUDecomposition(
-                    new org.apache.commons.math3.linear.Array2DRowRealMatrix(jacobian, false), 1e-300).getSolver()
-                    .solve(new org.apache.commons.math3.linear.ArrayRealVector(rhs, false)).toArray();
+            double[] d = solveInPlace(jacobian, rhs);
             double sum = direct;
             for (int k = 0; k < nc; k++) {
                 sum -= chargeWeight[k] * d[k];
