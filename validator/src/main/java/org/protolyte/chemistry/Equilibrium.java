@@ -858,7 +858,13 @@ public final class Equilibrium {
             double mOH = kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
             double[] rhs = new double[nc];            // Σ_s ν_sj p_s m_s
             double[] chargeWeight = new double[nc];   // Σ_s z_s ν_sj m_s
-            double[][] jacobian = new double[nc][nc];
+            double[] diagonal = new double[nc];       // Σ_s ν_sj² m_s
+            int[] position = new int[nc];             // index in the coupled block, or −1
+            int u = 0;
+            for (int j = 0; j < nc; j++) {
+                position[j] = coupledComponent[j] && !open(j) && total[j] > 0 ? u++ : -1;
+            }
+            double[][] block = new double[u][u];
             double direct = mH + mOH;                 // −(∂f/∂pH at fixed b)/ln10
             for (int i = 0; i < n; i++) {
                 direct += charge[i] * protons[i] * m[i];
@@ -866,59 +872,45 @@ public final class Equilibrium {
                     int j = comp[i];
                     rhs[j] += protons[i] * m[i];
                     chargeWeight[j] += charge[i] * m[i];
-                    jacobian[j][j] += m[i];
-                } else {
-                    for (int x = 0; x < complexParts[i].length; x++) {
-                        int j = complexParts[i][x];
-                        rhs[j] += complexCounts[i][x] * protons[i] * m[i];
-                        chargeWeight[j] += charge[i] * complexCounts[i][x] * m[i];
-                        for (int y = 0; y < complexParts[i].length; y++) {
-                            jacobian[j][complexParts[i][y]] += complexCounts[i][x] * complexCounts[i][y] * m[i];
+                    diagonal[j] += m[i];
+                    continue;
+                }
+                for (int x = 0; x < complexParts[i].length; x++) {
+                    int j = complexParts[i][x];
+                    rhs[j] += complexCounts[i][x] * protons[i] * m[i];
+                    chargeWeight[j] += charge[i] * complexCounts[i][x] * m[i];
+                    diagonal[j] += complexCounts[i][x] * complexCounts[i][x] * m[i];
+                    for (int y = 0; y < complexParts[i].length; y++) {
+                        int k = complexParts[i][y];
+                        if (position[j] >= 0 && position[k] >= 0 && k != j) {
+                            block[position[j]][position[k]] += complexCounts[i][x] * complexCounts[i][y] * m[i];
+                        } else if (position[j] >= 0 && open(k)) {
+                            // an open component's slope is known: its column moves to the right-hand side
+                            rhs[j] -= complexCounts[i][x] * complexCounts[i][y] * m[i] * protons[fixedIndex[k]];
                         }
                     }
                 }
             }
-            double[] slope = new double[nc];          // d ln b_j/dpH, divided by ln10
+            double[] d = new double[nc];              // d ln b_j/dpH, divided by ln10
+            double[] y = new double[u];
             for (int j = 0; j < nc; j++) {
                 if (open(j)) {
-                    slope[j] = protons[fixedIndex[j]];
-                    for (int k = 0; k < nc; k++) {    // its row: d ln b_j/dpH is known
-                        jacobian[j][k] = k == j ? 1 : 0;
-                    }
-                    rhs[j] = slope[j];
-                } else if (!(total[j] > 0)) {
-                    for (int k = 0; k < nc; k++) {
-                        jacobian[j][k] = k == j ? 1 : 0;
-                    }
-                    rhs[j] = 0;
-                } else {
-                    for (int k = 0; k < nc; k++) {    // an open or absent component's column is moved to the right
-                        if (k != j && (open(k) || !(total[k] > 0))) {
-                            jacobian[j][k] = 0;
-                        }
+                    d[j] = protons[fixedIndex[j]];
+                } else if (position[j] >= 0) {
+                    block[position[j]][position[j]] = diagonal[j];
+                    y[position[j]] = rhs[j];
+                } else if (diagonal[j] > 0) {
+                    d[j] = rhs[j] / diagonal[j];      // in no complex: its own balance alone
+                }
+            }
+            if (u > 0) {
+                solveInPlace(block, y);
+                for (int j = 0; j < nc; j++) {
+                    if (position[j] >= 0) {
+                        d[j] = y[position[j]];
                     }
                 }
             }
-            for (int j = 0; j < nc; j++) {            // the known slopes of open components enter the other rows
-                if (!open(j) && total[j] > 0) {
-                    for (int i = 0; i < n; i++) {
-                        if (complexParts[i] == null) {
-                            continue;
-                        }
-                        int nuJ = 0;
-                        for (int x = 0; x < complexParts[i].length; x++) {
-                            nuJ += complexParts[i][x] == j ? complexCounts[i][x] : 0;
-                        }
-                        for (int x = 0; nuJ > 0 && x < complexParts[i].length; x++) {
-                            int k = complexParts[i][x];
-                            if (open(k)) {
-                                rhs[j] -= nuJ * complexCounts[i][x] * m[i] * protons[fixedIndex[k]];
-                            }
-                        }
-                    }
-                }
-            }
-            double[] d = solveInPlace(jacobian, rhs);
             double sum = direct;
             for (int k = 0; k < nc; k++) {
                 sum -= chargeWeight[k] * d[k];
