@@ -545,6 +545,9 @@ public final class Equilibrium {
                 if (beta < 0) {
                     molalities(pH);
                     beta = bufferSumOfWork(pH);
+                    if (complexes) {
+                        complexOwnTerms();
+                    }
                 }
                 double share = open(j) ? 1 : Math.abs(workTerm[j]) / beta;
                 if (share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT) {
@@ -849,7 +852,6 @@ public final class Equilibrium {
          * free bases ∂m_s/∂pH = −ln10·p_s·m_s; the bases follow from J·(d ln b/dpH) = ln10·(Σ_s ν_sj p_s m_s)_j with
          * J_jk = Σ_s ν_sj ν_sk m_s (a component in no complex on its own: J = T_j; an open one: d ln b/dpH = ln10·p of
          * its fixed species). Then df/dpH = −ln10 (mH + mOH + Σ z_s p_s m_s) + Σ_k (Σ_s z_s ν_sk m_s) d ln b_k/dpH.
-         * Each component's own term, for the report, is the uncoupled formula over its own species.
          */
         private double complexBufferSum(double pH) {
             int nc = components.length;
@@ -915,7 +917,13 @@ public final class Equilibrium {
             for (int k = 0; k < nc; k++) {
                 sum -= chargeWeight[k] * d[k];
             }
-            // each component's own term, for the report
+            return sum;
+        }
+
+        /** With complexes, each component's own term of β/ln10 for the report: the uncoupled formula over its own species. */
+        private void complexOwnTerms() {
+            int nc = components.length;
+            double[] m = work;
             java.util.Arrays.fill(workTerm, 0);
             double[] own = new double[nc];
             double[] meanP = new double[nc];
@@ -935,7 +943,6 @@ public final class Equilibrium {
                     workTerm[comp[i]] += m[i] * dev * dev;
                 }
             }
-            return sum;
         }
 
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */
@@ -1099,6 +1106,9 @@ public final class Equilibrium {
         EquilibriumState state(double pH, double ionicStrength, List<Caveat> caveats) {
             double[] m = molalities(pH);
             double beta = Thermo.LN10 * bufferSumOfWork(pH);
+            if (complexes) {
+                complexOwnTerms();
+            }
             double mH = Math.pow(10, -pH - log10GammaH);
             double mOH = kw * Math.pow(10, pH - log10GammaOH);
             double[] sum = new double[components.length];
