@@ -92,12 +92,12 @@ public final class Analyzer {
         Solution concentrate = recipe.solution(doses);
         List<Formulation.Condition> conditions = recipe.formulation().conditions();
         int n = conditions.size();
-        boolean diluted = recipe.formulation().dilution().isPresent();
-        double[][] out = new double[2][diluted ? 2 * n : n];
+        Optional<Solution> working = recipe.formulation().dilution()
+                .map(d -> concentrate.diluted(d.factor(), recipe.makeUpKelvin()));
+        double[][] out = new double[2][working.isPresent() ? 2 * n : n];
         for (int i = 0; i < out[0].length; i++) {
             Formulation.Condition c = conditions.get(i % n);
-            Solution solution = i < n ? concentrate
-                    : concentrate.diluted(recipe.formulation().dilution().orElseThrow().factor(), recipe.makeUpKelvin());
+            Solution solution = i < n ? concentrate : working.orElseThrow();
             try {
                 EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
                 out[0][i] = s.pH();

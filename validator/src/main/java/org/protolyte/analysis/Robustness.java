@@ -225,6 +225,7 @@ public final class Robustness {
         private final Equilibrium.Prepared[] meters;      // per titrant, at its adjustment; null where not dosed again
         private final Equilibrium.Point[] meterWarm;
         private final int[] titrantIndex;                 // per titrant: its index among the ingredients
+        private final double[] atVolume;                  // per titrant: the fraction of volume it is dosed at
         private final double[][] nominal;
 
         Sampler(Analyzer analyzer, Recipe recipe, Nominal dose, Batches batches) {
@@ -242,8 +243,10 @@ public final class Robustness {
             meters = new Equilibrium.Prepared[titrants.size()];
             meterWarm = new Equilibrium.Point[titrants.size()];
             titrantIndex = new int[titrants.size()];
+            atVolume = new double[titrants.size()];
             for (int i = 0; i < titrants.size(); i++) {
                 titrantIndex[i] = recipe.ingredients().indexOf(titrants.get(i));
+                atVolume[i] = titrants.get(i).line().adjustTo().map(Formulation.Adjustment::atVolume).orElse(1.0);
                 if (redosed(i)) {
                     double kelvin = titrants.get(i).line().adjustTo().orElseThrow().kelvin();
                     meters[i] = analyzer.prepare(recipe, s, kelvin, OptionalDouble.empty(), Set.of());
@@ -330,9 +333,8 @@ public final class Robustness {
                 x[index] = 0;
             }
             x[titrantIndex[titrant]] = moles;
-            double atVolume = recipe.titrants().get(titrant).line().adjustTo().orElseThrow().atVolume();
-            Equilibrium.Point p = meters[titrant].point(batches.batch(meters[titrant].components(), atVolume, x).totals(),
-                    meterWarm[titrant]);
+            Equilibrium.Point p = meters[titrant].point(
+                    batches.batch(meters[titrant].components(), atVolume[titrant], x).totals(), meterWarm[titrant]);
             if (meterWarm[titrant] == null) {
                 meterWarm[titrant] = p;
             }

@@ -546,7 +546,7 @@ public final class Equilibrium {
                     molalities(pH);
                     beta = bufferSumOfWork(pH);
                     if (complexes) {
-                        complexOwnTerms();
+                        ownTerms();
                     }
                 }
                 double share = open(j) ? 1 : Math.abs(workTerm[j]) / beta;
@@ -920,31 +920,6 @@ public final class Equilibrium {
             return sum;
         }
 
-        /** With complexes, each component's own term of β/ln10 for the report: the uncoupled formula over its own species. */
-        private void complexOwnTerms() {
-            int nc = components.length;
-            double[] m = work;
-            java.util.Arrays.fill(workTerm, 0);
-            double[] own = new double[nc];
-            double[] meanP = new double[nc];
-            for (int i = 0; i < n; i++) {
-                if (complexParts[i] == null) {
-                    own[comp[i]] += m[i];
-                }
-            }
-            for (int i = 0; i < n; i++) {
-                if (complexParts[i] == null && own[comp[i]] > 0) {
-                    meanP[comp[i]] += protons[i] * m[i] / own[comp[i]];
-                }
-            }
-            for (int i = 0; i < n; i++) {
-                if (complexParts[i] == null) {
-                    double dev = protons[i] - meanP[comp[i]];
-                    workTerm[comp[i]] += m[i] * dev * dev;
-                }
-            }
-        }
-
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */
         private double[] logMolalities(double pH) {
             double[] m = work;
@@ -1042,23 +1017,43 @@ public final class Equilibrium {
             if (complexes) {
                 return complexBufferSum(pH);
             }
+            ownTerms();
+            double sum = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
+            for (double t : workTerm) {
+                sum += t;
+            }
+            return sum;
+        }
+
+        /**
+         * Each component's term of β/ln10 from its own species (complexes aside) in the working molalities: closed,
+         * Σ m_s (p_s − p̄)²; open (fixed species f), Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves. Without
+         * complexes these terms are the buffer capacity; with them, each component's part of it for the report.
+         */
+        private void ownTerms() {
             double[] m = work;
             double[] meanP = workSum;
             java.util.Arrays.fill(meanP, 0);
-            double[] totals = workMax;
-            java.util.Arrays.fill(totals, 0);
+            double[] own = workMax;
+            java.util.Arrays.fill(own, 0);
             for (int i = 0; i < n; i++) {
-                totals[comp[i]] += m[i];
+                if (complexParts[i] == null) {
+                    own[comp[i]] += m[i];
+                }
             }
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                meanP[j] += totals[j] > 0 ? protons[i] * m[i] / totals[j] : 0;
+                if (complexParts[i] == null && own[j] > 0) {
+                    meanP[j] += protons[i] * m[i] / own[j];
+                }
             }
-            // closed: Σ m_s (p_s − p̄)²; open (fixed species f): Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves
             double[] term = workTerm;
             java.util.Arrays.fill(term, 0);
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
+                if (complexParts[i] != null) {
+                    continue;
+                }
                 if (open(j)) {
                     term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
                 } else {
@@ -1066,11 +1061,6 @@ public final class Equilibrium {
                     term[j] += m[i] * d * d;
                 }
             }
-            double sum = Math.exp(Thermo.LN10 * (-pH - log10GammaH)) + kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
-            for (double t : term) {
-                sum += t;
-            }
-            return sum;
         }
 
         /** The fast path's result at the solution (pH, I): β and osmolality from the molalities there. */
@@ -1107,7 +1097,7 @@ public final class Equilibrium {
             double[] m = molalities(pH);
             double beta = Thermo.LN10 * bufferSumOfWork(pH);
             if (complexes) {
-                complexOwnTerms();
+                ownTerms();
             }
             double mH = Math.pow(10, -pH - log10GammaH);
             double mOH = kw * Math.pow(10, pH - log10GammaOH);

@@ -16,8 +16,9 @@ import org.protolyte.document.SchemaCatalog;
 import org.protolyte.substance.LibraryLoader;
 
 /**
- * The affine batch map against the recipe itself, at batches it was not built from: exact up to the rounding of its
- * finite-difference coefficients (relative 1e-10; a non-linear term would show at 1e-4).
+ * The affine batch map against the recipe itself, at batches it was not built from. Every expected value is derived:
+ * it is what {@link Recipe#solution} gives for the same amounts, and the map must match it up to the rounding of its
+ * finite-difference coefficients (relative 1e-10; a non-linear term would show at 1e-4). The amounts are invented.
  */
 class BatchTotalsTest {
 
