@@ -18,6 +18,7 @@ import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.SpeciesAmount;
@@ -368,11 +369,21 @@ public final class Analyzer {
                     buffers(recipe, solution, s, perLitre),
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
                     determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
-                    determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty());
+                    determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty(),
+                    determinate ? saturation(recipe, s) : List.of());
         } catch (IndeterminateException e) {
             return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, Double.NaN, volume, List.of(),
-                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty());
+                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty(), List.of());
         }
+    }
+
+    /** The saturation index of every library solid whose ions the equilibrium holds. */
+    private static List<SolidPhase.Saturation> saturation(Recipe recipe, EquilibriumState s) {
+        List<SolidPhase.Saturation> out = new ArrayList<>();
+        for (SolidPhase phase : recipe.library().phases()) {
+            phase.saturation(s).ifPresent(out::add);
+        }
+        return out;
     }
 
     /** Each system's term of β as the chemistry reports it, and its pKa(T) nearest the pH. */

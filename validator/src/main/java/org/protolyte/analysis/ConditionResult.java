@@ -6,6 +6,7 @@ import java.util.OptionalDouble;
 
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.document.Formulation;
 
 /**
@@ -21,14 +22,17 @@ import org.protolyte.document.Formulation;
  * @param co2ForTarget           for a CO2 condition at the target temperature: the CO2 partial pressure (Pa)
  *                               at which the pH would be the target's midpoint
  * @param uncertainty            from the constants' uncertainties (see {@link Uncertainty})
+ * @param saturation             the saturation index of every library solid whose ions are present
  */
 public record ConditionResult(Formulation.Condition condition, Optional<EquilibriumState> state,
                               List<Caveat> caveats, double bufferCapacityPerLitre, double osmolarity,
                               double volumeLitres,
                               List<BufferContribution> buffers, OptionalDouble pHInAir, Optional<Loads> loads,
-                              OptionalDouble co2ForTarget, Optional<Uncertainty> uncertainty) {
+                              OptionalDouble co2ForTarget, Optional<Uncertainty> uncertainty,
+                              List<SolidPhase.Saturation> saturation) {
 
     public ConditionResult {
+        saturation = List.copyOf(saturation);
         caveats = List.copyOf(caveats);
         buffers = List.copyOf(buffers);
     }
@@ -36,7 +40,7 @@ public record ConditionResult(Formulation.Condition condition, Optional<Equilibr
     public ConditionResult withUncertainty(Uncertainty u) {
         return new ConditionResult(condition, state, caveats, bufferCapacityPerLitre, osmolarity, volumeLitres, buffers,
                 pHInAir,
-                loads, co2ForTarget, Optional.of(u));
+                loads, co2ForTarget, Optional.of(u), saturation);
     }
 
     /** The system that carries most of the buffer capacity, if any system buffers at all. */

@@ -47,6 +47,12 @@ public final class Equilibrium {
      *  which a component's constants outside their range do not void the result. */
     private static final double EXTRAPOLATION_ERROR = 0.1;
     private static final double MINOR_PH_EFFECT = 0.005;
+    /**
+     * How far (K) a complex's constant is carried beyond its data with a warning rather than no result: an ion pair's
+     * ΔH° of a few kJ/mol moves its log K by about 0.1 over 20 K (van 't Hoff, derived), the size of its own uncertainty,
+     * and the complexes correct an acid–base speciation whose own constants are valid there.
+     */
+    private static final double COMPLEX_EXTRAPOLATION = 25;
 
     /** Standard uncertainty of pKw from IAPWS R11-07 near ambient conditions, about 0.01 (from memory). */
     public static final double PKW_UNCERTAINTY = 0.01;
@@ -592,6 +598,11 @@ public final class Equilibrium {
                 if (describeMinor) {
                     minor.add(String.format(Locale.ROOT, "%s (%s, pH effect %.1g)", sp[c].name(), v, effect));
                 }
+            } else if (kelvin > v.minKelvin() - COMPLEX_EXTRAPOLATION && kelvin < v.maxKelvin() + COMPLEX_EXTRAPOLATION) {
+                out.add(Caveat.warning("temperature-out-of-range-complex", String.format(Locale.ROOT,
+                        "%.1f °C is outside %s, the data behind the constant of the complex %s; it is extrapolated by "
+                                + "van 't Hoff, and a %.1f error in its log K would move the pH by %.3f", t, v,
+                        sp[c].name(), EXTRAPOLATION_ERROR, effect)));
             } else {
                 out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
                         "%.1f °C is outside %s, where the constant of the complex %s is valid, and it moves the pH by "
@@ -1101,17 +1112,20 @@ public final class Equilibrium {
             }
             double mH = Math.pow(10, -pH - log10GammaH);
             double mOH = kw * Math.pow(10, pH - log10GammaOH);
-            double[] sum = new double[components.length];
+            Map<Component, Double> sum = new java.util.HashMap<>();      // each component in every species it is part of
             for (int i = 0; i < n; i++) {
-                sum[comp[i]] += m[i];
+                for (Map.Entry<Component, Integer> e : sp[i].components().entrySet()) {
+                    sum.merge(e.getKey(), e.getValue() * m[i], Double::sum);
+                }
             }
             double particles = 0;
             List<SpeciesAmount> out = new ArrayList<>();
             for (int i = 0; i < n; i++) {
-                int j = comp[i];
+                Component home = components[comp[i]];
+                double t = sum.getOrDefault(home, 0.0);
                 particles += m[i];
-                out.add(new SpeciesAmount(sp[i], components[j], m[i], Math.pow(10, log10Gamma[i]),
-                        sum[j] > 0 ? m[i] / sum[j] : 0));
+                out.add(new SpeciesAmount(sp[i], home, m[i], Math.pow(10, log10Gamma[i]),
+                        t > 0 ? sp[i].components().get(home) * m[i] / t : 0));
             }
             Map<Component, Double> byComponent = new LinkedHashMap<>();
             java.util.Set<Component> openSet = new java.util.HashSet<>();

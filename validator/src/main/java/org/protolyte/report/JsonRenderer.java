@@ -6,6 +6,7 @@ import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
 import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.document.Formulation;
 import org.protolyte.document.Location;
@@ -238,6 +239,25 @@ public final class JsonRenderer {
                 x.put("charge", sp.species().charge());
                 x.put("molality", Numbers.significant(sp.molality(), 4));
                 x.put("fraction", Numbers.significant(sp.fractionOfComponent(), 4));
+            }
+            ArrayNode complexes = o.putArray("complexes");
+            for (SpeciesAmount sp : s.species()) {
+                if (Complexes.isComplex(sp.species())) {
+                    ObjectNode x = complexes.addObject();
+                    x.put("name", sp.species().name());
+                    x.put("charge", sp.species().charge());
+                    x.put("molality", Numbers.significant(sp.molality(), 4));
+                    ObjectNode bound = x.putObject("share");
+                    Complexes.shares(s, sp).forEach((k, v) -> bound.put(k.name(), Numbers.significant(v, 4)));
+                }
+            }
+            ArrayNode solids = o.putArray("solids");
+            for (SolidPhase.Saturation x : c.saturation()) {
+                solids.addObject().put("phase", x.phase().name()).put("formula", x.phase().formula())
+                        .put("saturationIndex", Numbers.decimals(x.index(), 3))
+                        .put("log10IonActivityProduct", Numbers.decimals(x.log10Iap(), 3))
+                        .put("log10Ksp", Numbers.decimals(x.log10Ksp(), 3))
+                        .put("kspExtrapolated", !x.inRange());
             }
         } else {
             o.putNull("pH");

@@ -9,7 +9,9 @@ import java.util.Map;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
+import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.document.Formulation;
 import org.protolyte.rules.Finding;
@@ -121,11 +123,13 @@ public final class TextRenderer {
         }
         Systems systems = new Systems(a.recipe().library());
         conditionTable(b, a.conditions(), systems);
+        solids(b, a.conditions());
         a.working().ifPresent(w -> {
             b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s (pH change is from ionic "
                     + "strength and dilution):%n", Numbers.significant(w.dilution().factor(), 4).toPlainString(),
                     w.dilution().diluent()));
             conditionTable(b, w.conditions(), systems);
+            solids(b, w.conditions());
         });
         for (var d : a.drifts()) {
             String cause = d.co2Change().map(x -> ", mostly the change of " + x).orElseGet(() -> d.system()
@@ -181,7 +185,38 @@ public final class TextRenderer {
         }
         List<String> parts = new ArrayList<>();
         bySystem.forEach((k, v) -> parts.add(k + ": " + String.join(", ", v)));
+        Map<Component, Double> totals = Complexes.totals(s);
+        for (SpeciesAmount sp : s.species()) {      // a metal or polyol that complexes bind: its free share
+            Component c = sp.component();
+            boolean bound = s.species().stream().anyMatch(x -> Complexes.isComplex(x.species())
+                    && x.species().components().containsKey(c));
+            if (!systems.isSystem(c) && bound && sp.species().components().size() == 1) {
+                parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", c.name(), 100 * sp.molality() / totals.get(c)));
+            }
+        }
         return String.join("; ", parts);
+    }
+
+    /** The saturation index of each solid at each condition, where any solid's ions are present. */
+    private static void solids(StringBuilder b, List<ConditionResult> conditions) {
+        Map<String, List<String>> rows = new LinkedHashMap<>();
+        for (ConditionResult c : conditions) {
+            for (SolidPhase.Saturation x : c.saturation()) {
+                rows.computeIfAbsent(x.phase().name() + " (" + x.phase().formula() + ")", k -> new ArrayList<>())
+                        .add(String.format(Locale.ROOT, "%s %+.2f%s", c.condition().name(), x.index(),
+                                x.inRange() ? "" : "†"));
+            }
+        }
+        if (rows.isEmpty()) {
+            return;
+        }
+        b.append("  saturation index (> 0: the solid can form):").append(NL);
+        int width = rows.keySet().stream().mapToInt(String::length).max().orElse(0);
+        rows.forEach((k, v) -> b.append("    ").append(k).append(" ".repeat(width + 2 - k.length()))
+                .append(String.join("   ", v)).append(NL));
+        if (conditions.stream().flatMap(c -> c.saturation().stream()).anyMatch(x -> !x.inRange())) {
+            b.append("    † Ksp extrapolated beyond the temperatures of its data").append(NL);
+        }
     }
 
     /** One row per condition: temperature, pH with its uncertainty, β, I, osmolality and the main forms. */

@@ -42,6 +42,15 @@ public record Rule(String id, String check, ObjectNode parameters, Severity seve
         return n != null && n.isString() ? Optional.of(n.asString()) : Optional.empty();
     }
 
+    /** A list of strings, where the parameter is one. */
+    public Optional<List<String>> texts(String name) {
+        JsonNode n = parameters.get(name);
+        if (n == null || !n.isArray()) {
+            return Optional.empty();
+        }
+        return Optional.of(n.valueStream().map(JsonNode::asString).toList());
+    }
+
     /** A finding of this rule at a place in the document. */
     public Finding finding(Formulation f, String pointer, String message) {
         return new Finding(id, severity, message, Optional.of(pointer), f.document().locate(pointer), Optional.of(this));

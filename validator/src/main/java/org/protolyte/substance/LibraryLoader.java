@@ -17,6 +17,8 @@ import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.FormationConstant;
+import org.protolyte.chemistry.SaltSolubility;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.TemperatureRange;
 import org.protolyte.document.Digests;
@@ -47,6 +49,9 @@ public final class LibraryLoader {
     private final Map<String, AcidBaseSystem> systems = new LinkedHashMap<>();
     private final Map<String, Species> complexes = new LinkedHashMap<>();
     private final Map<String, String> complexSources = new LinkedHashMap<>();
+    private final Map<String, SolidPhase> phases = new LinkedHashMap<>();
+    private final Map<String, String> phaseSources = new LinkedHashMap<>();
+    private final Map<String, SaltSolubility> solubilities = new LinkedHashMap<>();
     private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
     private final Map<String, Component> solutes = new LinkedHashMap<>();
@@ -91,7 +96,7 @@ public final class LibraryLoader {
 
     public SubstanceLibrary build() {
         return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files,
-                complexes, complexSources);
+                complexes, complexSources, phases, phaseSources, solubilities);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -116,37 +121,137 @@ public final class LibraryLoader {
             each(root, "substances", this::substance);
             each(root, "ambiguousNames", this::ambiguousName);
             each(root, "complexes", this::complex);
+            each(root, "phases", this::phase);
+            each(root, "solubilities", this::solubility);
+        }
+
+        /** A salt's solubility table: its ions (as in a phase), the library forms that are the salt, the points. */
+        private void solubility(JsonNode n, String pointer) {
+            Map<String, Integer> parts = new LinkedHashMap<>();
+            for (var e : n.get("ions").properties()) {
+                if (!knownSpecies(e.getKey())) {
+                    problems.add(doc.problem(pointer + "/ions/" + e.getKey(), "'" + e.getKey() + "' is not an ion or a "
+                            + "form of an acid–base system in the library"));
+                    return;
+                }
+                parts.put(e.getKey(), e.getValue().asInt());
+            }
+            List<String> forms = new ArrayList<>();
+            for (int i = 0; i < n.get("forms").size(); i++) {
+                String form = n.get("forms").get(i).asString();
+                if (!substances.containsKey(form)) {
+                    problems.add(doc.problem(pointer + "/forms/" + i, "'" + form + "' is not a substance in the library"));
+                    return;
+                }
+                forms.add(form);
+            }
+            JsonNode points = n.get("points");
+            double[] t = new double[points.size()];
+            double[] g = new double[points.size()];
+            for (int i = 0; i < t.length; i++) {
+                t[i] = points.get(i).get(0).asDouble();
+                g[i] = points.get(i).get(1).asDouble();
+            }
+            try {
+                named(solubilities, n, pointer, new SaltSolubility(n.get("name").asString(), n.get("formula").asString(),
+                        n.get("molarMass").asDouble(), parts, forms, t, g, n.get("source").asString()), "solubility");
+            } catch (IllegalArgumentException e) {
+                problems.add(doc.problem(pointer + "/points", e.getMessage()));
+            }
+        }
+
+        private boolean knownSpecies(String species) {
+            return ions.containsKey(species) || complexes.containsKey(species)
+                    || systems.values().stream().flatMap(sys -> sys.species().stream())
+                            .anyMatch(x -> x.name().equals(species));
+        }
+
+        /** A solid phase: the free species it dissolves into (ion, acid–base form, complex or H+) and its Ksp(T). */
+        private void phase(JsonNode n, String pointer) {
+            Map<String, Double> parts = new LinkedHashMap<>();
+            for (var e : n.get("ions").properties()) {
+                String species = e.getKey();
+                if (!species.equals(SolidPhase.HYDROGEN) && !knownSpecies(species)) {
+                    problems.add(doc.problem(pointer + "/ions/" + species, "'" + species + "' is not H+, an ion, a form "
+                            + "of an acid–base system or a complex in the library"));
+                    return;
+                }
+                parts.put(species, e.getValue().asDouble());
+            }
+            try {
+                FormationConstant ksp = constant(n, "log10Ksp", "log10KspEquation");
+                if (ksp == null) {
+                    problems.add(doc.problem(pointer + "/log10KspEquation", String.format(Locale.ROOT,
+                            "the equation's log10 Ksp at 25 °C differs from log10Ksp by more than 0.02")));
+                    return;
+                }
+                SolidPhase phase = new SolidPhase(n.get("name").asString(), n.get("formula").asString(), parts, ksp);
+                named(phases, n, pointer, phase, "solid phase");
+                phaseSources.put(phase.name(), n.get("source").asString());
+            } catch (IllegalArgumentException e) {
+                problems.add(doc.problem(pointer, e.getMessage()));
+            }
         }
 
         /**
-         * A complex or ion pair: its components by name (an ion, a solute, or an acid–base system's least protonated
-         * form), the protons it carries beyond them, and its cumulative formation constant from those.
+         * A constant at 25 °C with ΔH° (kJ/mol) and ΔCp°, or by the source's equation where {@code equationField} is
+         * given; null where the equation disagrees with the 25 °C value.
+         */
+        private FormationConstant constant(JsonNode n, String logField, String equationField) {
+            TemperatureRange range = TemperatureRange.celsius(n.get("validFrom").asDouble(), n.get("validTo").asDouble());
+            double log = n.get(logField).asDouble();
+            double u = n.get("uncertainty").asDouble();
+            if (!n.has(equationField)) {
+                return new FormationConstant(log, n.path("deltaH").asDouble(0) * 1000, n.path("deltaCp").asDouble(0), u,
+                        range);
+            }
+            double[] a = new double[5];
+            for (int i = 0; i < 5; i++) {
+                a[i] = n.get(equationField).get(i).asDouble();
+            }
+            FormationConstant k = FormationConstant.ofEquation(a, u, range);
+            return Math.abs(k.log10K25() - log) > 0.02 ? null : k;
+        }
+
+        /**
+         * A complex or ion pair: its components by name (an ion, a solute, or any form of an acid–base system), the
+         * protons it carries beyond them, and its formation constant from those. A form other than the least protonated
+         * brings its protons and its own β, so a constant is entered as published (Ca+2 + HPO4-2 = CaHPO4) and solved
+         * from the system's basis.
          */
         private void complex(JsonNode n, String pointer) {
             Map<Component, Integer> parts = new LinkedHashMap<>();
+            int protons = n.path("protons").asInt(0);
+            FormationConstant k = constant(n, "log10K", "log10KEquation");
+            if (k == null) {
+                problems.add(doc.problem(pointer + "/log10KEquation",
+                        "the equation's log10 K at 25 °C differs from log10K by more than 0.02"));
+                return;
+            }
             for (var e : n.get("components").properties()) {
+                int count = e.getValue().asInt();
                 Component c = ions.get(e.getKey());
                 if (c == null) {
                     c = solutes.get(e.getKey());
                 }
-                if (c == null) {
-                    c = systems.values().stream().map(AcidBaseSystem::basis).filter(b -> b.name().equals(e.getKey()))
-                            .findFirst().orElse(null);
+                if (c == null) {        // a form of an acid–base system: its basis, with the form's protons and β
+                    Species form = systems.values().stream().flatMap(sys -> sys.species().stream())
+                            .filter(x -> x.name().equals(e.getKey())).findFirst().orElse(null);
+                    if (form != null) {
+                        c = form.components().keySet().iterator().next();
+                        protons += count * form.protons();
+                        k = k.plus(form.formation().times(count));
+                    }
                 }
                 if (c == null) {
                     problems.add(doc.problem(pointer + "/components/" + e.getKey(), "'" + e.getKey() + "' is not an "
-                            + "ion, a solute or the least protonated form of an acid–base system in the library"));
+                            + "ion, a solute or a form of an acid–base system in the library"));
                     return;
                 }
-                parts.put(c, e.getValue().asInt());
+                parts.merge(c, count, Integer::sum);
             }
-            double from = n.get("validFrom").asDouble();
-            double to = n.get("validTo").asDouble();
             try {
-                Species s = new Species(n.get("name").asString(), n.get("charge").asInt(), parts,
-                        n.path("protons").asInt(0), new FormationConstant(n.get("log10K").asDouble(),
-                        n.path("deltaH").asDouble(0) * 1000, n.path("deltaCp").asDouble(0),
-                        n.get("uncertainty").asDouble(), TemperatureRange.celsius(from, to)));
+                Species s = new Species(n.get("name").asString(), n.get("charge").asInt(), parts, protons, k);
                 named(complexes, n, pointer, s, "complex");
                 complexSources.put(s.name(), n.get("source").asString());
             } catch (IllegalArgumentException e) {

@@ -13,6 +13,8 @@ import java.util.Set;
 
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.SaltSolubility;
+import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.Species;
 import org.protolyte.document.Suggestions;
 
@@ -33,12 +35,20 @@ public final class SubstanceLibrary {
     private final Map<String, String> files;              // library file -> SHA-256 of its bytes
     private final List<Species> complexes;                // species of several components, in library order
     private final Map<String, String> complexSources;
+    private final List<SolidPhase> phases;                // solids that can form, in library order
+    private final Map<String, String> phaseSources;
+    private final List<SaltSolubility> solubilities;
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
                      Map<String, Substance> substances, Map<String, Substance> index,
                      Map<String, List<String>> ambiguous, Map<String, String> files,
-                     Map<String, Species> complexes, Map<String, String> complexSources) {
+                     Map<String, Species> complexes, Map<String, String> complexSources,
+                     Map<String, SolidPhase> phases, Map<String, String> phaseSources,
+                     Map<String, SaltSolubility> solubilities) {
+        this.solubilities = List.copyOf(solubilities.values());
+        this.phases = List.copyOf(phases.values());
+        this.phaseSources = Map.copyOf(phaseSources);
         this.complexes = List.copyOf(complexes.values());
         this.complexSources = Map.copyOf(complexSources);
         this.systems = Map.copyOf(systems);
@@ -124,6 +134,20 @@ public final class SubstanceLibrary {
 
     public String complexSource(String name) {
         return complexSources.getOrDefault(name, "");
+    }
+
+    /** Solid phases whose saturation index a check reports. */
+    public List<SolidPhase> phases() {
+        return phases;
+    }
+
+    /** Salts whose published solubility against temperature a check compares with the recipe. */
+    public List<SaltSolubility> solubilities() {
+        return solubilities;
+    }
+
+    public String phaseSource(String name) {
+        return phaseSources.getOrDefault(name, "");
     }
 
     /** The source of each dissociation step of a system, in step order. */
