@@ -398,13 +398,58 @@ public final class Analyzer {
                 continue;
             }
             double beta = s.componentBufferCapacity().getOrDefault(basis, 0.0) * perLitre;
-            double nearest = system.steps().stream().mapToDouble(st -> st.pKa(s.kelvin()))
-                    .boxed().min(java.util.Comparator.comparingDouble(pk -> Math.abs(pk - s.pH()))).orElseThrow();
+            double[] shift = complexShift(system, s);
+            double nearest = Double.NaN;
+            for (int k = 0; k < system.steps().size(); k++) {
+                double pKa = system.steps().get(k).pKa(s.kelvin()) + shift[k];
+                if (Double.isNaN(nearest) || Math.abs(pKa - s.pH()) < Math.abs(nearest - s.pH())) {
+                    nearest = pKa;
+                }
+            }
+            boolean apparent = java.util.Arrays.stream(shift).anyMatch(x -> Math.abs(x) >= 0.05);
             out.add(new BufferContribution(system.name(), beta, beta / (s.bufferCapacity() * perLitre), nearest,
-                    total * solution.waterKg(), s.openComponents().contains(basis)));
+                    total * solution.waterKg(), s.openComponents().contains(basis), apparent));
         }
         out.sort(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre).reversed());
         return out;
+    }
+
+    /**
+     * How far the system's complexes move each step's pKa at this equilibrium (the conditional pKa less the
+     * thermodynamic one): step k exchanges a proton between the forms with n−k and n−k−1 protons, and a complex shown
+     * under the system counts with the forms of its proton number, so pKa'_k = pKa_k + log10(M_acid/m_acid) −
+     * log10(M_base/m_base), M the total of a proton number, m its free form. Zero where no complex holds the system.
+     */
+    private static double[] complexShift(AcidBaseSystem system, EquilibriumState s) {
+        int n = system.steps().size();
+        double[] free = new double[n + 1];          // by proton number
+        double[] all = new double[n + 1];
+        boolean any = false;
+        for (SpeciesAmount sp : s.species()) {
+            if (!sp.component().equals(system.basis())) {
+                continue;
+            }
+            int p = sp.species().protons();
+            if (p < 0 || p > n) {
+                continue;
+            }
+            boolean complex = sp.species().components().size() > 1 || sp.species().components().get(system.basis()) != 1;
+            all[p] += sp.molality() * sp.species().components().get(system.basis());
+            if (complex) {
+                any = true;
+            } else {
+                free[p] += sp.molality();
+            }
+        }
+        double[] shift = new double[n];
+        for (int k = 0; any && k < n; k++) {
+            int acid = n - k;
+            int base = n - k - 1;
+            if (free[acid] > 0 && free[base] > 0) {
+                shift[k] = Math.log10(all[acid] / free[acid]) - Math.log10(all[base] / free[base]);
+            }
+        }
+        return shift;
     }
 
     /** A closed condition's pH once equilibrated with room air (CO2 at its fraction of standard pressure). */

@@ -6,6 +6,7 @@ import java.util.List;
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.chemistry.Species;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
 
@@ -20,7 +21,7 @@ final class ConstantsPropagation {
 
     /**
      * Linear propagation of the constants' standard uncertainties: each pKa used, each ΔH° that has an uncertainty,
-     * and pKw moved by its uncertainty, the q.s. and every condition solved again, the changes added in quadrature
+     * each complex's log K, and pKw moved by its uncertainty, the q.s. and every condition solved again, the changes added in quadrature
      * with the covariance of a step's pKa and ΔH° (u² = Σ c_i² + 2ρ c_pKa c_ΔH; they come from one fit).
      */
     List<ConditionResult> apply(Recipe recipe, Solution solution, List<ConditionResult> results) {
@@ -46,6 +47,13 @@ final class ConstantsPropagation {
                             equilibrium.withDeltaHShift(sys, k, step.deltaHUncertainty()), paired ? pair : -1,
                             step.correlation()));
                 }
+            }
+        }
+        for (Species complex : solution.species()) {       // complexes, ion pairs and esters the recipe forms
+            boolean several = complex.components().size() > 1 || complex.components().values().iterator().next() != 1;
+            if (several && complex.formation().uncertainty() > 0) {
+                perturbations.add(new Perturbation(complex.name() + " log K", complex.formation().uncertainty(),
+                        equilibrium.withLogKShift(complex, complex.formation().uncertainty()), -1, 0));
             }
         }
         perturbations.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,

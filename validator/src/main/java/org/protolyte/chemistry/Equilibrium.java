@@ -118,6 +118,13 @@ public final class Equilibrium {
         return new Equilibrium(activity, logs, enthalpies, pKwShift);
     }
 
+    /** The same equilibrium with one complex's log K raised by {@code delta}: for its uncertainty. */
+    public Equilibrium withLogKShift(Species complex, double delta) {
+        Map<Species, Double> logs = new java.util.HashMap<>(logBetaShifts);
+        logs.merge(complex, delta, Double::sum);
+        return new Equilibrium(activity, logs, deltaHShifts, pKwShift);
+    }
+
     /** The same equilibrium with pKw raised by {@code delta}. */
     public Equilibrium withPKwShift(double delta) {
         return new Equilibrium(activity, logBetaShifts, deltaHShifts, pKwShift + delta);
@@ -1037,9 +1044,11 @@ public final class Equilibrium {
         }
 
         /**
-         * Each component's term of β/ln10 from its own species (complexes aside) in the working molalities: closed,
-         * Σ m_s (p_s − p̄)²; open (fixed species f), Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves. Without
-         * complexes these terms are the buffer capacity; with them, each component's part of it for the report.
+         * Each component's term of β/ln10 from its own species in the working molalities, a complex counted with the
+         * component it is shown under (its ligand, as many times as it holds it): closed, Σ m_s (p_s − p̄)²; open (fixed
+         * species f), Σ z_s (p_s − p_f) m_s, as CO2 enters or leaves. Without complexes these terms are the buffer
+         * capacity; with them, each component's part of it for the report (a borate–polyol ester's proton exchange is
+         * borate's).
          */
         private void ownTerms() {
             double[] m = work;
@@ -1048,30 +1057,32 @@ public final class Equilibrium {
             double[] own = workMax;
             java.util.Arrays.fill(own, 0);
             for (int i = 0; i < n; i++) {
-                if (complexParts[i] == null) {
-                    own[comp[i]] += m[i];
-                }
+                own[comp[i]] += homeCount(i) * m[i];
             }
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                if (complexParts[i] == null && own[j] > 0) {
-                    meanP[j] += protons[i] * m[i] / own[j];
+                if (own[j] > 0) {
+                    meanP[j] += protons[i] * homeCount(i) * m[i] / own[j];
                 }
             }
             double[] term = workTerm;
             java.util.Arrays.fill(term, 0);
             for (int i = 0; i < n; i++) {
                 int j = comp[i];
-                if (complexParts[i] != null) {
-                    continue;
-                }
                 if (open(j)) {
-                    term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                    if (complexParts[i] == null) {
+                        term[j] += charge[i] * (protons[i] - protons[fixedIndex[j]]) * m[i];
+                    }
                 } else {
                     double d = protons[i] - meanP[j];
-                    term[j] += m[i] * d * d;
+                    term[j] += homeCount(i) * m[i] * d * d;
                 }
             }
+        }
+
+        /** How many of the component it is shown under a species holds: 1 for a free form. */
+        private int homeCount(int i) {
+            return complexParts[i] == null ? 1 : complexCounts[i][0];
         }
 
         /** The fast path's result at the solution (pH, I): β and osmolality from the molalities there. */
@@ -1129,8 +1140,17 @@ public final class Equilibrium {
             }
             Map<Component, Double> byComponent = new LinkedHashMap<>();
             java.util.Set<Component> openSet = new java.util.HashSet<>();
+            double scale = 1;       // with complexes the own terms are shares, not a partition: scaled to β less water's
+            if (complexes) {
+                double own = 0;
+                for (double x : workTerm) {
+                    own += x;
+                }
+                double rest = beta / Thermo.LN10 - mH - mOH;
+                scale = own > rest && own > 0 ? Math.max(0, rest) / own : 1;
+            }
             for (int j = 0; j < components.length; j++) {
-                byComponent.put(components[j], Thermo.LN10 * workTerm[j]);
+                byComponent.put(components[j], Thermo.LN10 * workTerm[j] * scale);
                 if (open(j)) {
                     openSet.add(components[j]);
                 }

@@ -44,8 +44,9 @@ public final class PkaNearTarget implements CheckKind {
             return List.of();
         }
         return List.of(rule.finding(f, f.pHTarget().get().pointer(), String.format(Locale.ROOT,
-                "the main buffering system, %s (%.0f %% of β), has pKa %.2f at %.0f °C, %.2f from the target pH %.2f "
-                        + "(limit %.2f)", b.system(), b.share() * 100, b.nearestPKa(), Conditions.celsius(at.get()),
+                "the main buffering system, %s (%.0f %% of β), has %spKa %.2f at %.0f °C, %.2f from the target pH %.2f "
+                        + "(limit %.2f)", b.system(), b.share() * 100,
+                b.apparent() ? "an apparent (complexes included) " : "", b.nearestPKa(), Conditions.celsius(at.get()),
                 distance, target, max)));
     }
 }
