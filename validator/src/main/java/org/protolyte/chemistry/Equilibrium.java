@@ -196,7 +196,7 @@ public final class Equilibrium {
             double[] r = iterate(fixedIonicStrength, Double.NaN, Double.NaN);
             p.setActivityCoefficients(r[1]);
             List<Caveat> caveats = new ArrayList<>(p.temperatureCaveats(r[0], true));
-            caveats.addAll(ionicStrengthCaveats(r[1]));
+            caveats.addAll(ionicStrengthCaveats(r[1], p.a, p.kelvin));
             return p.state(r[0], r[1], caveats);
         }
 
@@ -250,7 +250,7 @@ public final class Equilibrium {
                     : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
             p.setActivityCoefficients(r[1]);
             List<Caveat> caveats = p.temperatureCaveats(r[0], false);
-            caveats.addAll(ionicStrengthCaveats(r[1]));
+            caveats.addAll(ionicStrengthCaveats(r[1], p.a, p.kelvin));
             for (Caveat c : caveats) {
                 if (c.severity() == Caveat.Severity.INDETERMINATE) {
                     throw new IndeterminateException(c);
@@ -271,13 +271,19 @@ public final class Equilibrium {
                 p.setActivityCoefficients(ionicStrength);
                 double f = p.chargeBalance(pH);
                 double slope = -Thermo.LN10 * p.bufferSumOfWork(pH);
-                double nextI = p.ionicStrengthOfWork(pH);
                 double nextPH = pH - f / slope;
+                // I where the pH is going, not where it was: without this the pH–I coupling converges only linearly
+                double nextI = p.ionicStrengthOfWork(pH) + p.ionicStrengthSlopeOfWork(pH) * (nextPH - pH);
                 if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
                     return null;
                 }
-                boolean settled = Math.abs(nextPH - pH) < 1e-12
-                        && Math.abs(nextI - ionicStrength) <= 1e-13 + 1e-10 * ionicStrength;
+                if (p.complexes) {
+                    p.predictBases(nextPH - pH);
+                }
+                // the last step's error is a few per cent of the step before (the I coupling converges linearly), so a
+                // step of 1e-8 leaves under 1e-9: enough for a study's q.s. (met to 1e-7) and its spread (1e-3 and up)
+                boolean settled = Math.abs(nextPH - pH) < 1e-8
+                        && Math.abs(nextI - ionicStrength) <= 1e-13 + 1e-7 * ionicStrength;
                 pH = nextPH;
                 ionicStrength = nextI;
                 if (settled) {
@@ -317,17 +323,29 @@ public final class Equilibrium {
         }
     }
 
-    private List<Caveat> ionicStrengthCaveats(double i) {
+    /**
+     * Above the warning limit the pH keeps the Davies equation: the buffer ions have no Pitzer parameters here. The
+     * error to expect is derived from the two models where both exist: Δ = |log10 γ±(Davies) − log10 γ±(Pitzer, NaCl)|
+     * at this ionic strength, taken as the error per unit z² of a single-ion log γ; a step whose forms differ by Δz² in
+     * squared charge (log aH = log Ka + log(m_acid/m_base) + Δz²·f, Δz² = 3 for H2PO4-/HPO4-2) is then off by about
+     * Δz²·Δ in pH.
+     */
+    private List<Caveat> ionicStrengthCaveats(double i, double debyeHuckelA, double kelvin) {
         List<Caveat> out = new ArrayList<>();
         if (i > activity.indeterminateAbove()) {
             out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
                     "ionic strength %.3f mol/kg is above %.1f mol/kg, where the %s equation cannot be trusted",
                     i, activity.indeterminateAbove(), activity.name())));
         } else if (i > activity.warnAbove()) {
+            double t = Pitzer.VALIDITY.contains(kelvin) ? kelvin : Thermo.T_REF;
+            double delta = Math.abs(activity.log10Gamma(1, i, debyeHuckelA)
+                    - Math.log10(Pitzer.meanActivityCoefficient("Na+", i, t)));
             out.add(Caveat.warning("ionic-strength-high", String.format(Locale.ROOT,
-                    "ionic strength %.3f mol/kg is above %.1f mol/kg: the %s equation loses accuracy here, "
-                            + "fastest where ions of charge 2 or more carry the buffering",
-                    i, activity.warnAbove(), activity.name())));
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg: the buffer ions have no Pitzer parameters here, so "
+                            + "the pH keeps the %s equation; at this ionic strength it differs from Pitzer by %.3f in "
+                            + "log γ± of sodium chloride, so expect an error of about %.2f pH where a step between "
+                            + "charges −1 and −2 carries the buffering (H2PO4-/HPO4-2), more for higher charges",
+                    i, activity.warnAbove(), activity.name(), delta, 3 * delta)));
         }
         return out;
     }
@@ -367,9 +385,15 @@ public final class Equilibrium {
         final boolean complexes;
         final double[] freeBasis;          // per component, mol/kg: the free basis species (complexes only; warm start)
         final double[] log10GammaComponent; // per component: log10 γ of its free basis at the current I
-        final double[] complexEffect;
+        final double[] complexEffect;       // per complex outside its range: |ΔpH| per 0.1 in log K, once judged
         final boolean[] coupledComponent;  // in at least one complex
-        final int[] coupled;               // sized to the number of coupled components      // per complex outside its range: |ΔpH| per 0.1 in log K, once judged
+        final int[] coupled;               // sized to the number of coupled components
+        final double[] gammaComponent;     // γ of each component's free basis at the current I (powered path)
+        final double[] complexWeight;      // complexes, powered: β/γ_s·Π γ_j^ν at the current I, so m = weight·aH^p·Π b^ν
+        final boolean powered;             // the same bounds as the linear path: products of powers are safe to try
+        final double[] basisSlope;         // d log10 b_j/dpH from the last buffer capacity: predicts b at the next pH
+        final double[] innerResidual;      // the coupled mass balances' Newton: residual and Jacobian, reused
+        final double[][] innerJacobian;
         final double[] total;
         final double kw;
         final double a;
@@ -464,6 +488,9 @@ public final class Equilibrium {
             }
             linear = ok && !anyComplex;
             complexes = anyComplex;
+            powered = ok && anyComplex;
+            complexWeight = new double[n];
+            gammaComponent = new double[components.length];
             freeBasis = new double[components.length];
             coupledComponent = new boolean[components.length];
             for (int i = 0; i < n; i++) {
@@ -478,6 +505,9 @@ public final class Equilibrium {
                 count += x ? 1 : 0;
             }
             coupled = new int[count];
+            innerResidual = new double[count];
+            basisSlope = new double[components.length];
+            innerJacobian = new double[count][count];
             complexEffect = new double[n];
             java.util.Arrays.fill(complexEffect, Double.NaN);
             log10GammaComponent = new double[components.length];
@@ -588,6 +618,10 @@ public final class Equilibrium {
          */
         private void complexOutOfRange(int c, double pH, TemperatureRange v, double t, boolean describeMinor,
                                        List<String> minor, List<Caveat> out) {
+            boolean near = kelvin > v.minKelvin() - COMPLEX_EXTRAPOLATION && kelvin < v.maxKelvin() + COMPLEX_EXTRAPOLATION;
+            if (near && !describeMinor) {
+                return;             // a warning at most, and the fast path reports none: the effect is not needed
+            }
             if (Double.isNaN(complexEffect[c])) {
                 double saved = log10Beta[c];
                 log10Beta[c] = saved + EXTRAPOLATION_ERROR;
@@ -605,7 +639,7 @@ public final class Equilibrium {
                 if (describeMinor) {
                     minor.add(String.format(Locale.ROOT, "%s (%s, pH effect %.1g)", sp[c].name(), v, effect));
                 }
-            } else if (kelvin > v.minKelvin() - COMPLEX_EXTRAPOLATION && kelvin < v.maxKelvin() + COMPLEX_EXTRAPOLATION) {
+            } else if (near) {
                 out.add(Caveat.warning("temperature-out-of-range-complex", String.format(Locale.ROOT,
                         "%.1f °C is outside %s, the data behind the constant of the complex %s; it is extrapolated by "
                                 + "van 't Hoff, and a %.1f error in its log K would move the pH by %.3f", t, v,
@@ -644,6 +678,37 @@ public final class Equilibrium {
             for (int j = 0; j < components.length; j++) {
                 log10GammaComponent[j] = log10Gamma(components[j].charge(), ionicStrength);
             }
+            if (powered) {              // γ by charge: a handful of powers of ten, then products
+                double[] g = gammaComponent;
+                for (int j = 0; j < components.length; j++) {
+                    g[j] = gammaOfCharge(components[j].charge(), ionicStrength);
+                }
+                for (int i = 0; i < n; i++) {
+                    double x = beta[i] / gammaOfCharge(charge[i], ionicStrength);
+                    if (complexParts[i] == null) {
+                        x *= g[comp[i]];
+                    } else {
+                        for (int q = 0; q < complexParts[i].length; q++) {
+                            for (int r = 0; r < complexCounts[i][q]; r++) {
+                                x *= g[complexParts[i][q]];
+                            }
+                        }
+                    }
+                    complexWeight[i] = x;
+                }
+            }
+        }
+
+        /** γ of a charge at the current I, each charge's power of ten taken once per I. */
+        private double gammaOfCharge(int z, double ionicStrength) {
+            int k = z + byCharge.length / 2;
+            if (k < 0 || k >= byCharge.length) {
+                return Math.pow(10, log10Gamma(z, ionicStrength));
+            }
+            if (Double.isNaN(inverseGammaByCharge[k])) {
+                inverseGammaByCharge[k] = Math.pow(10, -log10Gamma(z, ionicStrength));
+            }
+            return 1 / inverseGammaByCharge[k];
         }
 
         private double log10Gamma(int z, double ionicStrength) {
@@ -710,11 +775,33 @@ public final class Equilibrium {
             double[] w = workW;
             double[] own = workSum;                   // Σ w over each component's own species
             java.util.Arrays.fill(own, 0);
-            for (int i = 0; i < n; i++) {
-                if (complexParts[i] == null) {
-                    int j = comp[i];
-                    w[i] = Math.exp(Thermo.LN10 * (log10Beta[i] - protons[i] * pH + log10GammaComponent[j] - log10Gamma[i]));
-                    own[j] += w[i];
+            boolean products = powered;
+            if (products) {                           // powers of aH, not one exponential per species
+                double x = Math.pow(10, -pH);
+                powers[0] = 1;
+                for (int k = 1; k < powers.length; k++) {
+                    powers[k] = powers[k - 1] * x;
+                }
+                for (int i = 0; i < n; i++) {
+                    if (complexParts[i] == null) {
+                        w[i] = complexWeight[i] * powers[protons[i]];
+                        own[comp[i]] += w[i];
+                    }
+                }
+                for (int j = 0; j < nc && products; j++) {
+                    products = own[j] == 0 && total[j] <= 0 && !open(j) || own[j] > Double.MIN_NORMAL && own[j] < Double.MAX_VALUE;
+                }
+                if (!products) {
+                    java.util.Arrays.fill(own, 0);
+                }
+            }
+            if (!products) {
+                for (int i = 0; i < n; i++) {
+                    if (complexParts[i] == null) {
+                        int j = comp[i];
+                        w[i] = Math.exp(Thermo.LN10 * (log10Beta[i] - protons[i] * pH + log10GammaComponent[j] - log10Gamma[i]));
+                        own[j] += w[i];
+                    }
                 }
             }
             double[] b = freeBasis;
@@ -740,13 +827,41 @@ public final class Equilibrium {
                 position[unknown[q]] = q;
             }
             double[] m = work;
+            double[] residual = innerResidual;
+            double[][] jacobian = innerJacobian;
             for (int iteration = 0; u > 0; iteration++) {
-                complexesFromBasis(pH, m);
-                double[] residual = new double[u];
-                double[][] jacobian = new double[u][u];
+                complexesFromBasis(pH, m, products);
                 for (int q = 0; q < u; q++) {
                     int j = unknown[q];
                     residual[q] = b[j] * own[j] - total[j];
+                }
+                for (int c = 0; c < n; c++) {
+                    if (complexParts[c] == null) {
+                        continue;
+                    }
+                    for (int x = 0; x < complexParts[c].length; x++) {
+                        int row = position[complexParts[c][x]];
+                        if (row >= 0) {
+                            residual[row] += complexCounts[c][x] * m[c];
+                        }
+                    }
+                }
+                double worst = 0;
+                for (int q = 0; q < u; q++) {
+                    // each balance relative to its total: rows of order one, whatever the concentrations
+                    residual[q] /= total[unknown[q]];
+                    worst = Math.max(worst, Math.abs(residual[q]));
+                }
+                if (worst < 1e-13) {
+                    break;
+                }
+                if (iteration == 200) {
+                    throw new IndeterminateException(Caveat.indeterminate("complexation-not-converged",
+                            "the mass balances of the complexes did not converge"));
+                }
+                for (int q = 0; q < u; q++) {
+                    java.util.Arrays.fill(jacobian[q], 0, u, 0);
+                    int j = unknown[q];
                     jacobian[q][q] = b[j] * own[j];
                 }
                 for (int c = 0; c < n; c++) {
@@ -758,7 +873,6 @@ public final class Equilibrium {
                         if (row < 0) {
                             continue;
                         }
-                        residual[row] += complexCounts[c][x] * m[c];
                         for (int y = 0; y < complexParts[c].length; y++) {
                             int col = position[complexParts[c][y]];
                             if (col >= 0) {
@@ -767,24 +881,13 @@ public final class Equilibrium {
                         }
                     }
                 }
-                double worst = 0;
                 for (int q = 0; q < u; q++) {
-                    // each balance relative to its total: rows of order one, whatever the concentrations
                     double t = total[unknown[q]];
-                    residual[q] /= t;
                     for (int k = 0; k < u; k++) {
                         jacobian[q][k] /= t;
                     }
-                    worst = Math.max(worst, Math.abs(residual[q]));
                 }
-                if (worst < 1e-13) {
-                    break;
-                }
-                if (iteration == 200) {
-                    throw new IndeterminateException(Caveat.indeterminate("complexation-not-converged",
-                            "the mass balances of the complexes did not converge"));
-                }
-                double[] step = solveInPlace(jacobian, residual);
+                double[] step = solveInPlace(jacobian, residual, u);
                 double largest = 0;
                 for (double d : step) {
                     largest = Math.max(largest, Math.abs(d));
@@ -795,7 +898,7 @@ public final class Equilibrium {
                 }
             }
             if (u == 0) {
-                complexesFromBasis(pH, m);
+                complexesFromBasis(pH, m, products);
             }
             for (int i = 0; i < n; i++) {
                 if (complexParts[i] == null) {
@@ -809,8 +912,7 @@ public final class Equilibrium {
          * Solves A x = y by Gaussian elimination with partial pivoting, overwriting both; returns y as x. The systems
          * are a handful of coupled components, where a library call's allocations would cost more than the algebra.
          */
-        private static double[] solveInPlace(double[][] a, double[] y) {
-            int size = y.length;
+        private static double[] solveInPlace(double[][] a, double[] y, int size) {
             for (int col = 0; col < size; col++) {
                 int pivot = col;
                 for (int r = col + 1; r < size; r++) {
@@ -848,10 +950,24 @@ public final class Equilibrium {
             return y;
         }
 
-        /** The complexes' molalities from the free bases b (see {@link #complexMolalities}). */
-        private void complexesFromBasis(double pH, double[] m) {
+        /**
+         * The complexes' molalities from the free bases b (see {@link #complexMolalities}): products of powers where the
+         * aH powers hold for this pH, else in log space.
+         */
+        private void complexesFromBasis(double pH, double[] m, boolean products) {
             for (int c = 0; c < n; c++) {
                 if (complexParts[c] == null) {
+                    continue;
+                }
+                if (products) {
+                    double x = complexWeight[c] * powers[protons[c]];
+                    for (int q = 0; q < complexParts[c].length; q++) {
+                        double bj = freeBasis[complexParts[c][q]];
+                        for (int r = 0; r < complexCounts[c][q]; r++) {
+                            x *= bj;
+                        }
+                    }
+                    m[c] = x;
                     continue;
                 }
                 double log = log10Beta[c] - protons[c] * pH - log10Gamma[c];
@@ -911,7 +1027,8 @@ public final class Equilibrium {
                     }
                 }
             }
-            double[] d = new double[nc];              // d ln b_j/dpH, divided by ln10
+            double[] d = basisSlope;                  // d ln b_j/dpH, divided by ln10
+            java.util.Arrays.fill(d, 0);
             double[] y = new double[u];
             for (int j = 0; j < nc; j++) {
                 if (open(j)) {
@@ -924,7 +1041,7 @@ public final class Equilibrium {
                 }
             }
             if (u > 0) {
-                solveInPlace(block, y);
+                solveInPlace(block, y, u);
                 for (int j = 0; j < nc; j++) {
                     if (position[j] >= 0) {
                         d[j] = y[position[j]];
@@ -936,6 +1053,18 @@ public final class Equilibrium {
                 sum -= chargeWeight[k] * d[k];
             }
             return sum;
+        }
+
+        /**
+         * Moves the free bases along their slopes from the last buffer capacity to a pH {@code deltaPH} away, so the
+         * next mass-balance solve starts within the square of the step (a first-order predictor).
+         */
+        void predictBases(double deltaPH) {
+            for (int j = 0; j < components.length; j++) {
+                if (coupledComponent[j] && !open(j) && total[j] > 0 && freeBasis[j] > 0) {
+                    freeBasis[j] *= Math.exp(Thermo.LN10 * basisSlope[j] * deltaPH);
+                }
+            }
         }
 
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */
@@ -1041,6 +1170,33 @@ public final class Equilibrium {
                 sum += t;
             }
             return sum;
+        }
+
+        /**
+         * dI/dpH at fixed activity coefficients, from the state the last {@link #bufferSumOfWork} left: each species
+         * moves as d ln m_s/dpH = ln10 (Σ_j ν_sj d_j − p_s), d_j the slope of its component's free basis (log10 per pH;
+         * without complexes the mean bound protons p̄_j of a closed component, p_f of an open one), so
+         * dI/dpH = ½ ln10 (mOH − mH + Σ_s z_s² m_s (Σ_j ν_sj d_j − p_s)).
+         */
+        double ionicStrengthSlopeOfWork(double pH) {
+            double[] m = work;
+            double sum = kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH)) - Math.exp(Thermo.LN10 * (-pH - log10GammaH));
+            for (int i = 0; i < n; i++) {
+                double d;
+                if (complexParts[i] != null) {
+                    d = 0;
+                    for (int q = 0; q < complexParts[i].length; q++) {
+                        d += complexCounts[i][q] * basisSlope[complexParts[i][q]];
+                    }
+                } else if (complexes) {
+                    d = basisSlope[comp[i]];
+                } else {
+                    int j = comp[i];
+                    d = open(j) ? protons[fixedIndex[j]] : workSum[j];     // ownTerms leaves p̄ in workSum
+                }
+                sum += (double) charge[i] * charge[i] * m[i] * (d - protons[i]);
+            }
+            return 0.5 * Thermo.LN10 * sum;
         }
 
         /**
