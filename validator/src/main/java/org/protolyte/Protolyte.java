@@ -21,6 +21,10 @@ import java.util.function.Consumer;
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.Robustness;
+import org.protolyte.batch.BatchAnalysis;
+import org.protolyte.batch.BatchAnalyzer;
+import org.protolyte.batch.BatchRecord;
+import org.protolyte.batch.BatchRecordReader;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.Digests;
@@ -50,6 +54,9 @@ import org.protolyte.substance.SubstanceLibrary;
  */
 public final class Protolyte {
 
+    /** The document type of a batch record. */
+    public static final String BATCH_RECORD = "batch-record";
+
     /** Rule id of the findings that make a document invalid. */
     public static final String INVALID_DOCUMENT = "invalid-document";
 
@@ -58,6 +65,8 @@ public final class Protolyte {
     private final RecipeResolver resolver;
     private final Analyzer analyzer = new Analyzer(new Equilibrium(Davies.INSTANCE));
     private final Checker checker;
+    private final BatchRecordReader batchReader;
+    private final BatchAnalyzer batchAnalyzer;
     private final Severity failOn;
     private final SubstanceLibrary library;
     private final SchemaCatalog schemas;
@@ -89,6 +98,8 @@ public final class Protolyte {
         this.library = library;
         this.waivers = waivers;
         this.schemas = schemas;
+        this.batchReader = new BatchRecordReader(schemas);
+        this.batchAnalyzer = new BatchAnalyzer(schemas, library, analyzer);
     }
 
     public static String version() {
@@ -103,8 +114,19 @@ public final class Protolyte {
         }
     }
 
-    /** A file to check; {@code foundInFolder} when a folder was named, so that non-documents are skipped. */
-    public record Input(Path path, boolean foundInFolder) {
+    /**
+     * A file to check; {@code foundInFolder} when a folder was named, so that non-documents are skipped. {@code root}
+     * is the folder tree a batch record's master must stay in: the folder named, or the file's own folder.
+     */
+    public record Input(Path path, boolean foundInFolder, Path root) {
+        public Input(Path path, boolean foundInFolder) {
+            this(path, foundInFolder, parentOf(path));
+        }
+
+        private static Path parentOf(Path p) {
+            Path parent = p.toAbsolutePath().getParent();
+            return parent == null ? p.toAbsolutePath() : parent;
+        }
     }
 
     public RunReport check(List<Path> files) {
@@ -132,7 +154,8 @@ public final class Protolyte {
                 while (next < inputs.size() && window.size() < 4 * threads) {
                     Input in = inputs.get(next++);
                     window.add(new InFlight(in.path().toString(), pool.submit(() -> in.foundInFolder()
-                            && !isFormulation(in.path()) ? Optional.<DocumentReport>empty() : Optional.of(check(in.path())))));
+                            && !isDocument(in.path()) ? Optional.<DocumentReport>empty()
+                            : Optional.of(check(in.path(), in.root())))));
                 }
                 InFlight head = window.poll();
                 Optional<DocumentReport> r = join(head.report());
@@ -179,19 +202,25 @@ public final class Protolyte {
     }
 
     /**
-     * A file found in a folder is checked when its top-level "document" says formulation; one that cannot
-     * be read as JSON is checked too, so that it is reported invalid rather than passed over.
+     * A file found in a folder is checked when its top-level "document" says formulation or batch-record; one that
+     * cannot be read as JSON is checked too, so that it is reported invalid rather than passed over.
      */
-    private boolean isFormulation(Path p) {
+    private boolean isDocument(Path p) {
         try {
             SourceDocument doc = json.read(p.toString(), Files.readAllBytes(p));
-            return "formulation".equals(doc.root().path("document").asString(""));
+            String kind = doc.root().path("document").asString("");
+            return "formulation".equals(kind) || BATCH_RECORD.equals(kind);
         } catch (DocumentException | IOException e) {
             return true;
         }
     }
 
     public DocumentReport check(Path file) {
+        return check(file, new Input(file, false).root());
+    }
+
+    /** Checks one file; a batch record's master path must stay inside {@code root}. */
+    public DocumentReport check(Path file, Path root) {
         String source = file.toString();
         byte[] content;
         try {
@@ -204,16 +233,24 @@ public final class Protolyte {
             return invalid(source, Optional.empty(), Optional.empty(), List.of(new Problem("", Optional.empty(),
                     "cannot read the file: " + e.getMessage())));
         }
-        return check(source, content);
+        return check(source, content, Optional.of(file), Optional.of(root));
     }
 
+    /** Checks bytes that have no folder: a batch record among them must embed its master. */
     public DocumentReport check(String source, byte[] content) {
+        return check(source, content, Optional.empty(), Optional.empty());
+    }
+
+    private DocumentReport check(String source, byte[] content, Optional<Path> file, Optional<Path> root) {
         Optional<String> id = Optional.empty();
         String sha256 = Digests.sha256(content);
         try {
             SourceDocument doc = json.read(source, content);
             if (doc.root().path("id").isString()) {
                 id = Optional.of(doc.root().path("id").asString());
+            }
+            if (BATCH_RECORD.equals(doc.root().path("document").asString(""))) {
+                return batch(doc, sha256, file, root);
             }
             Formulation f;
             try {
@@ -242,6 +279,19 @@ public final class Protolyte {
             return DocumentReport.fault(source, Optional.of(sha256), "internal fault while checking this document ("
                     + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
         }
+    }
+
+    /** A batch record: read with its master, compared, recomputed, judged by the batch rules. */
+    private DocumentReport batch(SourceDocument doc, String sha256, Optional<Path> file, Optional<Path> root) {
+        BatchRecord record = batchReader.read(doc, file, root);
+        BatchAnalysis b = batchAnalyzer.analyze(record);
+        Checker.Verdict verdict;
+        try {
+            verdict = checker.check(b);
+        } catch (DocumentException e) {
+            throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
+        }
+        return DocumentReport.ofBatch(b, sha256, verdict, failOn);
     }
 
     /** Adds the substance names that do not resolve, so that one pass reports everything a reviewer must fix. */

@@ -77,6 +77,37 @@ public final class Analyzer {
     }
 
     /**
+     * What a recipe gives without its uncertainties: the q.s. dose of each titrant (mol per basis; empty where its
+     * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate). For comparing a
+     * batch as made with what was measured, many times over.
+     */
+    public record Forecast(Map<Ingredient, java.util.OptionalDouble> doses, List<Optional<EquilibriumState>> states) {
+    }
+
+    public Forecast forecast(Recipe recipe) {
+        Map<Ingredient, java.util.OptionalDouble> out = new java.util.LinkedHashMap<>();
+        Map<Ingredient, Double> doses = new HashMap<>();
+        if (!recipe.titrants().isEmpty()) {
+            for (TitrantResult t : adjust(recipe, new ArrayList<>())) {
+                boolean reached = t.unreachable().isEmpty();
+                out.put(t.ingredient(), reached ? java.util.OptionalDouble.of(t.moles()) : java.util.OptionalDouble.empty());
+                doses.put(t.ingredient(), t.moles());
+            }
+        }
+        Solution solution = recipe.solution(doses);
+        List<Optional<EquilibriumState>> states = new ArrayList<>();
+        for (Formulation.Condition c : recipe.formulation().conditions()) {
+            try {
+                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
+                states.add(s.determinate() ? Optional.of(s) : Optional.empty());
+            } catch (IndeterminateException e) {
+                states.add(Optional.empty());
+            }
+        }
+        return new Forecast(out, states);
+    }
+
+    /**
      * pH and buffer capacity (mol/L per pH) of every condition, q.s. included, then of every condition of the working
      * solution where the document is a concentrate; NaN where not determinate.
      */

@@ -23,7 +23,7 @@ final class Inputs {
                 try (Stream<Path> s = Files.walk(p)) {
                     s.filter(f -> Files.isRegularFile(f) && f.getFileName().toString().endsWith(".json"))
                             .sorted(Comparator.comparing(f -> p.relativize(f).toString()))
-                            .forEach(f -> out.add(new Protolyte.Input(f, true)));
+                            .forEach(f -> out.add(new Protolyte.Input(f, true, p)));
                 } catch (IOException e) {
                     throw new UncheckedIOException(e);
                 }

@@ -6,6 +6,7 @@ import java.util.Optional;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.document.Formulation;
 import org.protolyte.rules.Checker;
@@ -16,7 +17,13 @@ import org.protolyte.rules.Severity;
 /** What a run says about one input file. */
 public record DocumentReport(String source, Optional<String> sha256, Optional<String> id, Status status,
                              Optional<FormulationAnalysis> analysis, List<Finding> findings,
-                             List<Diagnostic> diagnostics, List<RulePack> packs) {
+                             List<Diagnostic> diagnostics, List<RulePack> packs, Optional<BatchAnalysis> batch) {
+
+    public DocumentReport(String source, Optional<String> sha256, Optional<String> id, Status status,
+                          Optional<FormulationAnalysis> analysis, List<Finding> findings, List<Diagnostic> diagnostics,
+                          List<RulePack> packs) {
+        this(source, sha256, id, status, analysis, findings, diagnostics, packs, Optional.empty());
+    }
 
     public DocumentReport {
         findings = List.copyOf(findings);
@@ -33,6 +40,18 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
         return new DocumentReport(source, sha256, Optional.empty(), Status.FAULT, Optional.empty(), List.of(),
                 List.of(new Diagnostic("internal-fault", Caveat.Severity.INDETERMINATE, message, Optional.empty(),
                         Optional.empty(), Optional.empty())), List.of());
+    }
+
+    /**
+     * A batch record's report: the findings of the batch rules decide pass or fail; the batch as made is shown (its
+     * conditions), but its own indeterminate conditions do not make the record indeterminate, since the record is
+     * judged by its measurements.
+     */
+    public static DocumentReport ofBatch(BatchAnalysis b, String sha256, Checker.Verdict verdict, Severity failOn) {
+        boolean failed = verdict.findings().stream().anyMatch(x -> x.active() && x.severity().compareTo(failOn) >= 0);
+        return new DocumentReport(b.record().document().source(), Optional.of(sha256), Optional.of(b.record().id()),
+                failed ? Status.FAIL : Status.PASS, b.asMade(), verdict.findings(), List.of(), verdict.packs(),
+                Optional.of(b));
     }
 
     /** Status from the analysis: indeterminate outranks fail; a finding at or above {@code failOn} fails. */

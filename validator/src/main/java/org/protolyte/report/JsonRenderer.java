@@ -4,6 +4,7 @@ import java.util.Optional;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.analysis.TitrantResult;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.SolidPhase;
@@ -105,6 +106,53 @@ public final class JsonRenderer {
         return root;
     }
 
+    /** A batch record: its master, the additions against it, the measurements against prediction, the candidates. */
+    private void batch(ObjectNode o, BatchAnalysis b) {
+        o.put("batch", b.record().batch());
+        ObjectNode m = o.putObject("master");
+        m.put("id", b.record().master().id());
+        b.record().master().revision().ifPresent(x -> m.put("revision", x));
+        m.put("source", b.record().master().document().source());
+        o.put("scale", Numbers.significant(b.scale(), 6));
+        ArrayNode adds = o.putArray("additions");
+        for (BatchAnalysis.AdditionCheck c : b.additions()) {
+            ObjectNode x = adds.addObject();
+            x.put("match", c.match().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
+            c.expected().ifPresent(s -> x.put("master", s.name()));
+            c.used().ifPresent(s -> x.put("used", s.name()));
+            c.addition().ifPresent(a -> x.put("step", a.step()).put("pointer", a.pointer()));
+            if (Double.isFinite(c.expectedMoles())) {
+                x.put("expectedMmol", Numbers.significant(c.expectedMoles() * 1000, 5));
+            }
+            x.put("actualMmol", Numbers.significant(c.actualMoles() * 1000, 5));
+            if (Double.isFinite(c.deviation())) {
+                x.put("deviation", Numbers.significant(c.deviation(), 3));
+            }
+        }
+        ArrayNode obs = o.putArray("observations");
+        for (BatchAnalysis.Observation x : b.observations()) {
+            ObjectNode y = obs.addObject().put("kind", x.kind().name().toLowerCase(java.util.Locale.ROOT))
+                    .put("label", x.label()).put("measured", x.measured()).put("pointer", x.pointer());
+            if (Double.isNaN(x.predicted())) {
+                y.putNull("predicted");
+            } else {
+                y.put("predicted", Numbers.significant(x.predicted(), 4));
+            }
+        }
+        ArrayNode cands = o.putArray("candidates");
+        for (BatchAnalysis.Candidate c : b.candidates()) {
+            ObjectNode y = cands.addObject().put("cause", c.cause());
+            ArrayNode p = y.putArray("predicted");
+            for (double v : c.predicted()) {
+                if (Double.isNaN(v)) {
+                    p.addNull();
+                } else {
+                    p.add(Numbers.significant(v, 4));
+                }
+            }
+        }
+    }
+
     private ObjectNode document(DocumentReport r) {
         ObjectNode n = mapper.createObjectNode();
         n.put("source", r.source());
@@ -115,6 +163,7 @@ public final class JsonRenderer {
         r.packs().forEach(p -> packs.addObject().put("name", p.name()).put("version", p.version())
                 .put("source", p.document().source()).put("sha256", p.sha256()));
         r.analysis().ifPresent(a -> analysis(n, a));
+        r.batch().ifPresent(b -> batch(n.putObject("batch"), b));
         ArrayNode findings = n.putArray("findings");
         r.findings().forEach(f -> findings.add(finding(f)));
         ArrayNode diagnostics = n.putArray("diagnostics");

@@ -9,6 +9,7 @@ import java.util.Map;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
+import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.SolidPhase;
@@ -64,6 +65,7 @@ public final class TextRenderer {
         b.append("== ").append(r.source());
         r.id().ifPresent(id -> b.append("  [").append(id).append("]"));
         b.append("  ").append(r.status().code().toUpperCase(Locale.ROOT)).append(NL);
+        r.batch().ifPresent(x -> batch(b, x));
         r.analysis().ifPresent(a -> analysis(b, a));
         if (!r.findings().isEmpty()) {
             b.append("  findings:").append(NL);
@@ -89,6 +91,50 @@ public final class TextRenderer {
                 b.append(NL).append("      ").append(d.message()).append(NL);
             }
         }
+    }
+
+    /** A batch record: master and size, each addition against the master, each measurement against prediction. */
+    private static void batch(StringBuilder b, BatchAnalysis x) {
+        var m = x.record().master();
+        b.append(String.format(Locale.ROOT, "  batch %s of %s%s, %s × the master's basis%n", x.record().batch(), m.id(),
+                m.revision().map(r -> " revision " + r).orElse(""), Numbers.significant(x.scale(), 4).toPlainString()));
+        b.append(String.format(Locale.ROOT, "  %-5s %-44s %-14s %12s %12s %8s%n", "step", "addition", "recorded",
+                "mmol", "master mmol", "Δ"));
+        for (BatchAnalysis.AdditionCheck c : x.additions()) {
+            String step = c.addition().map(a -> String.valueOf(a.step())).orElse("—");
+            String name = c.used().or(() -> c.expected()).map(s -> s.name()).orElse("?")
+                    + switch (c.match()) {
+                        case MISSING -> " (missing)";
+                        case EXTRA -> " (not in the master)";
+                        case OTHER_FORM -> " (master: " + c.expected().orElseThrow().name() + ")";
+                        case TITRANT -> " (q.s.)";
+                        default -> "";
+                    };
+            String recorded = c.addition().map(a -> a.amount().toString()).orElse("—");
+            String expected = Double.isFinite(c.expectedMoles()) ? Numbers.significant(c.expectedMoles() * 1000, 5)
+                    .toPlainString() : "—";
+            String dev = Double.isFinite(c.deviation()) ? String.format(Locale.ROOT, "%+.1f %%", 100 * c.deviation()) : "";
+            b.append(String.format(Locale.ROOT, "  %-5s %-44s %-14s %12s %12s %8s%n", step, name, recorded,
+                    Numbers.significant(c.actualMoles() * 1000, 5).toPlainString(), expected, dev));
+        }
+        if (!x.observations().isEmpty()) {
+            b.append("  measured, and predicted from the additions as recorded:").append(NL);
+            for (BatchAnalysis.Observation o : x.observations()) {
+                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", o.label(), observed(o.kind(), o.measured()),
+                        observed(o.kind(), o.predicted())));
+            }
+        }
+    }
+
+    private static String observed(BatchAnalysis.Observation.Kind kind, double v) {
+        if (Double.isNaN(v)) {
+            return "—";
+        }
+        return switch (kind) {
+            case PH -> String.format(Locale.ROOT, "%.2f", v);
+            case TITRANT -> String.format(Locale.ROOT, "%.3g mL", v);
+            case OSMOLALITY -> String.format(Locale.ROOT, "%.0f mOsm/kg", v);
+        };
     }
 
     private void analysis(StringBuilder b, FormulationAnalysis a) {

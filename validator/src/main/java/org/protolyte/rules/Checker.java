@@ -59,6 +59,18 @@ public final class Checker {
         return chosen;
     }
 
+    /** A batch record, by the batch check kinds of the packs its master's intended use selects. */
+    public Verdict check(org.protolyte.batch.BatchAnalysis batch) {
+        List<String> selected = selection(batch.record().master().intendedUse());
+        List<Finding> out = new ArrayList<>();
+        for (Rule rule : resolved.computeIfAbsent(selected, book::rules)) {
+            if (rule.enabled() && book.kinds().get(rule.check()).orElseThrow() instanceof BatchCheckKind k) {
+                out.addAll(k.check(batch, rule));
+            }
+        }
+        return new Verdict(book.withAncestors(selected), out);
+    }
+
     public Verdict check(FormulationAnalysis analysis) {
         List<String> selected = selection(analysis.recipe().formulation().intendedUse());
         List<Finding> out = new ArrayList<>();

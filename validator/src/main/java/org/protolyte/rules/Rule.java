@@ -51,6 +51,11 @@ public record Rule(String id, String check, ObjectNode parameters, Severity seve
         return Optional.of(n.valueStream().map(JsonNode::asString).toList());
     }
 
+    /** A finding of this rule at a place in another document than a formulation (a batch record). */
+    public Finding finding(org.protolyte.document.SourceDocument doc, String pointer, String message) {
+        return new Finding(id, severity, message, Optional.of(pointer), doc.locate(pointer), Optional.of(this));
+    }
+
     /** A finding of this rule at a place in the document. */
     public Finding finding(Formulation f, String pointer, String message) {
         return new Finding(id, severity, message, Optional.of(pointer), f.document().locate(pointer), Optional.of(this));

@@ -119,6 +119,26 @@ public final class SubstanceLibrary {
         return substances.values();
     }
 
+    /**
+     * The forms a weighing of {@code s} could have been mistaken for: its other hydrates (the same composition in
+     * solution) and the other forms of any shared name it belongs to ("sodium phosphate": the monobasic and dibasic
+     * salts and their hydrates), in library order.
+     */
+    public List<Substance> siblings(Substance s) {
+        Set<String> names = new LinkedHashSet<>();
+        for (Substance x : substances.values()) {
+            if (!x.name().equals(s.name()) && x.composition().equals(s.composition())) {
+                names.add(x.name());
+            }
+        }
+        for (List<String> forms : ambiguous.values()) {
+            if (forms.contains(s.name())) {
+                forms.stream().filter(f -> !f.equals(s.name()) && substances.containsKey(f)).forEach(names::add);
+            }
+        }
+        return names.stream().map(substances::get).toList();
+    }
+
     public Optional<AcidBaseSystem> system(String name) {
         return Optional.ofNullable(systems.get(name));
     }

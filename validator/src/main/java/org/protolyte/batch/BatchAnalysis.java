@@ -1,0 +1,75 @@
+package org.protolyte.batch;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.document.Formulation;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.substance.Substance;
+
+/**
+ * What a batch record says once compared with its master and with chemistry: each addition against the master line
+ * it belongs to, each measurement against the engine's prediction for the batch as recorded, and the usual mistakes
+ * with the predictions each would give. The rules judge it; nothing here is a verdict.
+ *
+ * @param scale     batch per master basis (20 for a 20 L batch of a 1 L master)
+ * @param asMade    the analysis of the whole batch as recorded, at the master's conditions
+ */
+public record BatchAnalysis(BatchRecord record, Recipe master, double scale, List<AdditionCheck> additions,
+                            List<Observation> observations, List<Candidate> candidates,
+                            Optional<FormulationAnalysis> asMade) {
+
+    public BatchAnalysis {
+        additions = List.copyOf(additions);
+        observations = List.copyOf(observations);
+        candidates = List.copyOf(candidates);
+    }
+
+    /** How an addition relates to the master. */
+    public enum Match { SAME, OTHER_FORM, MISSING, EXTRA, TITRANT }
+
+    /**
+     * One master line with what was added for it (or an addition the master does not have): the substance used, and
+     * the moles expected for this batch size and found after the certificate corrections. {@code tolerance} is the
+     * master line's own weighing tolerance, where it states one.
+     */
+    public record AdditionCheck(Match match, Optional<Formulation.Line> line, Optional<BatchRecord.Addition> addition,
+                                Optional<Substance> expected, Optional<Substance> used, double expectedMoles,
+                                double actualMoles, Optional<Double> tolerance) {
+        /** (actual − expected)/expected; NaN where either side is absent. */
+        public double deviation() {
+            return expectedMoles > 0 && actualMoles >= 0 ? actualMoles / expectedMoles - 1 : Double.NaN;
+        }
+    }
+
+    /**
+     * A measured value and the engine's prediction for the batch as recorded: a pH at a step and temperature, an
+     * osmolality (mOsm/kg), or the volume of titrant (mL) against the q.s. the recorded weighings need to reach the
+     * pH the meter showed after it. {@code predicted} is NaN where the engine cannot stand behind a number.
+     */
+    public record Observation(Kind kind, String label, double measured, double predicted, String pointer) {
+        public enum Kind { PH, OSMOLALITY, TITRANT }
+    }
+
+    /**
+     * A usual mistake and what the batch would have given under it, one prediction per observation (same order), and
+     * per further measurement that would tell candidates apart ({@code further}: its label and predicted value).
+     */
+    public record Candidate(String cause, double[] predicted, List<Further> further) {
+        public Candidate {
+            predicted = predicted.clone();
+            further = List.copyOf(further);
+        }
+    }
+
+    /** A measurement not in the record, predicted: "osmolality" at the end, "pH before adjustment" and so on. */
+    public record Further(Observation.Kind kind, String label, OptionalDouble predicted) {
+    }
+
+    /** The prediction for the batch as recorded, per further measurement, to set beside the candidates'. */
+    public List<Further> recordedFurther() {
+        return candidates.isEmpty() ? List.of() : candidates.get(0).further();
+    }
+}

@@ -1,0 +1,453 @@
+package org.protolyte.batch;
+
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.protolyte.analysis.Analyzer;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.EquilibriumState;
+import org.protolyte.chemistry.Thermo;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Formulation;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.Problem;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.recipe.Ingredient;
+import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.RecipeResolver;
+import org.protolyte.recipe.Solution;
+import org.protolyte.substance.LookupException;
+import org.protolyte.substance.Substance;
+import org.protolyte.substance.SubstanceLibrary;
+import org.protolyte.units.Dimension;
+
+/**
+ * Compares a batch record with its master and with chemistry. The batch as recorded is written as a formulation of
+ * its own (every addition in mmol after the certificate corrections, per batch), and the engine predicts each
+ * measurement from the additions made up to its step. For a q.s. recipe the meter sets the pH after the titrant, so
+ * that pH is the goal of a q.s. computed from the recorded weighings, and the titrant volume is what is compared.
+ * Where a prediction misses a measurement, the usual mistakes are tried: another form of a weighed substance, one
+ * amount ten times too much or too little, an addition left out, a titrant or stock at another strength.
+ */
+public final class BatchAnalyzer {
+
+    /** Water, g/mol (IUPAC 2021 atomic weights: 2 × 1.008 + 15.999). */
+    private static final double WATER = 18.015;
+    /** Below these differences nothing needs explaining; a rule's own limits are larger (defaults 0.1, 10 %, 3 %). */
+    private static final double QUIET_PH = 0.02;
+    private static final double QUIET_RELATIVE = 0.01;
+    /** Osmolality is reported at this temperature where the record gives none (freezing-point osmometers). */
+    private static final double OSMOLALITY_KELVIN = 298.15;
+
+    private final SubstanceLibrary library;
+    private final RecipeResolver resolver;
+    private final FormulationReader reader;
+    private final Analyzer analyzer;
+    private final JsonReader json = new JsonReader();
+
+    public BatchAnalyzer(SchemaCatalog schemas, SubstanceLibrary library, Analyzer analyzer) {
+        this.library = library;
+        this.resolver = new RecipeResolver(library);
+        this.reader = new FormulationReader(schemas);
+        this.analyzer = analyzer;
+    }
+
+    /** An addition as the chemistry sees it: the form, the moles in the batch, and a titrant's stock. */
+    record Made(BatchRecord.Addition recorded, Substance substance, double moles, boolean titrant, double molarity) {
+        Made with(Substance other, double newMoles) {
+            return new Made(recorded, other, newMoles, titrant, molarity);
+        }
+    }
+
+    public BatchAnalysis analyze(BatchRecord r) {
+        Recipe master = resolver.resolve(r.master());
+        double scale = r.batchSize() / r.master().basis().amount();
+        List<Made> made = made(r, master);
+        List<BatchAnalysis.AdditionCheck> checks = compare(master, made, scale);
+        Plan plan = plan(r, master, made);
+        double[] recorded = predict(r, master, made, plan, 1);
+        List<BatchAnalysis.Observation> observations = new ArrayList<>();
+        for (int i = 0; i < plan.observations.size(); i++) {
+            BatchAnalysis.Observation o = plan.observations.get(i);
+            observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i], o.pointer()));
+        }
+        List<BatchAnalysis.Candidate> candidates = new ArrayList<>();
+        if (observations.stream().anyMatch(BatchAnalyzer::unexplained)) {
+            candidates.add(new BatchAnalysis.Candidate("as recorded", recorded, further(r, master, made, plan, 1)));
+            for (Scenario s : scenarios(made, master)) {
+                double[] p = predict(r, master, s.made(), plan, s.titrantFactor());
+                candidates.add(new BatchAnalysis.Candidate(s.cause(), p, further(r, master, s.made(), plan,
+                        s.titrantFactor())));
+            }
+        }
+        return new BatchAnalysis(r, master, scale, checks, observations, candidates, asMade(r, master, made));
+    }
+
+    private static boolean unexplained(BatchAnalysis.Observation o) {
+        if (Double.isNaN(o.predicted())) {
+            return false;
+        }
+        double d = Math.abs(o.predicted() - o.measured());
+        return o.kind() == BatchAnalysis.Observation.Kind.PH ? d > QUIET_PH : d > QUIET_RELATIVE * Math.abs(o.measured());
+    }
+
+    /** Each addition resolved to its form and moles, the certificate corrections applied. */
+    private List<Made> made(BatchRecord r, Recipe master) {
+        List<Problem> problems = new ArrayList<>();
+        List<Made> out = new ArrayList<>();
+        for (BatchRecord.Addition a : r.additions()) {
+            Substance s;
+            try {
+                s = library.lookup(a.substance());
+            } catch (LookupException e) {
+                problems.add(r.document().problem(a.pointer() + "/substance", e.getMessage()));
+                continue;
+            }
+            boolean titrant = master.titrants().stream().anyMatch(t -> t.substance().name().equals(s.name()));
+            double moles;
+            if (a.amount().dimension() == Dimension.VOLUME) {
+                moles = a.amount().base() * a.stockMolarity().orElseThrow();
+            } else if (a.amount().dimension() == Dimension.AMOUNT) {
+                moles = a.amount().base();
+            } else if (s.molarMass().isEmpty()) {
+                problems.add(r.document().problem(a.pointer() + "/amount", "'" + s.name() + "' has no molar mass in "
+                        + "the library; record it in mmol"));
+                continue;
+            } else {
+                moles = corrected(a, s);
+            }
+            out.add(new Made(a, s, moles, titrant, a.stockMolarity().orElse(Double.NaN)));
+        }
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        return out;
+    }
+
+    /**
+     * Moles of the named form in a weighed mass. As is, with an assay on the dried substance:
+     * n = m (1 − w) A / M_anhydrous, w the recorded water (a hydrate's nominal water where none is recorded); with an
+     * assay as is: n = m A / M; weighed at 100 %: n = m / M; weighed as anhydrous: n = m / M_anhydrous.
+     */
+    static double corrected(BatchRecord.Addition a, Substance s) {
+        double m = a.amount().base();
+        double molar = s.molarMass().getAsDouble();
+        double anhydrous = molar - s.hydrationWater() * WATER;
+        return switch (a.weighed()) {
+            case PURE -> m / molar;
+            case ANHYDROUS -> m / anhydrous;
+            case AS_IS -> {
+                if (a.assay().isEmpty() && a.water().isEmpty()) {
+                    yield m / molar;
+                }
+                double assay = a.assay().orElse(1);
+                if (a.assayAsIs()) {
+                    yield m * assay / molar;
+                }
+                double w = a.water().orElse(s.hydrationWater() * WATER / molar);
+                yield m * (1 - w) * assay / anhydrous;
+            }
+        };
+    }
+
+    /** Each master line with its additions: the same form, another form of it, missing; and additions it lacks. */
+    private List<BatchAnalysis.AdditionCheck> compare(Recipe master, List<Made> made, double scale) {
+        Solution nominal = master.solution(Map.of());
+        List<BatchAnalysis.AdditionCheck> out = new ArrayList<>();
+        List<Made> left = new ArrayList<>(made);
+        for (Ingredient ing : master.ingredients()) {
+            Substance want = ing.substance();
+            if (ing.kind() == Ingredient.Kind.TITRANT) {
+                List<Made> used = left.stream().filter(x -> x.titrant() && x.substance().name().equals(want.name()))
+                        .toList();
+                left.removeAll(used);
+                double moles = used.stream().mapToDouble(Made::moles).sum();
+                out.add(new BatchAnalysis.AdditionCheck(BatchAnalysis.Match.TITRANT, Optional.of(ing.line()),
+                        used.stream().findFirst().map(Made::recorded), Optional.of(want), Optional.of(want), Double.NaN,
+                        moles, ing.line().tolerance()));
+                continue;
+            }
+            double expected = nominal.moles().getOrDefault(ing, 0.0) * scale;
+            List<Made> same = left.stream().filter(x -> x.substance().name().equals(want.name())).toList();
+            BatchAnalysis.Match match = BatchAnalysis.Match.SAME;
+            if (same.isEmpty()) {
+                List<Substance> siblings = library.siblings(want);
+                same = left.stream().filter(x -> siblings.stream().anyMatch(s -> s.name().equals(x.substance().name())))
+                        .limit(1).toList();
+                match = same.isEmpty() ? BatchAnalysis.Match.MISSING : BatchAnalysis.Match.OTHER_FORM;
+            }
+            left.removeAll(same);
+            double actual = same.stream().mapToDouble(Made::moles).sum();
+            out.add(new BatchAnalysis.AdditionCheck(match, Optional.of(ing.line()),
+                    same.stream().findFirst().map(Made::recorded), Optional.of(want),
+                    same.stream().findFirst().map(Made::substance), expected, same.isEmpty() ? 0 : actual,
+                    ing.line().tolerance()));
+        }
+        for (Made x : left) {
+            out.add(new BatchAnalysis.AdditionCheck(BatchAnalysis.Match.EXTRA, Optional.empty(), Optional.of(x.recorded()),
+                    Optional.empty(), Optional.of(x.substance()), Double.NaN, x.moles(), Optional.empty()));
+        }
+        return out;
+    }
+
+    /** Which measurements are compared, and the pH that sets the titrant (the first pH read at or after it). */
+    private record Plan(List<BatchAnalysis.Observation> observations, List<BatchRecord.Measurement> measured,
+                        int titrantStep, Optional<BatchRecord.Measurement> goal) {
+    }
+
+    private Plan plan(BatchRecord r, Recipe master, List<Made> made) {
+        int titrantStep = made.stream().filter(Made::titrant).mapToInt(x -> x.recorded().step()).min()
+                .orElse(Integer.MAX_VALUE);
+        boolean qs = !master.titrants().isEmpty() && titrantStep != Integer.MAX_VALUE;
+        Optional<BatchRecord.Measurement> goal = qs ? r.measurements().stream()
+                .filter(m -> m.kind() == BatchRecord.Measurement.Kind.PH && m.step() >= titrantStep)
+                .min(java.util.Comparator.comparingInt(BatchRecord.Measurement::step)) : Optional.empty();
+        List<BatchAnalysis.Observation> obs = new ArrayList<>();
+        List<BatchRecord.Measurement> measured = new ArrayList<>();
+        for (BatchRecord.Measurement m : r.measurements()) {
+            if (goal.isPresent() && goal.get() == m) {
+                continue;
+            }
+            String label = m.kind() == BatchRecord.Measurement.Kind.PH
+                    ? String.format(Locale.ROOT, "pH at step %d (%.1f °C)", m.step(),
+                    m.kelvin().getAsDouble() - Thermo.KELVIN_OFFSET)
+                    : String.format(Locale.ROOT, "osmolality at step %d", m.step());
+            obs.add(new BatchAnalysis.Observation(m.kind() == BatchRecord.Measurement.Kind.PH
+                    ? BatchAnalysis.Observation.Kind.PH : BatchAnalysis.Observation.Kind.OSMOLALITY, label, m.value(),
+                    Double.NaN, m.pointer()));
+            measured.add(m);
+        }
+        if (qs) {
+            Made first = made.stream().filter(Made::titrant).findFirst().orElseThrow();
+            double ml = made.stream().filter(x -> x.titrant() && x.substance().name().equals(first.substance().name()))
+                    .mapToDouble(x -> x.moles() / x.molarity() * 1000).sum();
+            obs.add(new BatchAnalysis.Observation(BatchAnalysis.Observation.Kind.TITRANT,
+                    "mL of " + first.substance().name() + " " + molarityText(first.molarity()), ml, Double.NaN,
+                    first.recorded().pointer() + "/amount"));
+        }
+        return new Plan(obs, measured, titrantStep, goal);
+    }
+
+    /** A scenario of the usual mistakes: its additions and the true strength of the titrant over the recorded one. */
+    private record Scenario(String cause, List<Made> made, double titrantFactor) {
+    }
+
+    private List<Scenario> scenarios(List<Made> made, Recipe master) {
+        List<Scenario> out = new ArrayList<>();
+        for (int i = 0; i < made.size(); i++) {
+            Made x = made.get(i);
+            String at = " (step " + x.recorded().step() + ")";
+            boolean weighed = x.recorded().amount().dimension() == Dimension.MASS;
+            if (weighed) {
+                for (Substance other : library.siblings(x.substance())) {
+                    if (other.molarMass().isEmpty()) {
+                        continue;
+                    }
+                    double moles = x.recorded().amount().base() / other.molarMass().getAsDouble();
+                    out.add(new Scenario(other.name() + " weighed in place of " + x.substance().name() + at,
+                            replace(made, i, x.with(other, moles)), 1));
+                }
+            }
+            if (x.titrant()) {
+                continue;       // a titrant's amount is the meter's; its strength is tried below
+            }
+            String what = weighed ? x.substance().name() + " weighed " : "the " + x.substance().name() + " stock ";
+            out.add(new Scenario(what + (weighed ? "ten times too much" : "at ten times its stated strength") + at,
+                    replace(made, i, x.with(x.substance(), 10 * x.moles())), 1));
+            out.add(new Scenario(what + (weighed ? "a tenth of what was recorded" : "at a tenth of its stated strength")
+                    + at, replace(made, i, x.with(x.substance(), 0.1 * x.moles())), 1));
+            List<Made> without = new ArrayList<>(made);
+            without.remove(i);
+            out.add(new Scenario(x.substance().name() + " left out" + at, without, 1));
+        }
+        made.stream().filter(Made::titrant).findFirst().ifPresent(t -> {
+            for (double f : new double[] {10, 2, 0.5, 0.1}) {
+                out.add(new Scenario(String.format(Locale.ROOT, "the %s stock at %s, not the %s recorded",
+                        t.substance().name(), molarityText(t.molarity() * f), molarityText(t.molarity())), made, f));
+            }
+        });
+        return out;
+    }
+
+    private static List<Made> replace(List<Made> made, int i, Made with) {
+        List<Made> out = new ArrayList<>(made);
+        out.set(i, with);
+        return out;
+    }
+
+    /** The prediction of each observation of the plan under a scenario; NaN where the engine gives no number. */
+    private double[] predict(BatchRecord r, Recipe master, List<Made> made, Plan plan, double titrantFactor) {
+        double[] out = new double[plan.observations.size()];
+        for (int i = 0; i < plan.measured.size(); i++) {
+            BatchRecord.Measurement m = plan.measured.get(i);
+            double kelvin = m.kelvin().orElse(OSMOLALITY_KELVIN);
+            Optional<EquilibriumState> s = state(r, master, upTo(made, m.step()), m.atVolume(), kelvin, titrantFactor);
+            out[i] = s.map(x -> m.kind() == BatchRecord.Measurement.Kind.PH ? x.pH() : x.osmolality() * 1000)
+                    .orElse(Double.NaN);
+        }
+        if (out.length > plan.measured.size()) {
+            out[out.length - 1] = titrantVolume(r, master, made, plan, titrantFactor);
+        }
+        return out;
+    }
+
+    /** Predictions of the measurements the record lacks that would tell candidates apart. */
+    private List<BatchAnalysis.Further> further(BatchRecord r, Recipe master, List<Made> made, Plan plan,
+                                                double titrantFactor) {
+        List<BatchAnalysis.Further> out = new ArrayList<>();
+        boolean osmolality = r.measurements().stream().anyMatch(m -> m.kind() == BatchRecord.Measurement.Kind.OSMOLALITY);
+        if (!osmolality) {
+            out.add(new BatchAnalysis.Further(BatchAnalysis.Observation.Kind.OSMOLALITY, "osmolality of the batch",
+                    optional(state(r, master, made, 1, OSMOLALITY_KELVIN, titrantFactor).map(s -> s.osmolality() * 1000))));
+        }
+        if (plan.goal.isPresent() && r.measurements().stream().noneMatch(m -> m.kind() == BatchRecord.Measurement.Kind.PH
+                && m.step() < plan.titrantStep)) {
+            BatchRecord.Measurement g = plan.goal.get();
+            out.add(new BatchAnalysis.Further(BatchAnalysis.Observation.Kind.PH, String.format(Locale.ROOT,
+                    "pH before the titrant (%.1f °C)", g.kelvin().getAsDouble() - Thermo.KELVIN_OFFSET),
+                    optional(state(r, master, upTo(made, plan.titrantStep - 1), g.atVolume(), g.kelvin().getAsDouble(),
+                            titrantFactor).map(EquilibriumState::pH))));
+        }
+        return out;
+    }
+
+    private static OptionalDouble optional(Optional<Double> x) {
+        return x.map(OptionalDouble::of).orElse(OptionalDouble.empty());
+    }
+
+    private static List<Made> upTo(List<Made> made, int step) {
+        return made.stream().filter(x -> x.recorded().step() <= step).toList();
+    }
+
+    /** The equilibrium of some additions at a fraction of the batch volume and a temperature. */
+    private Optional<EquilibriumState> state(BatchRecord r, Recipe master, List<Made> made, double atVolume,
+                                             double kelvin, double titrantFactor) {
+        if (made.isEmpty()) {
+            return Optional.empty();
+        }
+        try {
+            Recipe recipe = recipe(r, master, made, atVolume, List.of(kelvin), titrantFactor, Optional.empty());
+            return analyzer.forecast(recipe).states().get(0);
+        } catch (DocumentException | IllegalArgumentException e) {
+            return Optional.empty();
+        }
+    }
+
+    /**
+     * mL of the recorded titrant stock the recorded weighings need for the meter to read the goal pH: a q.s. of the
+     * master's titrant line at the true strength (recorded × factor), in volume of that stock.
+     */
+    private double titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
+        Made titrant = made.stream().filter(Made::titrant).findFirst().orElse(null);
+        if (titrant == null) {
+            return Double.NaN;
+        }
+        int goalStep = plan.goal.map(BatchRecord.Measurement::step).orElse(Integer.MAX_VALUE);
+        List<Made> before = made.stream().filter(x -> !x.titrant() && x.recorded().step() <= goalStep).toList();
+        double goalPH;
+        double goalKelvin;
+        double atVolume;
+        if (plan.goal.isPresent()) {
+            goalPH = plan.goal.get().value();
+            goalKelvin = plan.goal.get().kelvin().getAsDouble();
+            atVolume = plan.goal.get().atVolume();
+        } else {
+            Formulation.Adjustment adj = master.titrants().get(0).line().adjustTo().orElseThrow();
+            Optional<Formulation.PhTarget> target = master.formulation().pHTarget();
+            if (adj.pH().isEmpty() && target.isEmpty()) {
+                return Double.NaN;
+            }
+            goalPH = adj.pH().isPresent() ? adj.pH().getAsDouble() : target.get().midpoint();
+            goalKelvin = adj.kelvin();
+            atVolume = adj.atVolume();
+        }
+        try {
+            Recipe recipe = recipe(r, master, before, 1, List.of(goalKelvin), factor,
+                    Optional.of(new Goal(titrant.substance(), titrant.molarity() * factor, goalPH, goalKelvin, atVolume)));
+            Analyzer.Forecast f = analyzer.forecast(recipe);
+            for (Map.Entry<Ingredient, OptionalDouble> e : f.doses().entrySet()) {
+                if (e.getKey().substance().name().equals(titrant.substance().name()) && e.getValue().isPresent()) {
+                    return e.getValue().getAsDouble() / (titrant.molarity() * factor) * 1000;
+                }
+            }
+            return Double.NaN;
+        } catch (DocumentException | IllegalArgumentException e) {
+            return Double.NaN;
+        }
+    }
+
+    /** A q.s. to write into the batch's own formulation. */
+    private record Goal(Substance titrant, double molarity, double pH, double kelvin, double atVolume) {
+    }
+
+    /**
+     * The batch (or part of it) as a formulation of its own: every addition in mmol, on the batch's basis (at a
+     * fraction of its volume), at the given temperatures; the titrant either as recorded (times the factor) or, for
+     * a goal, as a q.s.
+     */
+    private Recipe recipe(BatchRecord r, Recipe master, List<Made> made, double atVolume, List<Double> kelvins,
+                          double titrantFactor, Optional<Goal> goal) {
+        List<String> names = new ArrayList<>();
+        for (int i = 0; i < kelvins.size(); i++) {
+            names.add("c" + i);
+        }
+        return recipe(r, master, made, atVolume, names, kelvins, titrantFactor, goal);
+    }
+
+    private Recipe recipe(BatchRecord r, Recipe master, List<Made> made, double atVolume, List<String> names,
+                          List<Double> kelvins, double titrantFactor, Optional<Goal> goal) {
+        Formulation m = master.formulation();
+        StringBuilder c = new StringBuilder();
+        Map<String, Double> moles = new LinkedHashMap<>();
+        for (Made x : made) {
+            moles.merge(x.substance().name(), x.moles() * (x.titrant() ? titrantFactor : 1), Double::sum);
+        }
+        moles.forEach((name, n) -> c.append(c.length() == 0 ? "" : ",").append(String.format(Locale.ROOT,
+                "{\"substance\": %s, \"amount\": \"%.9g mmol\"}", quote(name), n * 1000)));
+        goal.ifPresent(g -> c.append(c.length() == 0 ? "" : ",").append(String.format(Locale.ROOT,
+                "{\"substance\": %s, \"stock\": {\"concentration\": \"%.9g mol/L\"}, \"adjustTo\": {\"pH\": %.6f, "
+                        + "\"temperature\": \"%.4f K\", \"atVolume\": %.6f}}", quote(g.titrant().name()), g.molarity(),
+                g.pH(), g.kelvin(), g.atVolume())));
+        StringBuilder t = new StringBuilder();
+        for (int i = 0; i < kelvins.size(); i++) {
+            t.append(i == 0 ? "" : ",").append(String.format(Locale.ROOT,
+                    "{\"name\": %s, \"temperature\": \"%.4f K\"}", quote(names.get(i)), kelvins.get(i)));
+        }
+        String basis = m.basis().finalVolume()
+                ? String.format(Locale.ROOT, "{\"finalVolume\": \"%.9g L\"}", r.batchSize() * atVolume)
+                : String.format(Locale.ROOT, "{\"waterMass\": \"%.9g kg\"}", r.batchSize());
+        String text = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": " + quote(r.id() + " as made")
+                + ", \"title\": " + quote("batch " + r.batch() + " as made")
+                + m.intendedUse().map(u -> ", \"intendedUse\": " + quote(u)).orElse("") + ", \"basis\": " + basis
+                + ", \"components\": [" + c + "], \"conditions\": [" + t + "]}";
+        Formulation f = reader.read(json.read(r.document().source() + " (as made)", text.getBytes(StandardCharsets.UTF_8)));
+        return resolver.resolve(f);
+    }
+
+    /** The whole batch as recorded, analysed at the master's own conditions, for the report. */
+    private Optional<FormulationAnalysis> asMade(BatchRecord r, Recipe master, List<Made> made) {
+        try {
+            List<Formulation.Condition> cs = master.formulation().conditions().stream().filter(c -> !c.implicit()).toList();
+            Recipe recipe = recipe(r, master, made, 1, cs.stream().map(Formulation.Condition::name).toList(),
+                    cs.stream().map(Formulation.Condition::kelvin).toList(), 1, Optional.empty());
+            return Optional.of(analyzer.analyze(recipe));
+        } catch (DocumentException | IllegalArgumentException e) {
+            return Optional.empty();
+        }
+    }
+
+    private static String quote(String s) {
+        return "\"" + s.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
+    }
+
+    static String molarityText(double molarity) {
+        return String.format(Locale.ROOT, "%.3g mol/L", molarity);
+    }
+}

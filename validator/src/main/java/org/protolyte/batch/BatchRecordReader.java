@@ -1,0 +1,263 @@
+package org.protolyte.batch;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Formulation;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.Location;
+import org.protolyte.document.Problem;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.document.SourceDocument;
+import org.protolyte.units.Dimension;
+import org.protolyte.units.Quantity;
+import org.protolyte.units.UnitException;
+
+import tools.jackson.databind.JsonNode;
+
+/**
+ * Reads a batch record and its master. A master path is resolved against the record's folder and must stay inside
+ * {@code root}, the folder tree being checked (the record's own folder when a single file is checked): an absolute
+ * path, a URL, a path that climbs out of the tree or a link that leads out of it is refused at /master/path.
+ */
+public final class BatchRecordReader {
+
+    public static final String SCHEMA = "batch-record.schema.json";
+
+    private final SchemaCatalog schemas;
+    private final FormulationReader formulations;
+    private final JsonReader json = new JsonReader();
+
+    public BatchRecordReader(SchemaCatalog schemas) {
+        this.schemas = schemas;
+        this.formulations = new FormulationReader(schemas);
+    }
+
+    /**
+     * @param file the record's path, or empty when it was given as bytes (then only an embedded master is possible)
+     * @param root the folder tree a master path must stay in
+     */
+    public BatchRecord read(SourceDocument doc, Optional<Path> file, Optional<Path> root) {
+        List<Problem> problems = new ArrayList<>(schemas.validate(doc, SCHEMA));
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        JsonNode r = doc.root();
+        Formulation master = master(doc, r.get("master"), file, root);
+        Optional<String> revision = r.get("master").has("revision")
+                ? Optional.of(r.get("master").get("revision").asString()) : Optional.empty();
+        if (revision.isPresent() && !revision.equals(master.revision())) {
+            problems.add(doc.problem("/master/revision", "the record follows revision " + revision.get()
+                    + " of " + master.id() + ", but the master is revision " + master.revision().orElse("(none)")));
+        }
+        Quantity size = quantity(doc, r.get("batchSize"), "/batchSize", problems, Dimension.VOLUME, Dimension.MASS);
+        double batchSize = Double.NaN;
+        if (size != null) {
+            boolean volume = size.dimension() == Dimension.VOLUME;
+            if (volume != master.basis().finalVolume()) {
+                problems.add(doc.problem("/batchSize", "the master is on a " + (master.basis().finalVolume()
+                        ? "finalVolume" : "waterMass") + " basis, so the batch size must be a "
+                        + (master.basis().finalVolume() ? "volume" : "water mass")));
+            } else if (!(size.base() > 0)) {
+                problems.add(doc.problem("/batchSize", "the batch size must be greater than zero"));
+            } else {
+                batchSize = volume ? size.base() : size.base() / 1000;     // litres, or kg of water
+            }
+        }
+        List<BatchRecord.Addition> additions = new ArrayList<>();
+        for (int i = 0; i < r.get("additions").size(); i++) {
+            BatchRecord.Addition a = addition(doc, r.get("additions").get(i), "/additions/" + i, problems);
+            if (a != null) {
+                additions.add(a);
+            }
+        }
+        List<BatchRecord.Measurement> measurements = new ArrayList<>();
+        for (int i = 0; i < r.path("measurements").size(); i++) {
+            BatchRecord.Measurement m = measurement(doc, r.get("measurements").get(i), "/measurements/" + i, problems);
+            if (m != null) {
+                measurements.add(m);
+            }
+        }
+        if (!problems.isEmpty()) {
+            throw new DocumentException(problems);
+        }
+        return new BatchRecord(doc, r.get("id").asString(), r.get("batch").asString(), master, revision, batchSize,
+                "/batchSize", additions, measurements);
+    }
+
+    private Formulation master(SourceDocument doc, JsonNode m, Optional<Path> file, Optional<Path> root) {
+        if (m.has("formulation")) {
+            String at = "/master/formulation";
+            Map<String, Location> locations = new LinkedHashMap<>();
+            doc.locations().forEach((p, l) -> {
+                if (p.equals(at) || p.startsWith(at + "/")) {
+                    locations.put(p.substring(at.length()), l);
+                }
+            });
+            SourceDocument embedded = new SourceDocument(doc.source() + "#" + at, m.get("formulation"), locations);
+            try {
+                return formulations.read(embedded);
+            } catch (DocumentException e) {
+                throw new DocumentException(e.problems().stream().map(p -> doc.problem(at + p.pointer(),
+                        "embedded master: " + p.message())).toList());
+            }
+        }
+        String text = m.get("path").asString();
+        Path target = inside(doc, text, file, root);
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(target);
+        } catch (IOException e) {
+            throw new DocumentException(doc.problem("/master/path", "cannot read the master '" + text + "': "
+                    + e.getMessage()));
+        }
+        try {
+            return formulations.read(json.read(target.toString(), bytes));
+        } catch (DocumentException e) {
+            throw new DocumentException(doc.problem("/master/path", "the master '" + text + "' is not a valid "
+                    + "formulation: " + e.problems().get(0)));
+        }
+    }
+
+    /** The master's real path, refused unless it is a relative path that stays inside the folder tree. */
+    static Path inside(SourceDocument doc, String text, Optional<Path> file, Optional<Path> root) {
+        String where = "/master/path";
+        if (text.matches("^[A-Za-z][A-Za-z0-9+.-]*:.*") || text.startsWith("//") || text.startsWith("\\\\")) {
+            throw new DocumentException(doc.problem(where, "the master reference '" + text + "' is a URL or a drive: "
+                    + "a master is a relative path inside the folder tree being checked, and nothing is fetched"));
+        }
+        if (file.isEmpty() || root.isEmpty()) {
+            throw new DocumentException(doc.problem(where, "a master path needs the record's folder; embed the "
+                    + "master as \"formulation\" instead"));
+        }
+        Path relative;
+        try {
+            relative = Path.of(text);
+        } catch (InvalidPathException e) {
+            throw new DocumentException(doc.problem(where, "'" + text + "' is not a path: " + e.getMessage()));
+        }
+        if (relative.isAbsolute() || text.startsWith("/") || text.startsWith("\\")) {
+            throw new DocumentException(doc.problem(where, "the master path '" + text + "' is absolute: it must be "
+                    + "relative to the record, inside the folder tree being checked"));
+        }
+        try {
+            Path tree = root.get().toRealPath();
+            Path resolved = file.get().toRealPath().getParent().resolve(relative).normalize();
+            if (!resolved.startsWith(tree)) {
+                throw outside(doc, text, tree);       // climbs out of the tree by its own '..'
+            }
+            Path real = resolved.toRealPath();       // and a link inside may not lead out either
+            if (!real.startsWith(tree)) {
+                throw outside(doc, text, tree);
+            }
+            if (!Files.isRegularFile(real)) {
+                throw new DocumentException(doc.problem(where, "the master '" + text + "' is not a file"));
+            }
+            return real;
+        } catch (IOException e) {
+            throw new DocumentException(doc.problem(where, "the master '" + text + "' was not found: "
+                    + e.getMessage()));
+        }
+    }
+
+    private static DocumentException outside(SourceDocument doc, String text, Path tree) {
+        return new DocumentException(doc.problem("/master/path", "the master path '" + text + "' leads outside the "
+                + "folder tree being checked (" + tree + "); it is refused: keep the master beside its records"));
+    }
+
+    private static BatchRecord.Addition addition(SourceDocument doc, JsonNode n, String p, List<Problem> problems) {
+        Quantity amount = quantity(doc, n.get("amount"), p + "/amount", problems, Dimension.MASS, Dimension.VOLUME,
+                Dimension.AMOUNT);
+        OptionalDouble molarity = OptionalDouble.empty();
+        if (n.has("stock")) {
+            Quantity c = quantity(doc, n.get("stock").get("concentration"), p + "/stock/concentration", problems,
+                    Dimension.AMOUNT_CONCENTRATION);
+            if (c != null) {
+                molarity = OptionalDouble.of(c.base());
+            }
+        }
+        if (amount != null && amount.dimension() == Dimension.VOLUME && molarity.isEmpty()) {
+            problems.add(doc.problem(p + "/amount", "a volume needs the stock it was taken from (\"stock\": "
+                    + "{\"concentration\": ...})"));
+            return null;
+        }
+        if (amount != null && !(amount.value() > 0)) {
+            problems.add(doc.problem(p + "/amount", "an addition must be greater than zero, not " + amount));
+            return null;
+        }
+        OptionalDouble assay = fraction(doc, n, "assay", p, problems);
+        OptionalDouble water = n.has("waterContent") ? fraction(doc, n, "waterContent", p, problems)
+                : fraction(doc, n, "lossOnDrying", p, problems);
+        if (assay.isPresent() && !(assay.getAsDouble() > 0.5 && assay.getAsDouble() <= 1.02)) {
+            problems.add(doc.problem(p + "/assay", "an assay of " + assay.getAsDouble() * 100 + " % is not plausible "
+                    + "(50–102 %)"));
+        }
+        if (water.isPresent() && !(water.getAsDouble() >= 0 && water.getAsDouble() < 0.9)) {
+            problems.add(doc.problem(p + "/" + (n.has("waterContent") ? "waterContent" : "lossOnDrying"),
+                    "a water content of " + water.getAsDouble() * 100 + " % is not plausible"));
+        }
+        if (amount == null) {
+            return null;
+        }
+        BatchRecord.Weighed weighed = switch (n.path("weighed").asString("as-is")) {
+            case "100 %" -> BatchRecord.Weighed.PURE;
+            case "anhydrous" -> BatchRecord.Weighed.ANHYDROUS;
+            default -> BatchRecord.Weighed.AS_IS;
+        };
+        return new BatchRecord.Addition(n.get("step").asInt(), n.get("substance").asString(), amount, molarity,
+                n.has("lot") ? Optional.of(n.get("lot").asString()) : Optional.empty(), assay,
+                "as-is".equals(n.path("assayBasis").asString("dried")), water, weighed, p);
+    }
+
+    private static BatchRecord.Measurement measurement(SourceDocument doc, JsonNode n, String p,
+                                                       List<Problem> problems) {
+        BatchRecord.Measurement.Kind kind = "pH".equals(n.get("quantity").asString())
+                ? BatchRecord.Measurement.Kind.PH : BatchRecord.Measurement.Kind.OSMOLALITY;
+        OptionalDouble kelvin = OptionalDouble.empty();
+        if (n.has("temperature")) {
+            Quantity t = quantity(doc, n.get("temperature"), p + "/temperature", problems, Dimension.TEMPERATURE);
+            if (t == null) {
+                return null;
+            }
+            kelvin = OptionalDouble.of(t.base());
+        }
+        double value = n.get("value").asDouble();
+        if (kind == BatchRecord.Measurement.Kind.OSMOLALITY && !(value > 0)) {
+            problems.add(doc.problem(p + "/value", "an osmolality must be greater than zero"));
+            return null;
+        }
+        return new BatchRecord.Measurement(n.get("step").asInt(), kind, value, kelvin, n.path("atVolume").asDouble(1),
+                p);
+    }
+
+    private static OptionalDouble fraction(SourceDocument doc, JsonNode n, String field, String p,
+                                           List<Problem> problems) {
+        if (!n.has(field)) {
+            return OptionalDouble.empty();
+        }
+        Quantity q = quantity(doc, n.get(field), p + "/" + field, problems, Dimension.FRACTION);
+        return q == null ? OptionalDouble.empty() : OptionalDouble.of(q.base());
+    }
+
+    private static Quantity quantity(SourceDocument doc, JsonNode n, String pointer, List<Problem> problems,
+                                     Dimension... allowed) {
+        try {
+            Quantity q = n.isString() ? Quantity.parse(n.asString())
+                    : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
+            return q.require("a " + pointer.substring(pointer.lastIndexOf('/') + 1), allowed);
+        } catch (UnitException e) {
+            problems.add(doc.problem(pointer, e.getMessage()));
+            return null;
+        }
+    }
+}

@@ -1,0 +1,139 @@
+package org.protolyte.rules;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+
+import org.protolyte.batch.BatchAnalysis;
+
+/**
+ * When the batch as recorded misses a measurement, the usual mistakes consistent with every measurement: each
+ * candidate's predictions fall within {@code pH} (default 0.1), {@code titrant} and {@code osmolality} (per cent,
+ * defaults 10 and 3) of what was measured. Two or more observations rank the candidates by Σ(difference/limit)²; one
+ * observation cannot, so they are listed unranked with the further measurement that would tell them apart.
+ */
+public final class BatchDiagnosis implements BatchCheckKind {
+
+    @Override
+    public String id() {
+        return "batch-diagnosis";
+    }
+
+    @Override
+    public String summary() {
+        return "where prediction and measurement disagree, the usual mistakes that fit the measurements";
+    }
+
+    private record Fit(BatchAnalysis.Candidate candidate, double score) {
+    }
+
+    @Override
+    public List<Finding> check(BatchAnalysis b, Rule rule) {
+        List<BatchAnalysis.Observation> obs = b.observations();
+        if (b.candidates().isEmpty() || obs.stream().noneMatch(o -> !Double.isNaN(o.predicted())
+                && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted()))) {
+            return List.of();
+        }
+        List<Fit> fits = new ArrayList<>();
+        for (BatchAnalysis.Candidate c : b.candidates().subList(1, b.candidates().size())) {
+            double score = 0;
+            boolean fits_ = true;
+            for (int i = 0; i < obs.size(); i++) {
+                double p = c.predicted()[i];
+                double lim = limit(rule, obs.get(i).kind(), obs.get(i).measured());
+                if (Double.isNaN(p) || Math.abs(p - obs.get(i).measured()) > lim) {
+                    fits_ = false;
+                    break;
+                }
+                double z = (p - obs.get(i).measured()) / lim;
+                score += z * z;
+            }
+            if (fits_) {
+                fits.add(new Fit(c, score));
+            }
+        }
+        long independent = obs.stream().filter(o -> !Double.isNaN(o.predicted())).count();
+        StringBuilder m = new StringBuilder("measured ").append(list(obs, true, null))
+                .append("; the additions as recorded give ").append(list(obs, false, b.candidates().get(0).predicted()));
+        if (fits.isEmpty()) {
+            m.append("; none of the usual mistakes (another form, ten times too much or too little, an addition left "
+                    + "out, a titrant or stock at another strength) fits: check the meter's calibration and "
+                    + "temperature, and the materials used");
+        } else if (independent >= 2) {
+            fits.sort(Comparator.comparingDouble(Fit::score));
+            m.append("; consistent with, best fit first: ");
+            for (int i = 0; i < fits.size(); i++) {
+                m.append(i == 0 ? "" : "; ").append(i + 1).append(". ").append(describe(fits.get(i).candidate(), obs));
+            }
+        } else {
+            m.append(fits.size() == 1 ? "; consistent with " : "; consistent with each of (one observation cannot rank "
+                    + "them): ");
+            for (int i = 0; i < fits.size(); i++) {
+                m.append(i == 0 ? "" : "; ").append(describe(fits.get(i).candidate(), obs));
+            }
+            if (fits.size() > 1) {
+                m.append(tellApart(rule, fits));
+            }
+        }
+        BatchAnalysis.Observation first = obs.stream().filter(o -> !Double.isNaN(o.predicted())
+                && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted())).findFirst().orElseThrow();
+        return List.of(rule.finding(b.record().document(), first.pointer(), m.toString()));
+    }
+
+    private static double limit(Rule rule, BatchAnalysis.Observation.Kind kind, double value) {
+        return switch (kind) {
+            case PH -> rule.number("pH", 0.1);
+            case TITRANT -> rule.number("titrant", 10) / 100 * Math.abs(value);
+            case OSMOLALITY -> rule.number("osmolality", 3) / 100 * Math.abs(value);
+        };
+    }
+
+    private static String list(List<BatchAnalysis.Observation> obs, boolean measured, double[] predicted) {
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < obs.size(); i++) {
+            BatchAnalysis.Observation o = obs.get(i);
+            double x = measured ? o.measured() : predicted[i];
+            parts.add(measured ? o.label() + " " + BatchText.bare(o.kind(), x) : BatchText.bare(o.kind(), x));
+        }
+        return String.join(measured ? " and " : " and ", parts);
+    }
+
+    private static String describe(BatchAnalysis.Candidate c, List<BatchAnalysis.Observation> obs) {
+        return c.cause() + " (gives " + list(obs, false, c.predicted()) + ")";
+    }
+
+    /** The further measurement whose predictions differ most between the candidates, relative to its limit. */
+    private static String tellApart(Rule rule, List<Fit> fits) {
+        int n = fits.get(0).candidate().further().size();
+        int best = -1;
+        double widest = 0;
+        for (int k = 0; k < n; k++) {
+            double lo = Double.POSITIVE_INFINITY;
+            double hi = Double.NEGATIVE_INFINITY;
+            for (Fit f : fits) {
+                var x = f.candidate().further().get(k).predicted();
+                if (x.isPresent()) {
+                    lo = Math.min(lo, x.getAsDouble());
+                    hi = Math.max(hi, x.getAsDouble());
+                }
+            }
+            BatchAnalysis.Further first = fits.get(0).candidate().further().get(k);
+            double spread = (hi - lo) / limit(rule, first.kind(), Math.max(Math.abs(hi), Math.abs(lo)));
+            if (hi > lo && spread > widest) {
+                widest = spread;
+                best = k;
+            }
+        }
+        if (best < 0 || widest <= 1) {
+            return "; no further measurement in reach tells them apart";
+        }
+        List<String> values = new ArrayList<>();
+        for (Fit f : fits) {
+            var x = f.candidate().further().get(best).predicted();
+            values.add(x.isPresent() ? BatchText.bare(f.candidate().further().get(best).kind(), x.getAsDouble()) : "—");
+        }
+        return String.format(Locale.ROOT, "; the %s would tell them apart (%s, in the order above)",
+                fits.get(0).candidate().further().get(best).label(), String.join(", ", values));
+    }
+}
