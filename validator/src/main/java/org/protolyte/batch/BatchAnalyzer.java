@@ -203,8 +203,9 @@ public final class BatchAnalyzer {
     }
 
     private Plan plan(BatchRecord r, Recipe master, List<Made> made) {
-        int titrantStep = made.stream().filter(Made::titrant).mapToInt(x -> x.recorded().step()).min()
-                .orElse(Integer.MAX_VALUE);
+        // a titrant counts as the q.s. only where it was taken from a stated stock (its volume is what is compared)
+        int titrantStep = made.stream().filter(x -> x.titrant() && x.molarity() > 0).mapToInt(x -> x.recorded().step())
+                .min().orElse(Integer.MAX_VALUE);
         boolean qs = !master.titrants().isEmpty() && titrantStep != Integer.MAX_VALUE;
         Optional<BatchRecord.Measurement> goal = qs ? r.measurements().stream()
                 .filter(m -> m.kind() == BatchRecord.Measurement.Kind.PH && m.step() >= titrantStep)
@@ -225,8 +226,9 @@ public final class BatchAnalyzer {
             measured.add(m);
         }
         if (qs) {
-            Made first = made.stream().filter(Made::titrant).findFirst().orElseThrow();
-            double ml = made.stream().filter(x -> x.titrant() && x.substance().name().equals(first.substance().name()))
+            Made first = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElseThrow();
+            double ml = made.stream().filter(x -> x.titrant() && x.molarity() > 0
+                            && x.substance().name().equals(first.substance().name()))
                     .mapToDouble(x -> x.moles() / x.molarity() * 1000).sum();
             obs.add(new BatchAnalysis.Observation(BatchAnalysis.Observation.Kind.TITRANT,
                     "mL of " + first.substance().name() + " " + molarityText(first.molarity()), ml, Double.NaN,
@@ -267,7 +269,7 @@ public final class BatchAnalyzer {
             without.remove(i);
             out.add(new Scenario(x.substance().name() + " left out" + at, without, 1));
         }
-        made.stream().filter(Made::titrant).findFirst().ifPresent(t -> {
+        made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().ifPresent(t -> {
             for (double f : new double[] {10, 2, 0.5, 0.1}) {
                 out.add(new Scenario(String.format(Locale.ROOT, "the %s stock at %s, not the %s recorded",
                         t.substance().name(), molarityText(t.molarity() * f), molarityText(t.molarity())), made, f));
@@ -345,7 +347,7 @@ public final class BatchAnalyzer {
      * master's titrant line at the true strength (recorded × factor), in volume of that stock.
      */
     private double titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
-        Made titrant = made.stream().filter(Made::titrant).findFirst().orElse(null);
+        Made titrant = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElse(null);
         if (titrant == null) {
             return Double.NaN;
         }

@@ -69,7 +69,7 @@ public final class SarifRenderer {
             for (String s : run.skipped()) {
                 ObjectNode n = notes.addObject();
                 n.put("level", "note");
-                n.putObject("message").put("text", "skipped: not a formulation document");
+                n.putObject("message").put("text", "skipped: neither a formulation nor a batch record");
                 n.putArray("locations").addObject().set("physicalLocation", physical(s, -1, Optional.empty()));
             }
         }

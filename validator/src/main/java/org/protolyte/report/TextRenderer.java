@@ -46,7 +46,7 @@ public final class TextRenderer {
     public String footer(List<String> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
         StringBuilder b = new StringBuilder();
         for (String skipped : skippedFiles) {
-            b.append(NL).append("skipped ").append(skipped).append(": not a formulation document");
+            b.append(NL).append("skipped ").append(skipped).append(": neither a formulation nor a batch record");
         }
         if (!skippedFiles.isEmpty()) {
             b.append(NL);
