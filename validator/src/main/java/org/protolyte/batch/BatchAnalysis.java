@@ -50,7 +50,21 @@ public record BatchAnalysis(BatchRecord record, Recipe master, double scale, Lis
      * pH the meter showed after it. {@code predicted} is NaN where the engine cannot stand behind a number.
      */
     public record Observation(Kind kind, String label, double measured, double predicted, String pointer) {
-        public enum Kind { PH, OSMOLALITY, TITRANT }
+        public enum Kind {
+            PH, OSMOLALITY, TITRANT;
+
+            /** A value as a reader sees it: 6.62, 292 mOsm/kg, 4.1 mL; a dash where there is none. */
+            public String text(double x) {
+                if (Double.isNaN(x)) {
+                    return "—";
+                }
+                return switch (this) {
+                    case PH -> String.format(java.util.Locale.ROOT, "%.2f", x);
+                    case TITRANT -> String.format(java.util.Locale.ROOT, "%.3g mL", x);
+                    case OSMOLALITY -> String.format(java.util.Locale.ROOT, "%.0f mOsm/kg", x);
+                };
+            }
+        }
     }
 
     /**

@@ -624,12 +624,16 @@ public final class Equilibrium {
             }
             if (Double.isNaN(complexEffect[c])) {
                 double saved = log10Beta[c];
+                double savedWeight = complexWeight[c];    // the powered path reads the weight, the log path log β
+                double factor = Math.pow(10, EXTRAPOLATION_ERROR);
                 log10Beta[c] = saved + EXTRAPOLATION_ERROR;
+                complexWeight[c] = savedWeight * factor;
                 double moved;
                 try {
                     moved = chargeBalanceRoot(pH);
                 } finally {
                     log10Beta[c] = saved;
+                    complexWeight[c] = savedWeight;
                     molalities(pH);                   // the working molalities of pH again
                 }
                 complexEffect[c] = Math.abs(moved - pH);

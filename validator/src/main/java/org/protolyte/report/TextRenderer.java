@@ -120,21 +120,10 @@ public final class TextRenderer {
         if (!x.observations().isEmpty()) {
             b.append("  measured, and predicted from the additions as recorded:").append(NL);
             for (BatchAnalysis.Observation o : x.observations()) {
-                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", o.label(), observed(o.kind(), o.measured()),
-                        observed(o.kind(), o.predicted())));
+                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", o.label(), o.kind().text(o.measured()),
+                        o.kind().text(o.predicted())));
             }
         }
-    }
-
-    private static String observed(BatchAnalysis.Observation.Kind kind, double v) {
-        if (Double.isNaN(v)) {
-            return "—";
-        }
-        return switch (kind) {
-            case PH -> String.format(Locale.ROOT, "%.2f", v);
-            case TITRANT -> String.format(Locale.ROOT, "%.3g mL", v);
-            case OSMOLALITY -> String.format(Locale.ROOT, "%.0f mOsm/kg", v);
-        };
     }
 
     private void analysis(StringBuilder b, FormulationAnalysis a) {

@@ -94,7 +94,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
         for (int i = 0; i < obs.size(); i++) {
             BatchAnalysis.Observation o = obs.get(i);
             double x = measured ? o.measured() : predicted[i];
-            parts.add(measured ? o.label() + " " + BatchText.bare(o.kind(), x) : BatchText.bare(o.kind(), x));
+            parts.add(measured ? o.label() + " " + o.kind().text(x) : o.kind().text(x));
         }
         return String.join(measured ? " and " : " and ", parts);
     }
@@ -131,7 +131,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
         List<String> values = new ArrayList<>();
         for (Fit f : fits) {
             var x = f.candidate().further().get(best).predicted();
-            values.add(x.isPresent() ? BatchText.bare(f.candidate().further().get(best).kind(), x.getAsDouble()) : "—");
+            values.add(x.isPresent() ? f.candidate().further().get(best).kind().text(x.getAsDouble()) : "—");
         }
         return String.format(Locale.ROOT, "; the %s would tell them apart (%s, in the order above)",
                 fits.get(0).candidate().further().get(best).label(), String.join(", ", values));

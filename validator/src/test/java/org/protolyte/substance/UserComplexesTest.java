@@ -31,11 +31,15 @@ class UserComplexesTest {
     }
 
     private static ConditionResult use(SubstanceLibrary lib) {
+        return at(lib, 25);
+    }
+
+    private static ConditionResult at(SubstanceLibrary lib, double celsius) {
         String doc = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-CX\", \"basis\": {\"finalVolume\": \"1 L\"},"
                 + " \"components\": [{\"substance\": \"citric acid anhydrous\", \"amount\": \"10 mmol/L\"},"
                 + " {\"substance\": \"trisodium citrate dihydrate\", \"amount\": \"10 mmol/L\"},"
                 + " {\"substance\": \"zinc chloride\", \"amount\": \"5 mmol/L\"}],"
-                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"" + celsius + " Cel\"}]}";
         var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", doc.getBytes(StandardCharsets.UTF_8)));
         return new Analyzer(new Equilibrium(Davies.INSTANCE)).analyze(new RecipeResolver(lib).resolve(f)).conditions().get(0);
     }
@@ -53,6 +57,22 @@ class UserComplexesTest {
         assertTrue(with.state().orElseThrow().pH() < without.state().orElseThrow().pH() - 0.05);
         assertEquals(without.state().orElseThrow().particleMolality() - bound,
                 with.state().orElseThrow().particleMolality(), 2e-4, "a complex of two is one particle, less the protons released");
+    }
+
+    /**
+     * A complex that moves the pH, used outside the temperatures of its data: within 25 K of them it is carried by
+     * van 't Hoff with a warning that gives its pH effect; further out the result is void.
+     */
+    @Test
+    void aComplexOutsideItsRangeWarnsNearItAndVoidsTheResultFarFromIt() {
+        SubstanceLibrary lib = library(ZNCIT.replace("\"validFrom\": 0, \"validTo\": 50", "\"validFrom\": 40, \"validTo\": 50"));
+        ConditionResult near = at(lib, 25);
+        assertTrue(near.determinate(), near.caveats().toString());
+        assertTrue(near.caveats().stream().anyMatch(c -> c.code().equals("temperature-out-of-range-complex")),
+                near.caveats().toString());
+        ConditionResult far = at(lib, 5);
+        assertTrue(!far.determinate() && far.caveats().stream().anyMatch(c -> c.code().equals("temperature-out-of-range")),
+                far.caveats().toString());
     }
 
     @Test
