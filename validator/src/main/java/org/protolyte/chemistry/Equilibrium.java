@@ -389,6 +389,7 @@ public final class Equilibrium {
         final boolean[] coupledComponent;  // in at least one complex
         final int[] coupled;               // sized to the number of coupled components
         final double[] gammaComponent;     // γ of each component's free basis at the current I (powered path)
+        final int[] complexIndex;          // the species that are complexes, in order
         final double[] complexWeight;      // complexes, powered: β/γ_s·Π γ_j^ν at the current I, so m = weight·aH^p·Π b^ν
         final boolean powered;             // the same bounds as the linear path: products of powers are safe to try
         final double[] basisSlope;         // d log10 b_j/dpH from the last buffer capacity: predicts b at the next pH
@@ -491,6 +492,7 @@ public final class Equilibrium {
             powered = ok && anyComplex;
             complexWeight = new double[n];
             gammaComponent = new double[components.length];
+            complexIndex = java.util.stream.IntStream.range(0, n).filter(i -> complexParts[i] != null).toArray();
             freeBasis = new double[components.length];
             coupledComponent = new boolean[components.length];
             for (int i = 0; i < n; i++) {
@@ -839,10 +841,7 @@ public final class Equilibrium {
                     int j = unknown[q];
                     residual[q] = b[j] * own[j] - total[j];
                 }
-                for (int c = 0; c < n; c++) {
-                    if (complexParts[c] == null) {
-                        continue;
-                    }
+                for (int c : complexIndex) {
                     for (int x = 0; x < complexParts[c].length; x++) {
                         int row = position[complexParts[c][x]];
                         if (row >= 0) {
@@ -868,10 +867,7 @@ public final class Equilibrium {
                     int j = unknown[q];
                     jacobian[q][q] = b[j] * own[j];
                 }
-                for (int c = 0; c < n; c++) {
-                    if (complexParts[c] == null) {
-                        continue;
-                    }
+                for (int c : complexIndex) {
                     for (int x = 0; x < complexParts[c].length; x++) {
                         int row = position[complexParts[c][x]];
                         if (row < 0) {
@@ -959,10 +955,7 @@ public final class Equilibrium {
          * aH powers hold for this pH, else in log space.
          */
         private void complexesFromBasis(double pH, double[] m, boolean products) {
-            for (int c = 0; c < n; c++) {
-                if (complexParts[c] == null) {
-                    continue;
-                }
+            for (int c : complexIndex) {
                 if (products) {
                     double x = complexWeight[c] * powers[protons[c]];
                     for (int q = 0; q < complexParts[c].length; q++) {
