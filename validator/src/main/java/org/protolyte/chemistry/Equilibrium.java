@@ -395,6 +395,12 @@ public final class Equilibrium {
         final double[] basisSlope;         // d log10 b_j/dpH from the last buffer capacity: predicts b at the next pH
         final double[] innerResidual;      // the coupled mass balances' Newton: residual and Jacobian, reused
         final double[][] innerJacobian;
+        final double[] sumRhs;             // the buffer capacity's implicit differentiation: its arrays, reused
+        final double[] sumCharge;
+        final double[] sumDiagonal;
+        final int[] sumPosition;
+        final double[][] sumBlock;
+        final double[] sumY;
         final double[] total;
         final double kw;
         final double a;
@@ -510,6 +516,12 @@ public final class Equilibrium {
             innerResidual = new double[count];
             basisSlope = new double[components.length];
             innerJacobian = new double[count][count];
+            sumRhs = new double[components.length];
+            sumCharge = new double[components.length];
+            sumDiagonal = new double[components.length];
+            sumPosition = new int[components.length];
+            sumBlock = new double[count][count];
+            sumY = new double[count];
             complexEffect = new double[n];
             java.util.Arrays.fill(complexEffect, Double.NaN);
             log10GammaComponent = new double[components.length];
@@ -989,15 +1001,21 @@ public final class Equilibrium {
             double[] m = work;
             double mH = Math.exp(Thermo.LN10 * (-pH - log10GammaH));
             double mOH = kw * Math.exp(Thermo.LN10 * (pH - log10GammaOH));
-            double[] rhs = new double[nc];            // Σ_s ν_sj p_s m_s
-            double[] chargeWeight = new double[nc];   // Σ_s z_s ν_sj m_s
-            double[] diagonal = new double[nc];       // Σ_s ν_sj² m_s
-            int[] position = new int[nc];             // index in the coupled block, or −1
+            double[] rhs = sumRhs;                    // Σ_s ν_sj p_s m_s
+            double[] chargeWeight = sumCharge;        // Σ_s z_s ν_sj m_s
+            double[] diagonal = sumDiagonal;          // Σ_s ν_sj² m_s
+            java.util.Arrays.fill(rhs, 0);
+            java.util.Arrays.fill(chargeWeight, 0);
+            java.util.Arrays.fill(diagonal, 0);
+            int[] position = sumPosition;             // index in the coupled block, or −1
             int u = 0;
             for (int j = 0; j < nc; j++) {
                 position[j] = coupledComponent[j] && !open(j) && total[j] > 0 ? u++ : -1;
             }
-            double[][] block = new double[u][u];
+            double[][] block = sumBlock;
+            for (int q = 0; q < u; q++) {
+                java.util.Arrays.fill(block[q], 0, u, 0);
+            }
             double direct = mH + mOH;                 // −(∂f/∂pH at fixed b)/ln10
             for (int i = 0; i < n; i++) {
                 direct += charge[i] * protons[i] * m[i];
@@ -1026,7 +1044,7 @@ public final class Equilibrium {
             }
             double[] d = basisSlope;                  // d ln b_j/dpH, divided by ln10
             java.util.Arrays.fill(d, 0);
-            double[] y = new double[u];
+            double[] y = sumY;
             for (int j = 0; j < nc; j++) {
                 if (open(j)) {
                     d[j] = protons[fixedIndex[j]];
