@@ -464,9 +464,8 @@ public final class Analyzer {
             if (p < 0 || p > n) {
                 continue;
             }
-            boolean complex = sp.species().components().size() > 1 || sp.species().components().get(system.basis()) != 1;
             all[p] += sp.molality() * sp.species().components().get(system.basis());
-            if (complex) {
+            if (sp.species().isComplex()) {
                 any = true;
             } else {
                 free[p] += sp.molality();

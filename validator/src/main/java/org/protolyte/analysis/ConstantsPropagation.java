@@ -50,8 +50,7 @@ final class ConstantsPropagation {
             }
         }
         for (Species complex : solution.species()) {       // complexes, ion pairs and esters the recipe forms
-            boolean several = complex.components().size() > 1 || complex.components().values().iterator().next() != 1;
-            if (several && complex.formation().uncertainty() > 0) {
+            if (complex.isComplex() && complex.formation().uncertainty() > 0) {
                 perturbations.add(new Perturbation(complex.name() + " log K", complex.formation().uncertainty(),
                         equilibrium.withLogKShift(complex, complex.formation().uncertainty()), -1, 0));
             }

@@ -81,9 +81,4 @@ public record BatchAnalysis(BatchRecord record, Recipe master, double scale, Lis
     /** A measurement not in the record, predicted: "osmolality" at the end, "pH before adjustment" and so on. */
     public record Further(Observation.Kind kind, String label, OptionalDouble predicted) {
     }
-
-    /** The prediction for the batch as recorded, per further measurement, to set beside the candidates'. */
-    public List<Further> recordedFurther() {
-        return candidates.isEmpty() ? List.of() : candidates.get(0).further();
-    }
 }

@@ -277,9 +277,6 @@ public final class Equilibrium {
                 if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
                     return null;
                 }
-                if (p.complexes) {
-                    p.predictBases(nextPH - pH);
-                }
                 // the last step's error is a few per cent of the step before (the I coupling converges linearly), so a
                 // step of 1e-8 leaves under 1e-9: enough for a study's q.s. (met to 1e-7) and its spread (1e-3 and up)
                 boolean settled = Math.abs(nextPH - pH) < 1e-8
@@ -392,7 +389,7 @@ public final class Equilibrium {
         final int[] complexIndex;          // the species that are complexes, in order
         final double[] complexWeight;      // complexes, powered: β/γ_s·Π γ_j^ν at the current I, so m = weight·aH^p·Π b^ν
         final boolean powered;             // the same bounds as the linear path: products of powers are safe to try
-        final double[] basisSlope;         // d log10 b_j/dpH from the last buffer capacity: predicts b at the next pH
+        final double[] basisSlope;         // d log10 b_j/dpH from the last buffer capacity (for dI/dpH)
         final double[] innerResidual;      // the coupled mass balances' Newton: residual and Jacobian, reused
         final double[][] innerJacobian;
         final double[] sumRhs;             // the buffer capacity's implicit differentiation: its arrays, reused
@@ -447,7 +444,7 @@ public final class Equilibrium {
             boolean anyComplex = false;
             for (int i = 0; i < n; i++) {
                 Map<Component, Integer> parts = sp[i].components();
-                if (parts.size() > 1 || parts.values().iterator().next() != 1) {
+                if (sp[i].isComplex()) {
                     anyComplex = true;
                     List<Component> ordered = new ArrayList<>(parts.keySet());
                     // shown with its most negative part (the ligand): CaCit- under citrate
@@ -1068,18 +1065,6 @@ public final class Equilibrium {
                 sum -= chargeWeight[k] * d[k];
             }
             return sum;
-        }
-
-        /**
-         * Moves the free bases along their slopes from the last buffer capacity to a pH {@code deltaPH} away, so the
-         * next mass-balance solve starts within the square of the step (a first-order predictor).
-         */
-        void predictBases(double deltaPH) {
-            for (int j = 0; j < components.length; j++) {
-                if (coupledComponent[j] && !open(j) && total[j] > 0 && freeBasis[j] > 0) {
-                    freeBasis[j] *= Math.exp(Thermo.LN10 * basisSlope[j] * deltaPH);
-                }
-            }
         }
 
         /** The same in log space, each component scaled by its largest weight: safe at any pH. */

@@ -32,6 +32,11 @@ public record Species(String name, int charge, Map<Component, Integer> component
         return 31 * name.hashCode() + charge;
     }
 
+    /** A species of several components, or of one component more than once: a complex, ion pair or ester. */
+    public boolean isComplex() {
+        return components.size() > 1 || components.values().iterator().next() != 1;
+    }
+
     public static Species free(Component c) {
         return new Species(c.name(), c.charge(), Map.of(c, 1), 0, FormationConstant.UNITY);
     }

@@ -6,17 +6,11 @@ import java.util.TreeMap;
 
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.EquilibriumState;
-import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.SpeciesAmount;
 
 /** Complexes in a solved equilibrium: which species are complexes, and how much of each component they bind. */
 final class Complexes {
     private Complexes() {
-    }
-
-    /** A species of several components, or of one component more than once (an ester of two polyols counts). */
-    static boolean isComplex(Species s) {
-        return s.components().size() > 1 || s.components().values().iterator().next() != 1;
     }
 
     /** Each component's total molality: Σ over species of its count times the species' molality. */
@@ -28,9 +22,8 @@ final class Complexes {
         return t;
     }
 
-    /** The share of each of its components' totals that one complex holds, components by name. */
-    static Map<Component, Double> shares(EquilibriumState s, SpeciesAmount complex) {
-        Map<Component, Double> totals = totals(s);
+    /** The share of each of its components' totals (from {@link #totals}) that one complex holds, by name. */
+    static Map<Component, Double> shares(Map<Component, Double> totals, SpeciesAmount complex) {
         Map<Component, Double> out = new TreeMap<>(java.util.Comparator.comparing(Component::name));
         complex.species().components().forEach((c, nu) -> out.put(c, nu * complex.molality() / totals.get(c)));
         return out;

@@ -290,14 +290,15 @@ public final class JsonRenderer {
                 x.put("fraction", Numbers.significant(sp.fractionOfComponent(), 4));
             }
             ArrayNode complexes = o.putArray("complexes");
+            var totals = Complexes.totals(s);
             for (SpeciesAmount sp : s.species()) {
-                if (Complexes.isComplex(sp.species())) {
+                if (sp.species().isComplex()) {
                     ObjectNode x = complexes.addObject();
                     x.put("name", sp.species().name());
                     x.put("charge", sp.species().charge());
                     x.put("molality", Numbers.significant(sp.molality(), 4));
                     ObjectNode bound = x.putObject("share");
-                    Complexes.shares(s, sp).forEach((k, v) -> bound.put(k.name(), Numbers.significant(v, 4)));
+                    Complexes.shares(totals, sp).forEach((k, v) -> bound.put(k.name(), Numbers.significant(v, 4)));
                 }
             }
             ArrayNode solids = o.putArray("solids");

@@ -221,11 +221,11 @@ public final class TextRenderer {
         List<String> parts = new ArrayList<>();
         bySystem.forEach((k, v) -> parts.add(k + ": " + String.join(", ", v)));
         Map<Component, Double> totals = Complexes.totals(s);
+        java.util.Set<Component> bound = new java.util.HashSet<>();
+        s.species().stream().filter(x -> x.species().isComplex()).forEach(x -> bound.addAll(x.species().components().keySet()));
         for (SpeciesAmount sp : s.species()) {      // a metal or polyol that complexes bind: its free share
             Component c = sp.component();
-            boolean bound = s.species().stream().anyMatch(x -> Complexes.isComplex(x.species())
-                    && x.species().components().containsKey(c));
-            if (!systems.isSystem(c) && bound && sp.species().components().size() == 1) {
+            if (!systems.isSystem(c) && bound.contains(c) && !sp.species().isComplex()) {
                 parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", c.name(), 100 * sp.molality() / totals.get(c)));
             }
         }

@@ -34,31 +34,30 @@ public final class SaturationIndex implements CheckKind {
     public List<Finding> check(FormulationAnalysis a, Rule rule) {
         double limit = rule.number("maxIndex", 0);
         Optional<List<String>> only = rule.texts("phases");
-        Map<String, List<String>> byPhase = new LinkedHashMap<>();
-        Map<String, ConditionResult> worst = new LinkedHashMap<>();       // the condition of the highest index, if over
-        Map<String, Double> highest = new LinkedHashMap<>();
+        Map<SolidPhase, List<String>> byPhase = new LinkedHashMap<>();
+        Map<SolidPhase, ConditionResult> worst = new LinkedHashMap<>();   // the condition of the highest index, if over
+        Map<SolidPhase, Double> highest = new LinkedHashMap<>();
         for (ConditionResult c : a.conditions()) {
             if (!c.determinate()) {
                 continue;
             }
             for (SolidPhase.Saturation s : c.saturation()) {
-                String name = s.phase().name();
-                if (only.isPresent() && !only.get().contains(name)) {
+                SolidPhase phase = s.phase();
+                if (only.isPresent() && !only.get().contains(phase.name())) {
                     continue;
                 }
-                byPhase.computeIfAbsent(name, k -> new ArrayList<>()).add(String.format(Locale.ROOT,
+                byPhase.computeIfAbsent(phase, k -> new ArrayList<>()).add(String.format(Locale.ROOT,
                         "%s (%.0f °C) %+.2f%s", c.condition().name(), Conditions.celsius(c), s.index(),
                         s.inRange() ? "" : ", Ksp extrapolated beyond its data"));
-                if (s.index() > limit && s.index() > highest.getOrDefault(name, Double.NEGATIVE_INFINITY)) {
-                    highest.put(name, s.index());
-                    worst.put(name, c);
+                if (s.index() > limit && s.index() > highest.getOrDefault(phase, Double.NEGATIVE_INFINITY)) {
+                    highest.put(phase, s.index());
+                    worst.put(phase, c);
                 }
             }
         }
         List<Finding> out = new ArrayList<>();
-        for (Map.Entry<String, ConditionResult> e : worst.entrySet()) {
-            SolidPhase phase = a.recipe().library().phases().stream().filter(p -> p.name().equals(e.getKey()))
-                    .findFirst().orElseThrow();
+        for (Map.Entry<SolidPhase, ConditionResult> e : worst.entrySet()) {
+            SolidPhase phase = e.getKey();
             out.add(rule.finding(a.recipe().formulation(), Conditions.pointer(e.getValue()), String.format(Locale.ROOT,
                     "%s (%s) can precipitate: its saturation index exceeds %.2f, most at %s (%.0f °C); by condition: %s",
                     phase.name(), phase.formula(), limit, e.getValue().condition().name(),
