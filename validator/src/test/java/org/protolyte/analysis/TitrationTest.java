@@ -127,4 +127,31 @@ class TitrationTest {
         assertTrue(target.condition().implicit());
         assertEquals(7.8, target.state().orElseThrow().pH(), 1e-6);
     }
+
+    /**
+     * The q.s. a user weighs, pinned to a published composition. NaH2PO4 + NaOH is Na2HPO4 (stoichiometry), so the
+     * sodium hydroxide that brings KH2PO4 + NaH2PO4 to a primary standard's pH must be the standard's Na2HPO4:
+     * KH2PO4 0.008695 + Na2HPO4 0.03043 mol/kg reads 7.413 at 25 °C, and KH2PO4 0.025 + Na2HPO4 0.025 mol/kg reads
+     * 6.865 (Buck et al., Pure Appl. Chem. 74 (2002) 2169; Bates et al., J. Res. NBS 65A (1961)). The tolerance is
+     * the engine's ±0.02 pH agreement with the standards (PrimaryStandardsTest) times β of the buffer at that pH.
+     */
+    @org.junit.jupiter.params.ParameterizedTest(name = "KH2PO4 {0} + NaH2PO4 {1} mol/kg to pH {2}")
+    @org.junit.jupiter.params.provider.CsvSource({"0.008695, 0.03043, 7.413", "0.025, 0.025, 6.865"})
+    void sodiumHydroxideQuantumSatisIsTheStandardsHydrogenPhosphate(double kh2po4, double nah2po4, double pH) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-QS-STD\","
+                + " \"basis\": {\"waterMass\": \"1 kg\"}, \"components\": ["
+                + "{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": {\"value\": " + kh2po4
+                + ", \"unit\": \"mol/kg\"}},"
+                + "{\"substance\": \"sodium dihydrogen phosphate anhydrous\", \"amount\": {\"value\": " + nah2po4
+                + ", \"unit\": \"mol/kg\"}},"
+                + "{\"substance\": \"sodium hydroxide\", \"adjustTo\": {\"pH\": " + pH
+                + ", \"temperature\": \"25 Cel\"}}],"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        DocumentReport r = PROTOLYTE.check("test", json.getBytes(StandardCharsets.UTF_8));
+        assertEquals(Status.PASS, r.status(), () -> r.findings() + " " + r.diagnostics());
+        var use = r.analysis().orElseThrow().conditions().get(0);
+        double beta = use.bufferCapacityPerLitre();   // ≈ per kg of water at 0.04 mol/kg
+        TitrantResult t = r.analysis().orElseThrow().titrants().get(0);
+        assertEquals(nah2po4, t.moles(), 0.02 * beta, "mol of NaOH per kg of water");
+    }
 }
