@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
@@ -35,11 +36,13 @@ import org.protolyte.document.JsonReader;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
 import org.protolyte.document.SourceDocument;
+import org.protolyte.document.Suggestions;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.report.DocumentReport;
 import org.protolyte.report.RunReport;
 import org.protolyte.report.RunSummary;
+import org.protolyte.report.Skipped;
 import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.RuleBook;
@@ -47,6 +50,8 @@ import org.protolyte.rules.Finding;
 import org.protolyte.rules.Severity;
 import org.protolyte.rules.Waivers;
 import org.protolyte.substance.SubstanceLibrary;
+
+import tools.jackson.databind.JsonNode;
 
 /**
  * The one flow: read and validate → resolve → analyse every condition → check → report. Each input
@@ -56,6 +61,40 @@ public final class Protolyte {
 
     /** The document type of a batch record. */
     public static final String BATCH_RECORD = "batch-record";
+
+    /** The kinds of document that are checked. */
+    private static final List<String> KINDS = List.of("formulation", BATCH_RECORD);
+
+    /** The companions a folder may hold beside its documents, as their "document" field names them. */
+    private enum Companion {
+        SUBSTANCE_LIBRARY("substance-library", "a substance library", "--substances"),
+        RULE_PACK("rule-pack", "a rule pack", "--rules"),
+        WAIVERS("waivers", "a waiver file", "--waivers");
+
+        final String kind;
+        final String what;
+        final String option;
+
+        Companion(String kind, String what, String option) {
+            this.kind = kind;
+            this.what = what;
+            this.option = option;
+        }
+
+        static Optional<Companion> of(String kind) {
+            return Arrays.stream(values()).filter(c -> c.kind.equals(kind)).findFirst();
+        }
+
+        static List<String> kinds() {
+            return Arrays.stream(values()).map(c -> c.kind).toList();
+        }
+    }
+
+    /** The file at a folder's root whose glob lines leave files out of the check. */
+    public static final String IGNORE_FILE = ".protolyte-ignore";
+
+    /** The largest document read; a larger file is refused before it is read. */
+    public static final long MAX_DOCUMENT_BYTES = 16L * 1024 * 1024;
 
     /** Rule id of the findings that make a document invalid. */
     public static final String INVALID_DOCUMENT = "invalid-document";
@@ -115,12 +154,30 @@ public final class Protolyte {
     }
 
     /**
-     * A file to check; {@code foundInFolder} when a folder was named, so that non-documents are skipped. {@code root}
-     * is the folder tree a batch record's master must stay in: the folder named, or the file's own folder.
+     * One input of a run: a file named or found in a folder ({@code foundInFolder}: companions are then skipped),
+     * bytes read already (standard input), or a path found in a folder that could not be read ({@code unreadable}
+     * holds why). {@code root} is the folder tree a batch record's master must stay in: the folder named, or the
+     * file's own folder.
      */
-    public record Input(Path path, boolean foundInFolder, Path root) {
+    public record Input(String source, Optional<Path> path, boolean foundInFolder, Path root,
+                        Optional<byte[]> content, Optional<String> unreadable) {
+        public Input(Path path, boolean foundInFolder, Path root) {
+            this(path.toString(), Optional.of(path), foundInFolder, root, Optional.empty(), Optional.empty());
+        }
+
         public Input(Path path, boolean foundInFolder) {
             this(path, foundInFolder, parentOf(path));
+        }
+
+        /** Bytes without a folder (standard input): a batch record among them must embed its master. */
+        public static Input ofBytes(String source, byte[] content) {
+            return new Input(source, Optional.empty(), false, Path.of("").toAbsolutePath(), Optional.of(content),
+                    Optional.empty());
+        }
+
+        /** A path the folder walk could not read: reported invalid, with the reason, while the others go on. */
+        public static Input unreadable(Path path, Path root, String reason) {
+            return new Input(path.toString(), Optional.of(path), true, root, Optional.empty(), Optional.of(reason));
         }
 
         private static Path parentOf(Path p) {
@@ -131,6 +188,13 @@ public final class Protolyte {
 
     public RunReport check(List<Path> files) {
         return checkInputs(files.stream().map(p -> new Input(p, false)).toList());
+    }
+
+    /** What became of one input: its report, or the rule that passed it over. */
+    private record Outcome(Optional<DocumentReport> report, Optional<Skipped> skipped) {
+        static Outcome of(DocumentReport r) {
+            return new Outcome(Optional.of(r), Optional.empty());
+        }
     }
 
     /**
@@ -144,27 +208,21 @@ public final class Protolyte {
             t.setDaemon(true);
             return t;
         });
-        record InFlight(String source, Future<Optional<DocumentReport>> report) {
-        }
         try {
             // a window of documents in flight, handed on in input order: parallel, yet the report reads as a list
-            Deque<InFlight> window = new ArrayDeque<>();
+            Deque<Future<Outcome>> window = new ArrayDeque<>();
             int next = 0;
             while (next < inputs.size() || !window.isEmpty()) {
                 while (next < inputs.size() && window.size() < 4 * threads) {
                     Input in = inputs.get(next++);
-                    window.add(new InFlight(in.path().toString(), pool.submit(() -> in.foundInFolder()
-                            && !isDocument(in.path()) ? Optional.<DocumentReport>empty()
-                            : Optional.of(check(in.path(), in.root())))));
+                    window.add(pool.submit(() -> check(in)));
                 }
-                InFlight head = window.poll();
-                Optional<DocumentReport> r = join(head.report());
-                if (r.isEmpty()) {
-                    summary.skip(head.source());
-                } else {
-                    summary.add(r.get());
-                    each.accept(r.get());
-                }
+                Outcome o = join(window.poll());
+                o.skipped().ifPresent(summary::skip);
+                o.report().ifPresent(r -> {
+                    summary.add(r);
+                    each.accept(r);
+                });
             }
             return summary;
         } finally {
@@ -172,7 +230,7 @@ public final class Protolyte {
         }
     }
 
-    private static Optional<DocumentReport> join(Future<Optional<DocumentReport>> f) {
+    private static Outcome join(Future<Outcome> f) {
         try {
             return f.get();
         } catch (InterruptedException e) {
@@ -201,47 +259,93 @@ public final class Protolyte {
                 summary.skipped());
     }
 
-    /**
-     * A file found in a folder is checked when its top-level "document" says formulation or batch-record; one that
-     * cannot be read as JSON is checked too, so that it is reported invalid rather than passed over.
-     */
-    private boolean isDocument(Path p) {
+    /** Reads the input once (its size checked first), then checks it or passes it over as a companion. */
+    private Outcome check(Input in) {
+        if (in.unreadable().isPresent()) {
+            return Outcome.of(invalid(in.source(), Optional.empty(), Optional.empty(), List.of(new Problem("",
+                    Optional.empty(), "cannot be read: " + in.unreadable().get()))));
+        }
+        byte[] content;
+        if (in.content().isPresent()) {
+            content = in.content().get();
+        } else {
+            Path file = in.path().orElseThrow();
+            Optional<String> problem = unreadable(file);
+            if (problem.isPresent()) {
+                return Outcome.of(invalid(in.source(), Optional.empty(), Optional.empty(), List.of(new Problem("",
+                        Optional.empty(), problem.get()))));
+            }
+            try {
+                content = readBounded(file);
+            } catch (IOException e) {
+                return Outcome.of(invalid(in.source(), Optional.empty(), Optional.empty(), List.of(new Problem("",
+                        Optional.empty(), "cannot read the file: " + e.getMessage()))));
+            }
+        }
+        return check(in.source(), content, in.path(), in.path().map(p -> in.root()), in.foundInFolder());
+    }
+
+    /** Why a path cannot be read as a document, before any byte of it is read. */
+    private static Optional<String> unreadable(Path file) {
+        if (!Files.exists(file)) {
+            return Optional.of(Files.isSymbolicLink(file) ? "file not found: a link to a file that does not exist"
+                    : "file not found");
+        }
+        if (Files.isDirectory(file)) {
+            return Optional.of("is a folder, not a file");
+        }
+        if (!Files.isRegularFile(file)) {
+            return Optional.of("not a regular file (a device, a pipe or a socket)");
+        }
         try {
-            SourceDocument doc = json.read(p.toString(), Files.readAllBytes(p));
-            String kind = doc.root().path("document").asString("");
-            return "formulation".equals(kind) || BATCH_RECORD.equals(kind);
-        } catch (DocumentException | IOException e) {
-            return true;
+            long size = Files.size(file);
+            if (size > MAX_DOCUMENT_BYTES) {
+                return Optional.of(tooLarge(size));
+            }
+        } catch (IOException e) {
+            return Optional.of("cannot read the file: " + e.getMessage());
+        }
+        return Optional.empty();
+    }
+
+    private static String tooLarge(long size) {
+        return "file is larger than " + MAX_DOCUMENT_BYTES / (1024 * 1024) + " MiB (" + size + " bytes); it is not read";
+    }
+
+    /**
+     * The bytes of a file or stream, never more than {@link #MAX_DOCUMENT_BYTES}: a file that grows after its size
+     * was checked, or a stream without a size, is cut off there and refused.
+     */
+    public static byte[] readBounded(InputStream in) throws IOException {
+        byte[] b = in.readNBytes((int) MAX_DOCUMENT_BYTES + 1);
+        if (b.length > MAX_DOCUMENT_BYTES) {
+            throw new IOException(tooLarge(b.length).replace(" (" + b.length + " bytes)", ""));
+        }
+        return b;
+    }
+
+    private static byte[] readBounded(Path file) throws IOException {
+        try (InputStream in = Files.newInputStream(file)) {
+            return readBounded(in);
         }
     }
 
     public DocumentReport check(Path file) {
-        return check(file, new Input(file, false).root());
+        return check(new Input(file, false)).report().orElseThrow();
     }
 
-    /** Checks one file; a batch record's master path must stay inside {@code root}. */
+    /** Checks one file named on its own; a batch record's master path must stay inside {@code root}. */
     public DocumentReport check(Path file, Path root) {
-        String source = file.toString();
-        byte[] content;
-        try {
-            if (!Files.isRegularFile(file)) {
-                return invalid(source, Optional.empty(), Optional.empty(), List.of(new Problem("", Optional.empty(),
-                        Files.exists(file) ? "not a regular file" : "file not found")));
-            }
-            content = Files.readAllBytes(file);
-        } catch (IOException e) {
-            return invalid(source, Optional.empty(), Optional.empty(), List.of(new Problem("", Optional.empty(),
-                    "cannot read the file: " + e.getMessage())));
-        }
-        return check(source, content, Optional.of(file), Optional.of(root));
+        return check(new Input(file, false, root)).report().orElseThrow();
     }
 
     /** Checks bytes that have no folder: a batch record among them must embed its master. */
     public DocumentReport check(String source, byte[] content) {
-        return check(source, content, Optional.empty(), Optional.empty());
+        return check(Input.ofBytes(source, content)).report().orElseThrow();
     }
 
-    private DocumentReport check(String source, byte[] content, Optional<Path> file, Optional<Path> root) {
+    private Outcome check(String source, byte[] content, Optional<Path> file, Optional<Path> root,
+                          boolean foundInFolder) {
         Optional<String> id = Optional.empty();
         String sha256 = Digests.sha256(content);
         try {
@@ -249,36 +353,81 @@ public final class Protolyte {
             if (doc.root().path("id").isString()) {
                 id = Optional.of(doc.root().path("id").asString());
             }
-            if (BATCH_RECORD.equals(doc.root().path("document").asString(""))) {
-                return batch(doc, sha256, file, root);
+            String kind = kind(doc, foundInFolder);
+            Optional<Companion> companion = Companion.of(kind);
+            if (companion.isPresent()) {
+                return new Outcome(Optional.empty(), Optional.of(new Skipped(source, companion.get().what
+                        + " (\"document\": \"" + kind + "\"), a companion of the documents")));
             }
-            Formulation f;
-            try {
-                f = reader.read(doc);
-            } catch (DocumentException e) {
-                throw new DocumentException(withNameProblems(doc, e.problems()));
+            if (BATCH_RECORD.equals(kind)) {
+                return Outcome.of(batch(doc, sha256, file, root));
             }
-            Recipe recipe = resolver.resolve(f);
-            FormulationAnalysis analysis = analyzer.analyze(recipe);
-            if (robustness.isPresent()) {
-                analysis = analysis.withRobustness(new Robustness(new Equilibrium(Davies.INSTANCE))
-                        .run(recipe, robustness.get(), done -> { }));
-            }
-            Checker.Verdict verdict;
-            try {
-                verdict = checker.check(analysis);
-            } catch (DocumentException e) {
-                throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
-            }
-            boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
-            List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
-            return DocumentReport.of(analysis, sha256, new Checker.Verdict(verdict.packs(), findings), failOn);
+            return Outcome.of(formulation(doc, sha256));
         } catch (DocumentException e) {
-            return invalid(source, Optional.of(sha256), id, e.problems());
+            return Outcome.of(invalid(source, Optional.of(sha256), id, e.problems()));
         } catch (RuntimeException e) {
-            return DocumentReport.fault(source, Optional.of(sha256), "internal fault while checking this document ("
-                    + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it");
+            return Outcome.of(DocumentReport.fault(source, Optional.of(sha256), "internal fault while checking this "
+                    + "document (" + e.getClass().getSimpleName() + ": " + e.getMessage() + "); please report it"));
         }
+    }
+
+    /**
+     * What the document says it is. A formulation or a batch record is checked; in a folder a known companion
+     * (library, rule pack, waiver file) is passed over; anything else is refused, so that a typo never skips the
+     * gate.
+     */
+    private static String kind(SourceDocument doc, boolean foundInFolder) {
+        JsonNode d = doc.root().path("document");
+        if (!doc.root().isObject()) {
+            throw new DocumentException(doc.problem("", "not a Protolyte document: the top level is not an object"));
+        }
+        if (d.isMissingNode()) {
+            throw new DocumentException(doc.problem("", "no \"document\" field: a document says what it is, "
+                    + "\"document\": \"formulation\" or \"" + BATCH_RECORD + "\""
+                    + (foundInFolder ? "; a file in a folder that is neither is refused unless it is a companion (\""
+                    + String.join("\", \"", Companion.kinds()) + "\") or is excluded (" + IGNORE_FILE
+                    + " at the folder's root, or --exclude)" : "")));
+        }
+        String kind = d.isString() ? d.asString() : d.toString();
+        Optional<Companion> companion = Companion.of(kind);
+        if (KINDS.contains(kind) || foundInFolder && companion.isPresent()) {
+            return kind;
+        }
+        if (companion.isPresent()) {
+            throw new DocumentException(doc.problem("/document", "this is " + companion.get().what
+                    + ", not a formulation or a batch record: give it with " + companion.get().option));
+        }
+        List<String> known = new ArrayList<>(KINDS);
+        known.addAll(Companion.kinds());
+        String near = kind.length() > 64 ? "" : Suggestions.nearest(kind, known).map(n -> "; did you mean \"" + n
+                + "\"?").orElse("");
+        throw new DocumentException(doc.problem("/document", "\"document\": " + (d.isString() ? "\"" + kind + "\""
+                : kind) + " is not a kind of document Protolyte knows (\"" + String.join("\", \"", known) + "\")"
+                + near));
+    }
+
+    private DocumentReport formulation(SourceDocument doc, String sha256) {
+        Formulation f;
+        try {
+            f = reader.read(doc);
+        } catch (DocumentException e) {
+            throw new DocumentException(withNameProblems(doc, e.problems()));
+        }
+        Recipe recipe = resolver.resolve(f);
+        FormulationAnalysis analysis = analyzer.analyze(recipe);
+        if (robustness.isPresent()) {
+            analysis = analysis.withRobustness(new Robustness(new Equilibrium(Davies.INSTANCE))
+                    .run(recipe, robustness.get(), done -> { }));
+        }
+        Checker.Verdict verdict;
+        try {
+            verdict = checker.check(analysis);
+        } catch (DocumentException e) {
+            throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
+        }
+        boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
+        List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
+        return DocumentReport.of(analysis, sha256, new Checker.Verdict(verdict.packs(), findings), failOn);
     }
 
     /** A batch record: read with its master, compared, recomputed, judged by the batch rules. */

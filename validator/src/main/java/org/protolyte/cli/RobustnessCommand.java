@@ -2,9 +2,11 @@ package org.protolyte.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.protolyte.analysis.Robustness;
@@ -70,13 +72,11 @@ public final class RobustnessCommand implements Callable<Integer> {
             return 2;
         }
         Recipe recipe;
+        Optional<ReportFile> target;
         try {
-            if (!Files.isRegularFile(file)) {
-                err.println("protolyte: " + file + ": file not found");
-                return 2;
-            }
-            Formulation f = new FormulationReader(setup.schemas).read(new JsonReader().read(file.toString(),
-                    Files.readAllBytes(file)));
+            byte[] content = Setup.read(file, "formulation");
+            target = output == null ? Optional.empty() : Optional.of(ReportFile.of(output, inputs()));
+            Formulation f = new FormulationReader(setup.schemas).read(new JsonReader().read(file.toString(), content));
             recipe = new RecipeResolver(setup.library()).resolve(f);
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
@@ -98,13 +98,26 @@ public final class RobustnessCommand implements Callable<Integer> {
         }
         RobustnessRenderer r = new RobustnessRenderer();
         String text = format.equals("json") ? r.json(file.toString(), recipe, result) : r.text(file.toString(), recipe, result);
-        if (output == null) {
+        if (target.isEmpty()) {
             spec.commandLine().getOut().print(text);
             spec.commandLine().getOut().flush();
-        } else {
-            CheckCommand.writeAtomically(output, text);
+            return 0;
         }
-        return 0;
+        try {
+            return target.get().write(out -> {
+                out.write(text);
+                return 0;
+            });
+        } catch (IOException e) {
+            err.println("protolyte: cannot write the report to " + output + ": " + e.getMessage());
+            return 2;
+        }
+    }
+
+    private List<Path> inputs() {
+        List<Path> all = new ArrayList<>(setup.files());
+        all.add(file);
+        return all;
     }
 
 }

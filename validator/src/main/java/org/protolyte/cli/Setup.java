@@ -94,6 +94,9 @@ final class Setup {
 
     private static void load(RuleBook book, String nameOrFile) throws UsageException, IOException {
         Path p = Path.of(nameOrFile);
+        if (Files.isDirectory(p)) {
+            throw new UsageException("rule pack " + p + ": is a folder, not a file");
+        }
         if (!Files.exists(p)) {
             throw new UsageException("unknown rule pack '" + nameOrFile + "': not a shipped pack ("
                     + String.join(", ", book.packs().keySet()) + ") and no such file");
@@ -105,7 +108,18 @@ final class Setup {
         }
     }
 
-    private static byte[] read(Path p, String what) throws UsageException, IOException {
+    /** The files these options name, so that a report is never written over one of them. */
+    List<Path> files() {
+        List<Path> out = new ArrayList<>(substances);
+        rules.stream().map(r -> r.startsWith("+") ? r.substring(1) : r).map(Path::of).filter(Files::exists)
+                .forEach(out::add);
+        return out;
+    }
+
+    static byte[] read(Path p, String what) throws UsageException, IOException {
+        if (Files.isDirectory(p)) {
+            throw new UsageException(what + " " + p + ": is a folder, not a file");
+        }
         if (!Files.isRegularFile(p)) {
             throw new UsageException(what + " " + p + ": file not found");
         }

@@ -59,7 +59,7 @@ public final class JsonRenderer {
         public void end(RunSummary run) throws java.io.IOException {
             ObjectNode tail = mapper.createObjectNode();
             ArrayNode skipped = tail.putArray("skipped");
-            run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "neither a formulation nor a batch record"));
+            run.skipped().forEach(x -> skipped.addObject().put("source", x.source()).put("reason", x.reason()));
             ObjectNode summary = tail.putObject("summary");
             summary.put("documents", run.documents());
             for (Status s : Status.values()) {
@@ -96,7 +96,7 @@ public final class JsonRenderer {
             reports.add(document(r));
         }
         ArrayNode skipped = root.putArray("skipped");
-        run.skipped().forEach(x -> skipped.addObject().put("source", x).put("reason", "neither a formulation nor a batch record"));
+        run.skipped().forEach(x -> skipped.addObject().put("source", x.source()).put("reason", x.reason()));
         ObjectNode summary = root.putObject("summary");
         summary.put("documents", run.reports().size());
         for (Status s : Status.values()) {

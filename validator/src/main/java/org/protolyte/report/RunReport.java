@@ -11,7 +11,7 @@ import java.util.Map;
  * files and their SHA-256 (each document records its own hash and its packs'), and when.
  */
 public record RunReport(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
-                        List<DocumentReport> reports, List<String> skipped) {
+                        List<DocumentReport> reports, List<Skipped> skipped) {
 
     public static final String CAUTION = "Protolyte is a decision aid. Release decisions rest on measured values, "
             + "the applicable pharmacopoeia, local SOPs and qualified QA review.";

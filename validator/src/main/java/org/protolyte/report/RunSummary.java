@@ -15,7 +15,7 @@ public final class RunSummary {
     private final Instant generatedAt;
     private final Map<String, String> libraryFiles;
     private final Map<Status, Long> counts = new EnumMap<>(Status.class);
-    private final List<String> skipped = new java.util.ArrayList<>();
+    private final List<Skipped> skipped = new java.util.ArrayList<>();
     private int documents;
 
     public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles) {
@@ -32,8 +32,8 @@ public final class RunSummary {
         counts.merge(r.status(), 1L, Long::sum);
     }
 
-    public void skip(String source) {
-        skipped.add(source);
+    public void skip(Skipped file) {
+        skipped.add(file);
     }
 
     public String toolVersion() {
@@ -56,7 +56,7 @@ public final class RunSummary {
         return counts.get(s);
     }
 
-    public List<String> skipped() {
+    public List<Skipped> skipped() {
         return List.copyOf(skipped);
     }
 

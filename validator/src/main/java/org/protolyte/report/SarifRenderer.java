@@ -1,6 +1,10 @@
 package org.protolyte.report;
 
 import java.io.File;
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
@@ -8,7 +12,6 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.TreeMap;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
@@ -41,91 +44,125 @@ public final class SarifRenderer {
 
     private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
+    /** The whole run at once: the same bytes as streaming it. */
     public String render(RunReport run) {
-        return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
+        StringWriter out = new StringWriter();
+        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        try {
+            Log s = begin(out);
+            for (DocumentReport r : run.reports()) {
+                summary.add(r);
+                s.document(r);
+            }
+            run.skipped().forEach(summary::skip);
+            s.end(summary);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return out.toString();
     }
 
-    public ObjectNode tree(RunReport run) {
-        ObjectNode root = mapper.createObjectNode();
-        root.put("$schema", SCHEMA);
-        root.put("version", VERSION);
-        ObjectNode sarifRun = root.putArray("runs").addObject();
+    /**
+     * A log written as it goes, so that an archive fits a small heap: the results first, one document at a time,
+     * then what they refer to (rules, artifacts), which is kept small. Member order carries no meaning in JSON
+     * (RFC 8259 §4), so a SARIF consumer reads the same log.
+     */
+    public Log begin(Writer out) throws IOException {
+        out.write("{\n  \"$schema\" : " + mapper.writeValueAsString(SCHEMA) + ",\n  \"version\" : "
+                + mapper.writeValueAsString(VERSION) + ",\n  \"runs\" : [ {\n  \"results\" : [");
+        return new Log(out);
+    }
 
-        Map<String, ObjectNode> descriptors = descriptors(run);
-        Map<String, Integer> ruleIndex = new LinkedHashMap<>();
-        ObjectNode driver = sarifRun.putObject("tool").putObject("driver");
-        driver.put("name", "Protolyte");
-        driver.put("version", run.toolVersion());
-        ArrayNode rules = driver.putArray("rules");
-        descriptors.forEach((id, d) -> {
-            ruleIndex.put(id, rules.size());
-            rules.add(d);
-        });
+    /** One streamed log; not shared between threads. */
+    public final class Log {
+        private final Writer out;
+        private final Map<String, ObjectNode> descriptors = new LinkedHashMap<>();
+        private final Map<String, Integer> ruleIndex = new LinkedHashMap<>();
+        private final Map<String, Integer> artifactIndex = new LinkedHashMap<>();
+        private final ArrayNode artifacts = mapper.createArrayNode();
+        private boolean first = true;
 
-        ObjectNode invocation = sarifRun.putArray("invocations").addObject();
-        invocation.put("executionSuccessful", run.exitCode() < Status.FAULT.exitCode());
-        if (!run.skipped().isEmpty()) {
-            ArrayNode notes = invocation.putArray("toolExecutionNotifications");
-            for (String s : run.skipped()) {
-                ObjectNode n = notes.addObject();
-                n.put("level", "note");
-                n.putObject("message").put("text", "skipped: neither a formulation nor a batch record");
-                n.putArray("locations").addObject().set("physicalLocation", physical(s, -1, Optional.empty()));
-            }
+        private Log(Writer out) {
+            this.out = out;
         }
 
-        Map<String, Integer> artifactIndex = new LinkedHashMap<>();
-        ArrayNode artifacts = sarifRun.putArray("artifacts");
-        for (DocumentReport r : run.reports()) {
-            if (artifactIndex.containsKey(r.source())) {
-                continue;
+        public void document(DocumentReport r) throws IOException {
+            Integer artifact = artifactIndex.get(r.source());
+            if (artifact == null) {
+                artifact = artifacts.size();
+                artifactIndex.put(r.source(), artifact);
+                ObjectNode a = artifacts.addObject();
+                a.set("location", artifactLocation(r.source(), -1));
+                a.putArray("roles").add("analysisTarget");
+                r.sha256().ifPresent(h -> a.putObject("hashes").put("sha-256", h));
+                ObjectNode props = a.putObject("properties");
+                r.id().ifPresent(id -> props.put("id", id));
+                props.put("status", r.status().code());
             }
-            artifactIndex.put(r.source(), artifacts.size());
-            ObjectNode a = artifacts.addObject();
-            a.set("location", artifactLocation(r.source(), -1));
-            a.putArray("roles").add("analysisTarget");
-            r.sha256().ifPresent(h -> a.putObject("hashes").put("sha-256", h));
-            ObjectNode props = a.putObject("properties");
-            r.id().ifPresent(id -> props.put("id", id));
-            props.put("status", r.status().code());
-        }
-
-        ArrayNode results = sarifRun.putArray("results");
-        for (DocumentReport r : run.reports()) {
-            int artifact = artifactIndex.get(r.source());
             for (Finding f : r.findings()) {
+                rule(f.rule(), () -> f.definition().map(SarifRenderer.this::descriptor)
+                        .orElseGet(() -> plainDescriptor(f.rule(), f.severity())));
                 ObjectNode res = result(f.rule(), ruleIndex, level(f.severity()), f.message());
                 res.putArray("locations").add(location(r.source(), artifact, f.pointer(), f.location()));
                 f.waivedBy().ifPresent(w -> suppression(res, w));
-                results.add(res);
+                write(res);
             }
             for (Diagnostic d : r.diagnostics()) {
-                ObjectNode res = result(ENGINE_PREFIX + d.code(), ruleIndex, level(d.severity()), d.message());
+                String id = ENGINE_PREFIX + d.code();
+                rule(id, () -> engineDescriptor(id, d.severity()));
+                ObjectNode res = result(id, ruleIndex, level(d.severity()), d.message());
                 res.putArray("locations").add(location(r.source(), artifact, d.pointer(), d.location()));
                 d.condition().ifPresent(c -> res.putObject("properties").put("condition", c));
-                results.add(res);
+                write(res);
             }
         }
 
-        ObjectNode props = sarifRun.putObject("properties");
-        props.put("exitCode", run.exitCode());
-        props.put("caution", RunReport.CAUTION);
-        return root;
-    }
-
-    /** One reportingDescriptor per rule id that has a result, in id order; a rule's first definition wins. */
-    private Map<String, ObjectNode> descriptors(RunReport run) {
-        Map<String, ObjectNode> out = new TreeMap<>();
-        for (DocumentReport r : run.reports()) {
-            for (Finding f : r.findings()) {
-                out.computeIfAbsent(f.rule(), id -> f.definition().map(this::descriptor)
-                        .orElseGet(() -> plainDescriptor(id, f.severity())));
-            }
-            for (Diagnostic d : r.diagnostics()) {
-                out.computeIfAbsent(ENGINE_PREFIX + d.code(), id -> engineDescriptor(id, d.severity()));
+        /** A rule's first definition wins; its index is its place in order of first use. */
+        private void rule(String id, java.util.function.Supplier<ObjectNode> descriptor) {
+            if (!ruleIndex.containsKey(id)) {
+                ruleIndex.put(id, descriptors.size());
+                descriptors.put(id, descriptor.get());
             }
         }
-        return out;
+
+        private void write(ObjectNode result) throws IOException {
+            out.write(first ? " " : ", ");
+            out.write(mapper.writeValueAsString(result));
+            first = false;
+        }
+
+        public void end(RunSummary run) throws IOException {
+            ObjectNode driver = mapper.createObjectNode();
+            driver.put("name", "Protolyte");
+            driver.put("version", run.toolVersion());
+            ArrayNode rules = driver.putArray("rules");
+            descriptors.values().forEach(rules::add);
+            ObjectNode tool = mapper.createObjectNode();
+            tool.set("driver", driver);
+
+            ArrayNode invocations = mapper.createArrayNode();
+            ObjectNode invocation = invocations.addObject();
+            invocation.put("executionSuccessful", run.exitCode() < Status.FAULT.exitCode());
+            if (!run.skipped().isEmpty()) {
+                ArrayNode notes = invocation.putArray("toolExecutionNotifications");
+                for (Skipped s : run.skipped()) {
+                    ObjectNode n = notes.addObject();
+                    n.put("level", "note");
+                    n.putObject("message").put("text", "skipped: " + s.reason());
+                    n.putArray("locations").addObject().set("physicalLocation",
+                            physical(s.source(), -1, Optional.empty()));
+                }
+            }
+
+            ObjectNode props = mapper.createObjectNode();
+            props.put("exitCode", run.exitCode());
+            props.put("caution", RunReport.CAUTION);
+            out.write(" ],\n  \"tool\" : " + mapper.writeValueAsString(tool)
+                    + ",\n  \"invocations\" : " + mapper.writeValueAsString(invocations)
+                    + ",\n  \"artifacts\" : " + mapper.writeValueAsString(artifacts)
+                    + ",\n  \"properties\" : " + mapper.writeValueAsString(props)
+                    + "\n} ]\n}" + System.lineSeparator());
+        }
     }
 
     private ObjectNode descriptor(Rule rule) {

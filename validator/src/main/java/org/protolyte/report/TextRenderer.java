@@ -43,10 +43,10 @@ public final class TextRenderer {
         return b.toString();
     }
 
-    public String footer(List<String> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
+    public String footer(List<Skipped> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
         StringBuilder b = new StringBuilder();
-        for (String skipped : skippedFiles) {
-            b.append(NL).append("skipped ").append(skipped).append(": neither a formulation nor a batch record");
+        for (Skipped skipped : skippedFiles) {
+            b.append(NL).append("skipped ").append(skipped.source()).append(": ").append(skipped.reason());
         }
         if (!skippedFiles.isEmpty()) {
             b.append(NL);

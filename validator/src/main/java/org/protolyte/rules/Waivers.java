@@ -12,20 +12,22 @@ import tools.jackson.databind.JsonNode;
 
 /**
  * Applies waivers to one document's findings. A matching waiver marks its findings as waived; a
- * waiver for another revision or other bytes is stale, one past its expiry is expired (both are error
- * findings of their own), and one whose rule did not fire is unused.
+ * waiver for another revision or other bytes is stale, one past its expiry is expired, one approved after the run
+ * date is refused (all three are error findings of their own), and one whose rule did not fire is unused (a note:
+ * nothing is wrong with the document).
  */
 public final class Waivers {
 
     public static final String STALE = "waiver-stale";
     public static final String EXPIRED = "waiver-expired";
     public static final String UNUSED = "waiver-unused";
+    public static final String FUTURE = "waiver-future-approval";
     public static final String NOT_ALLOWED = "waiver-not-allowed";
 
     private final List<Waiver> held;
     private final LocalDate today;
 
-    /** @param held the waivers QA holds (a waiver file); {@code today} decides expiry */
+    /** @param held the waivers QA holds (a waiver file); {@code today}, the run date, decides approval and expiry */
     public Waivers(List<Waiver> held, LocalDate today) {
         this.held = List.copyOf(held);
         this.today = today;
@@ -68,6 +70,13 @@ public final class Waivers {
                         f.document().locate(where)));
                 continue;
             }
+            if (w.approved().isAfter(today)) {
+                extra.add(new Finding(FUTURE, Severity.ERROR, "waiver of " + w.rule() + " (" + w.origin()
+                        + ", approved by " + w.approver() + ") is dated " + w.approved() + ", after the run date "
+                        + today + ": a waiver cannot be approved in the future, so it is not applied (check its date, "
+                        + "or give the run date with --as-of)", Optional.of(where), f.document().locate(where)));
+                continue;
+            }
             if (w.expires().isBefore(today)) {
                 extra.add(new Finding(EXPIRED, Severity.ERROR, "waiver of " + w.rule() + " (" + w.origin()
                         + ", approved by " + w.approver() + ") expired on " + w.expires(), Optional.of(where),
@@ -84,7 +93,7 @@ public final class Waivers {
                 }
             }
             if (!used) {
-                extra.add(new Finding(UNUSED, Severity.WARNING, "waiver of " + w.rule() + " (" + w.origin()
+                extra.add(new Finding(UNUSED, Severity.NOTE, "waiver of " + w.rule() + " (" + w.origin()
                         + ") matches no finding: the rule did not fire" + w.pointer().map(p -> " at " + p).orElse(""),
                         Optional.of(where), f.document().locate(where)));
             }

@@ -40,9 +40,14 @@ class WaiversTest {
     }
 
     private static DocumentReport check(String waivers, String docExtra, Checker checker) {
+        return check(waivers, docExtra, checker, TODAY, Severity.ERROR);
+    }
+
+    private static DocumentReport check(String waivers, String docExtra, Checker checker, LocalDate runDate,
+                                        Severity failOn) {
         List<Waiver> held = waivers.isEmpty() ? List.of()
                 : WaiverFile.read(SCHEMAS, "waivers.json", waivers.getBytes(StandardCharsets.UTF_8));
-        Protolyte p = new Protolyte(SCHEMAS, LIBRARY, checker, Severity.ERROR, new Waivers(held, TODAY));
+        Protolyte p = new Protolyte(SCHEMAS, LIBRARY, checker, failOn, new Waivers(held, runDate));
         return p.check("doc.json", String.format(DOC, docExtra).getBytes(StandardCharsets.UTF_8));
     }
 
@@ -98,6 +103,41 @@ class WaiversTest {
     void aWaiverWhoseRuleDidNotFireIsReportedUnused() {
         DocumentReport r = check(waiverFile("C", "2027-06-01", "").replace("ph-within-target", "pka-near-target"));
         assertTrue(rules(r).contains(Waivers.UNUSED));
+    }
+
+    @Test
+    void anUnusedWaiverIsANoteSoFailOnWarningStillPasses() {
+        String unused = waiverFile("C", "2027-06-01", "").replace("ph-within-target", "pka-near-target");
+        // the document misses its target, so a second, matching waiver is needed for it to pass at all
+        String both = unused.replace("}]}", "}, " + waiverFile("C", "2027-06-01", "")
+                .substring(waiverFile("C", "2027-06-01", "").indexOf("[{") + 1));
+        DocumentReport r = check(both, "", Checker.byIntendedUse(RuleBook.shipped(SCHEMAS, CheckKinds.load())),
+                TODAY, Severity.WARNING);
+        Finding f = r.findings().stream().filter(x -> x.rule().equals(Waivers.UNUSED)).findFirst().orElseThrow();
+        assertEquals(Severity.NOTE, f.severity());
+        assertEquals(Status.PASS, r.status(), () -> r.findings().toString());
+    }
+
+    @Test
+    void aWaiverApprovedAfterTheRunDateIsRefusedAndTheFindingStands() {
+        // approved 2026-11-01: on a run dated 2026-10-15 that approval lies in the future
+        DocumentReport r = check(waiverFile("C", "2027-06-01", ""), "",
+                Checker.byIntendedUse(RuleBook.shipped(SCHEMAS, CheckKinds.load())), LocalDate.of(2026, 10, 15),
+                Severity.ERROR);
+        assertEquals(Status.FAIL, r.status());
+        Finding refusal = r.findings().stream().filter(x -> x.rule().equals(Waivers.FUTURE)).findFirst().orElseThrow();
+        assertTrue(refusal.message().contains("2026-10-15"), refusal::message);
+        assertTrue(r.findings().stream().filter(x -> x.rule().equals("ph-within-target"))
+                .allMatch(x -> x.waivedBy().isEmpty()));
+    }
+
+    @Test
+    void theRunDateDecidesExpirySoAnArchiveReRunSeesTheWaiverAsItWas() {
+        // expired on 2026-11-30 for today's run, valid on the day of the archived run
+        DocumentReport r = check(waiverFile("C", "2026-11-30", ""), "",
+                Checker.byIntendedUse(RuleBook.shipped(SCHEMAS, CheckKinds.load())), LocalDate.of(2026, 11, 15),
+                Severity.ERROR);
+        assertEquals(Status.PASS, r.status(), () -> r.findings().toString());
     }
 
     @Test
