@@ -24,6 +24,10 @@ import tools.jackson.databind.json.JsonMapper;
 public final class JsonReader {
 
     public static final int MAX_DEPTH = 64;
+    /** Characters: no measured value needs more; Jackson's default, stated so the message can say it. */
+    static final int MAX_NUMBER_LENGTH = 1000;
+    /** Characters: the longest property name of any schema is under 40. */
+    static final int MAX_NAME_LENGTH = 1000;
     private static final long MAX_BYTES = 16L * 1024 * 1024;
 
     private final JsonMapper mapper;
@@ -38,7 +42,8 @@ public final class JsonReader {
         this.maxBytes = maxBytes;
         JsonFactory factory = JsonFactory.builder()
                 .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-                .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH).build())
+                .streamReadConstraints(StreamReadConstraints.builder().maxNestingDepth(MAX_DEPTH)
+                        .maxNumberLength(MAX_NUMBER_LENGTH).maxNameLength(MAX_NAME_LENGTH).build())
                 .build();
         mapper = JsonMapper.builder(factory)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
@@ -60,12 +65,11 @@ public final class JsonReader {
                 String pointer = p.streamReadContext() == null ? "" : p.streamReadContext().pathAsPointer().toString();
                 TokenStreamLocation l = p.currentTokenLocation();
                 throw new DocumentException(new Problem(pointer, Optional.of(new Location(l.getLineNr(), l.getColumnNr())),
-                        "nesting deeper than " + MAX_DEPTH + " levels is refused"));
+                        limitExceeded(e.getOriginalMessage())));
             } catch (JacksonException e) {
                 // the parser's context at the fault is the place to start looking (e.g. the repeated key)
                 String pointer = p.streamReadContext() == null ? "" : p.streamReadContext().pathAsPointer().toString();
-                throw new DocumentException(new Problem(pointer, locationOf(e), "not valid JSON: "
-                        + e.getOriginalMessage()));
+                throw new DocumentException(new Problem(pointer, locationOf(e), invalid(e.getOriginalMessage())));
             }
             root = mapper.readTree(content);
         } catch (JacksonException e) {
@@ -101,6 +105,39 @@ public final class JsonReader {
             }
             rootDone = depth == 0 && (t.isStructEnd() || t.isScalarValue());
         }
+    }
+
+    /**
+     * Which of the parser's limits tripped, in words. Jackson names the limit only in its message
+     * ("Number value length (1001) exceeds ..."), so the message's opening words decide.
+     */
+    static String limitExceeded(String message) {
+        String m = message == null ? "" : message;
+        if (m.startsWith("Number value length")) {
+            return "a number longer than " + MAX_NUMBER_LENGTH + " characters is refused";
+        }
+        if (m.startsWith("Name length")) {
+            return "a property name longer than " + MAX_NAME_LENGTH + " characters is refused";
+        }
+        if (m.startsWith("String value length")) {
+            return "a string longer than " + StreamReadConstraints.DEFAULT_MAX_STRING_LEN + " characters is refused";
+        }
+        if (m.contains("nesting depth")) {
+            return "nesting deeper than " + MAX_DEPTH + " levels is refused";
+        }
+        return "refused: " + m;
+    }
+
+    /** NaN and Infinity are not JSON; Jackson's own message would name one of its settings instead. */
+    private static String invalid(String message) {
+        String m = message == null ? "" : message;
+        if (m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
+            int a = m.indexOf('\'');
+            int b = a < 0 ? -1 : m.indexOf('\'', a + 1);
+            String token = b > a ? m.substring(a, b + 1) : "the value";
+            return "not valid JSON: " + token + " is not a JSON number";
+        }
+        return "not valid JSON: " + m;
     }
 
     private static Optional<Location> locationOf(JacksonException e) {

@@ -23,6 +23,10 @@ public final class Formula {
     }
 
     public static Formula parse(String text) {
+        if (text.length() > MAX_LENGTH) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "' is longer than " + MAX_LENGTH
+                    + " characters");
+        }
         java.util.List<String> parts = new java.util.ArrayList<>();
         for (String coarse : text.strip().split("\\s*[·•*]\\s*|\\s+", -1)) {
             if (FRACTIONAL.matcher(coarse).lookingAt()) {
@@ -35,21 +39,29 @@ public final class Formula {
         double water = 0;
         for (String part : parts) {
             if (part.isEmpty()) {
-                throw new IllegalArgumentException("formula '" + text + "' has an empty part");
+                throw new IllegalArgumentException("formula '" + shown(text) + "' has an empty part");
             }
             java.util.regex.Matcher count = LEADING_COUNT.matcher(part);
             int digits = count.lookingAt() ? count.end() : 0;
             double multiplier = digits == 0 ? 1 : Double.parseDouble(part.substring(0, digits));
+            if (multiplier > MAX_ATOMS) {
+                throw new IllegalArgumentException("formula '" + shown(text) + "': the count "
+                        + shown(part.substring(0, digits)) + " is above " + MAX_ATOMS);
+            }
             String body = part.substring(digits);
             if (body.equals("H2O")) {
                 water += multiplier;
             }
-            Map<String, Integer> counts = new TreeMap<>();
-            int end = parseGroup(text, body, 0, counts);
+            Map<String, Long> counts = new TreeMap<>();
+            int end = parseGroup(text, body, 0, counts, 0);
             if (end != body.length()) {
-                throw new IllegalArgumentException("formula '" + text + "': unexpected '" + body.charAt(end) + "'");
+                throw new IllegalArgumentException("formula '" + shown(text) + "': unexpected '" + body.charAt(end) + "'");
             }
             counts.forEach((el, n) -> total.merge(el, n * multiplier, Double::sum));
+        }
+        if (total.values().stream().anyMatch(n -> n > MAX_ATOMS)) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "' has more than " + MAX_ATOMS
+                    + " atoms of one element per formula unit");
         }
         return new Formula(text.strip(), total, water);
     }
@@ -57,16 +69,30 @@ public final class Formula {
     private static final java.util.regex.Pattern FRACTIONAL = java.util.regex.Pattern.compile("\\d+\\.\\d+[A-Z(]");
     private static final java.util.regex.Pattern LEADING_COUNT = java.util.regex.Pattern.compile("\\d+(\\.\\d+)?");
 
-    /** Reads elements and parenthesised groups from {@code pos} until ')' or the end; returns the position. */
-    private static int parseGroup(String text, String s, int pos, Map<String, Integer> into) {
+    /** Characters: the longest shipped formula has under 60. */
+    static final int MAX_LENGTH = 500;
+    /** Parentheses nest at most this deep; real formulas need two or three levels. */
+    static final int MAX_DEPTH = 8;
+    /** Atoms of one element per formula unit at most: a polymer's nominal formula stays far below. */
+    static final long MAX_ATOMS = 1_000_000_000L;
+
+    /**
+     * Reads elements and parenthesised groups from {@code pos} until ')' or the end; returns the position.
+     * Counts are multiplied in checked long arithmetic and bounded, so no nesting can wrap them to zero.
+     */
+    private static int parseGroup(String text, String s, int pos, Map<String, Long> into, int depth) {
+        if (depth > MAX_DEPTH) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "': parentheses nested deeper than "
+                    + MAX_DEPTH + " levels");
+        }
         int i = pos;
         while (i < s.length() && s.charAt(i) != ')') {
             char c = s.charAt(i);
-            Map<String, Integer> group = new TreeMap<>();
+            Map<String, Long> group = new TreeMap<>();
             if (c == '(') {
-                i = parseGroup(text, s, i + 1, group);
+                i = parseGroup(text, s, i + 1, group, depth + 1);
                 if (i >= s.length() || s.charAt(i) != ')') {
-                    throw new IllegalArgumentException("formula '" + text + "': unbalanced '('");
+                    throw new IllegalArgumentException("formula '" + shown(text) + "': unbalanced '('");
                 }
                 i++;
             } else if (Character.isUpperCase(c)) {
@@ -76,22 +102,52 @@ public final class Formula {
                 }
                 String symbol = s.substring(i, j);
                 if (AtomicWeights.of(symbol).isEmpty()) {
-                    throw new IllegalArgumentException("formula '" + text + "': unknown element '" + symbol + "'");
+                    throw new IllegalArgumentException("formula '" + shown(text) + "': unknown element '"
+                            + shown(symbol) + "'");
                 }
-                group.put(symbol, 1);
+                group.put(symbol, 1L);
                 i = j;
             } else {
-                throw new IllegalArgumentException("formula '" + text + "': unexpected '" + c + "'");
+                throw new IllegalArgumentException("formula '" + shown(text) + "': unexpected '" + c + "'");
             }
             int j = i;
             while (j < s.length() && Character.isDigit(s.charAt(j))) {
                 j++;
             }
-            int count = j == i ? 1 : Integer.parseInt(s.substring(i, j));
+            long count = j == i ? 1 : count(text, s.substring(i, j));
             i = j;
-            group.forEach((el, n) -> into.merge(el, n * count, Integer::sum));
+            for (Map.Entry<String, Long> e : group.entrySet()) {
+                into.merge(e.getKey(), atoms(text, e.getValue(), count), (a, b) -> atoms(text, a + b, 1));
+            }
         }
         return i;
+    }
+
+    private static long count(String text, String digits) {
+        if (digits.length() > 10 || Long.parseLong(digits) > MAX_ATOMS) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "': the count " + shown(digits)
+                    + " is above " + MAX_ATOMS);
+        }
+        return Long.parseLong(digits);
+    }
+
+    private static long atoms(String text, long n, long times) {
+        long product;
+        try {
+            product = Math.multiplyExact(n, times);
+        } catch (ArithmeticException e) {
+            product = Long.MAX_VALUE;
+        }
+        if (product > MAX_ATOMS) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "' has more than " + MAX_ATOMS
+                    + " atoms of one element per formula unit");
+        }
+        return product;
+    }
+
+    /** A formula as quoted in a message: long ones are cut, so a hostile one cannot flood the report. */
+    private static String shown(String text) {
+        return text.length() <= 80 ? text : text.substring(0, 80) + "… (" + text.length() + " characters)";
     }
 
     public String text() {

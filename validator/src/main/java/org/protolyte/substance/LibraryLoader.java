@@ -178,6 +178,9 @@ public final class LibraryLoader {
                 }
                 parts.put(species, e.getValue().asDouble());
             }
+            if (!ordered(n, pointer)) {
+                return;
+            }
             try {
                 FormationConstant ksp = constant(n, "log10Ksp", "log10KspEquation");
                 if (ksp == null) {
@@ -191,6 +194,15 @@ public final class LibraryLoader {
             } catch (IllegalArgumentException e) {
                 problems.add(doc.problem(pointer, e.getMessage()));
             }
+        }
+
+        /** A range of data from validFrom up to validTo; the reverse is refused at its place. */
+        private boolean ordered(JsonNode n, String pointer) {
+            if (n.get("validFrom").asDouble() > n.get("validTo").asDouble()) {
+                problems.add(doc.problem(pointer + "/validTo", "validTo is below validFrom"));
+                return false;
+            }
+            return true;
         }
 
         /**
@@ -222,6 +234,9 @@ public final class LibraryLoader {
         private void complex(JsonNode n, String pointer) {
             Map<Component, Integer> parts = new LinkedHashMap<>();
             int protons = n.path("protons").asInt(0);
+            if (!ordered(n, pointer)) {
+                return;
+            }
             FormationConstant k = constant(n, "log10K", "log10KEquation");
             if (k == null) {
                 problems.add(doc.problem(pointer + "/log10KEquation",

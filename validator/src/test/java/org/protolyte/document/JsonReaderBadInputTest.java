@@ -2,10 +2,13 @@ package org.protolyte.document;
 
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.protolyte.TestDocs;
 
 class JsonReaderBadInputTest {
@@ -81,5 +84,28 @@ class JsonReaderBadInputTest {
         DocumentException e = assertThrows(DocumentException.class,
                 () -> reader.read("t.json", TestDocs.bytes("{\"id\": \"TST-001\"}\n{}")));
         assertTrue(e.problems().get(0).message().startsWith("not valid JSON"), e.problems().toString());
+    }
+
+    @Test
+    void numberLongerThanTheLimitIsRefusedAsTooLongNotAsNesting() {
+        Problem p = onlyProblem("{\"id\": 1" + "2".repeat(1001) + "}");
+        assertTrue(p.message().contains("number longer than 1000"), p.message());
+        assertFalse(p.message().contains("nesting"), p.message());
+    }
+
+    @Test
+    void propertyNameLongerThanTheLimitIsRefusedAsTooLongNotAsNesting() {
+        Problem p = onlyProblem("{\"" + "k".repeat(50_001) + "\": 1}");
+        assertTrue(p.message().contains("property name longer than"), p.message());
+        assertFalse(p.message().contains("nesting"), p.message());
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"NaN", "Infinity", "-Infinity"})
+    void nonNumericLiteralIsNotAJsonNumberWithLineAndColumn(String literal) {
+        Problem p = onlyProblem("{\n  \"x\": " + literal + "}");
+        assertTrue(p.message().contains("is not a JSON number"), p.message());
+        assertFalse(p.message().contains("ALLOW_") || p.message().contains("enable"), p.message());
+        assertEquals(2, p.location().orElseThrow().line());
     }
 }
