@@ -40,7 +40,13 @@ public final class Formula {
             java.util.regex.Matcher count = LEADING_COUNT.matcher(part);
             int digits = count.lookingAt() ? count.end() : 0;
             double multiplier = digits == 0 ? 1 : Double.parseDouble(part.substring(0, digits));
+            if (multiplier == 0) {
+                throw new IllegalArgumentException("formula '" + text + "': a count of zero");
+            }
             String body = part.substring(digits);
+            if (body.isEmpty()) {
+                throw new IllegalArgumentException("formula '" + text + "': a count with nothing after it");
+            }
             if (body.equals("H2O")) {
                 water += multiplier;
             }
@@ -68,6 +74,9 @@ public final class Formula {
                 if (i >= s.length() || s.charAt(i) != ')') {
                     throw new IllegalArgumentException("formula '" + text + "': unbalanced '('");
                 }
+                if (group.isEmpty()) {
+                    throw new IllegalArgumentException("formula '" + text + "': empty parentheses");
+                }
                 i++;
             } else if (Character.isUpperCase(c)) {
                 int j = i + 1;
@@ -87,11 +96,28 @@ public final class Formula {
             while (j < s.length() && Character.isDigit(s.charAt(j))) {
                 j++;
             }
-            int count = j == i ? 1 : Integer.parseInt(s.substring(i, j));
+            int count = j == i ? 1 : count(text, s.substring(i, j));
             i = j;
-            group.forEach((el, n) -> into.merge(el, n * count, Integer::sum));
+            try {
+                group.forEach((el, n) -> into.merge(el, Math.multiplyExact(n, count), Math::addExact));
+            } catch (ArithmeticException e) {
+                throw new IllegalArgumentException("formula '" + text + "': more atoms than can be counted", e);
+            }
         }
         return i;
+    }
+
+    private static int count(String text, String digits) {
+        int n;
+        try {
+            n = Integer.parseInt(digits);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("formula '" + text + "': the count " + digits + " is too large", e);
+        }
+        if (n == 0) {
+            throw new IllegalArgumentException("formula '" + text + "': a count of zero");
+        }
+        return n;
     }
 
     public String text() {
