@@ -48,7 +48,13 @@ public final class Formula {
                 throw new IllegalArgumentException("formula '" + shown(text) + "': the count "
                         + shown(part.substring(0, digits)) + " is above " + MAX_ATOMS);
             }
+            if (multiplier == 0) {
+                throw new IllegalArgumentException("formula '" + shown(text) + "': a count of zero");
+            }
             String body = part.substring(digits);
+            if (body.isEmpty()) {
+                throw new IllegalArgumentException("formula '" + shown(text) + "': a count with nothing after it");
+            }
             if (body.equals("H2O")) {
                 water += multiplier;
             }
@@ -94,6 +100,9 @@ public final class Formula {
                 if (i >= s.length() || s.charAt(i) != ')') {
                     throw new IllegalArgumentException("formula '" + shown(text) + "': unbalanced '('");
                 }
+                if (group.isEmpty()) {
+                    throw new IllegalArgumentException("formula '" + shown(text) + "': empty parentheses");
+                }
                 i++;
             } else if (Character.isUpperCase(c)) {
                 int j = i + 1;
@@ -128,7 +137,11 @@ public final class Formula {
             throw new IllegalArgumentException("formula '" + shown(text) + "': the count " + shown(digits)
                     + " is above " + MAX_ATOMS);
         }
-        return Long.parseLong(digits);
+        long n = Long.parseLong(digits);
+        if (n == 0) {
+            throw new IllegalArgumentException("formula '" + shown(text) + "': a count of zero");
+        }
+        return n;
     }
 
     private static long atoms(String text, long n, long times) {

@@ -1,0 +1,48 @@
+package org.protolyte.fuzz;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+
+import org.junit.jupiter.api.Timeout;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.Problem;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.report.JsonRenderer;
+import org.protolyte.report.RunReport;
+import org.protolyte.report.SarifRenderer;
+import org.protolyte.report.TextRenderer;
+
+import com.code_intelligence.jazzer.junit.FuzzTest;
+
+/**
+ * Whatever a check of arbitrary bytes reports, the text, JSON and SARIF renderers write it without throwing; the
+ * JSON report conforms to its schema and the SARIF log is JSON (seeds: the sample formulations and batch records).
+ */
+class RenderersFuzzTest {
+
+    private final JsonReader json = new JsonReader();
+
+    @FuzzTest
+    @Timeout(60)
+    void everyReportRendersInEveryFormat(byte[] input) {
+        DocumentReport r = FuzzChecks.PROTOLYTE.check(FuzzChecks.SOURCE, input);
+        RunReport run = new RunReport("fuzz", Instant.EPOCH, Map.of(), List.of(r), List.of());
+
+        String text = new TextRenderer().render(run);
+        assertTrue(text.contains(FuzzChecks.SOURCE), "the text report names the input");
+
+        String report = new JsonRenderer().render(run);
+        List<Problem> problems = FuzzChecks.SCHEMAS.validate(
+                json.read("report.json", report.getBytes(StandardCharsets.UTF_8)), "report.schema.json");
+        assertEquals(List.of(), problems, "the JSON report conforms to report.schema.json");
+
+        String sarif = new SarifRenderer().render(run);
+        assertTrue(json.read("report.sarif", sarif.getBytes(StandardCharsets.UTF_8)).root().path("runs").isArray(),
+                "the SARIF log is JSON with its runs");
+    }
+}
