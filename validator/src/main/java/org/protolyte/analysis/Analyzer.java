@@ -78,19 +78,25 @@ public final class Analyzer {
 
     /**
      * What a recipe gives without its uncertainties: the q.s. dose of each titrant (mol per basis; empty where its
-     * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate). For comparing a
-     * batch as made with what was measured, many times over.
+     * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate), with the reasons of
+     * every empty one in {@code caveats}. For comparing a batch as made with what was measured, many times over.
      */
-    public record Forecast(Map<Ingredient, java.util.OptionalDouble> doses, List<Optional<EquilibriumState>> states) {
+    public record Forecast(Map<Ingredient, OptionalDouble> doses, List<Optional<EquilibriumState>> states,
+                           List<Caveat> caveats) {
+        public Forecast {
+            caveats = List.copyOf(caveats);
+        }
     }
 
     public Forecast forecast(Recipe recipe) {
-        Map<Ingredient, java.util.OptionalDouble> out = new java.util.LinkedHashMap<>();
+        Map<Ingredient, OptionalDouble> out = new LinkedHashMap<>();
         Map<Ingredient, Double> doses = new HashMap<>();
+        List<Caveat> caveats = new ArrayList<>();
         if (!recipe.titrants().isEmpty()) {
-            for (TitrantResult t : adjust(recipe, new ArrayList<>())) {
+            for (TitrantResult t : adjust(recipe, caveats)) {
                 boolean reached = t.unreachable().isEmpty();
-                out.put(t.ingredient(), reached ? java.util.OptionalDouble.of(t.moles()) : java.util.OptionalDouble.empty());
+                out.put(t.ingredient(), reached ? OptionalDouble.of(t.moles()) : OptionalDouble.empty());
+                t.unreachable().ifPresent(u -> caveats.add(Caveat.indeterminate("qs-unreachable", u.reason())));
                 doses.put(t.ingredient(), t.moles());
             }
         }
@@ -100,11 +106,13 @@ public final class Analyzer {
             try {
                 EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
                 states.add(s.determinate() ? Optional.of(s) : Optional.empty());
+                caveats.addAll(s.caveats().stream().filter(x -> x.severity() == Caveat.Severity.INDETERMINATE).toList());
             } catch (IndeterminateException e) {
                 states.add(Optional.empty());
+                caveats.add(e.caveat());
             }
         }
-        return new Forecast(out, states);
+        return new Forecast(out, states, caveats);
     }
 
     /**
@@ -622,6 +630,10 @@ public final class Analyzer {
             }
             moles = Math.abs(startPH - goalPH) < 1e-9 ? 0
                     : new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
+            if (overflow.isPresent()) {
+                return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);
+            }
         } catch (IndeterminateException | MathIllegalStateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. of " + t.substance().name()
                     + " could not be computed: " + e.getMessage()));
@@ -647,6 +659,22 @@ public final class Analyzer {
             }
         }
         return result;
+    }
+
+    /**
+     * A q.s. whose stock volume exceeds the final volume cannot be made: the goal is out of this stock's reach
+     * (however the pH would come out, the recipe would have to hold more stock than solution).
+     */
+    private static Optional<TitrantResult.Unreachable> overflow(Recipe recipe, Ingredient t, double moles, double goalPH,
+                                                              double startPH) {
+        Formulation.Basis basis = recipe.formulation().basis();
+        if (!basis.finalVolume() || !t.hasStock() || !(moles / t.stockMolarity() > basis.amount())) {
+            return Optional.empty();
+        }
+        return Optional.of(new TitrantResult.Unreachable(String.format(Locale.ROOT,
+                "the q.s. to pH %.2f needs %.1f mL of the %.3g mol/L %s stock, more than the %.1f mL of solution the "
+                        + "recipe makes; use a stronger stock", goalPH, moles / t.stockMolarity() * 1000,
+                t.stockMolarity(), t.substance().name(), basis.amount() * 1000), startPH, startPH));
     }
 
     /** The meter reads a closed sample while adjusting; the target holds in the CO2 state of its condition. */
