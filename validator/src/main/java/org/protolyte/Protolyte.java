@@ -211,6 +211,7 @@ public final class Protolyte {
             String kind = doc.root().path("document").asString("");
             return "formulation".equals(kind) || BATCH_RECORD.equals(kind);
         } catch (DocumentException | IOException e) {
+            // caught: not decided here; checked, it is reported invalid with the reason rather than passed over
             return true;
         }
     }

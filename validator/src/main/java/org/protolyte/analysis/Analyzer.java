@@ -71,9 +71,9 @@ public final class Analyzer {
         List<ConditionResult> own = all.subList(0, n);
         Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
                 recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
+        Optional<TitratableAcidity> acidity = titratableAcidity(recipe, solution, caveats);
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, own), drifts(recipe, own),
-                titratableAcidity(recipe, solution), Optional.empty(), diluted);
+                sensitivities(recipe, doses, own), drifts(recipe, own), acidity, Optional.empty(), diluted);
     }
 
     /**
@@ -127,6 +127,8 @@ public final class Analyzer {
                 adjust(recipe, ignored).forEach(t -> doses.put(t.ingredient(), t.moles()));
             }
         } catch (DocumentException e) {
+            // caught: a moved constant that makes the q.s. fail leaves this world out; the caller then reports the
+            // uncertainty as not computed
             return null;
         }
         Solution concentrate = recipe.solution(doses);
@@ -143,6 +145,7 @@ public final class Analyzer {
                 out[0][i] = s.pH();
                 out[1][i] = s.bufferCapacity() * solution.waterKg() / solution.volumeLitres(c.kelvin());
             } catch (IndeterminateException e) {
+                // caught: NaN marks the condition, whose uncertainty the caller then reports as not computed
                 out[0][i] = Double.NaN;
                 out[1][i] = Double.NaN;
             }
@@ -172,7 +175,8 @@ public final class Analyzer {
             double part = t.ingredient().line().adjustTo().orElseThrow().atVolume();
             return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty(), part));
         } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
-            return t;   // no setpoint can be stood behind; the pH finding stands on its own
+            // caught: an optional hint; no setpoint can be stood behind, and the pH finding stands on its own
+            return t;
         }
     }
 
@@ -222,7 +226,7 @@ public final class Analyzer {
     }
 
     /** Strong base (or acid, negative) per litre and per dose to bring the recipe to pH 7.4 at 37 °C, closed. */
-    private Optional<TitratableAcidity> titratableAcidity(Recipe recipe, Solution solution) {
+    private Optional<TitratableAcidity> titratableAcidity(Recipe recipe, Solution solution, List<Caveat> caveats) {
         try {
             double perLitre = load(recipe, solution, TitratableAcidity.BODY_KELVIN, OptionalDouble.empty(),
                     TitratableAcidity.PHYSIOLOGICAL_PH);
@@ -230,6 +234,8 @@ public final class Analyzer {
                     ? OptionalDouble.of(perLitre * recipe.formulation().doseLitres().get()) : OptionalDouble.empty();
             return Optional.of(new TitratableAcidity(perLitre, perDose));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            caveats.add(Caveat.warning("titratable-acidity-not-computed", "the titratable acidity to pH 7.4 at 37 °C "
+                    + "could not be computed, so no rule judges it: " + e.getMessage()));
             return Optional.empty();
         }
     }
@@ -283,7 +289,8 @@ public final class Analyzer {
         return base ? mmolPerLitre : -mmolPerLitre;
     }
 
-    private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH) {
+    private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH,
+                                  List<Caveat> caveats) {
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
         if (target.isEmpty()) {
             return Optional.empty();
@@ -297,6 +304,8 @@ public final class Analyzer {
                     : OptionalDouble.of(pH >= max ? 0 : load(recipe, solution, c.kelvin(), c.co2Pascal(), max));
             return Optional.of(new Loads(acid, base));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            caveats.add(Caveat.warning("loads-not-computed", "the acid and base loads that take the pH out of the "
+                    + "target could not be computed, so no rule judges them: " + e.getMessage()));
             return Optional.empty();
         }
     }
@@ -318,6 +327,7 @@ public final class Analyzer {
             }
             return OptionalDouble.of(Math.pow(10, new BrentSolver(1e-12, 1e-9).solve(200, f, 0, Math.log10(5e4))));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            // caught: a hint in the report only (no rule judges it); where it cannot be found none is shown
             return OptionalDouble.empty();
         }
     }
@@ -352,7 +362,7 @@ public final class Analyzer {
                 double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal(), Map.of()).pH();
                 out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
             } catch (IndeterminateException e) {
-                // a component whose 1 % change cannot be solved has no sensitivity to report
+                // caught: a component whose 1 % change cannot be solved has no sensitivity to report
             }
         }
         out.sort(java.util.Comparator.comparingDouble((Sensitivity x) -> -Math.abs(x.dpHPerPercent())));
@@ -403,11 +413,13 @@ public final class Analyzer {
             EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
             double perLitre = solution.waterKg() / volume;
             boolean determinate = s.determinate();
-            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre,
+            List<Caveat> caveats = new ArrayList<>(s.caveats());
+            Optional<Loads> loads = determinate ? loads(recipe, solution, c, s.pH(), caveats) : Optional.empty();
+            return new ConditionResult(c, Optional.of(s), caveats, s.bufferCapacity() * perLitre,
                     s.osmolality() * perLitre, volume,
                     buffers(recipe, solution, s, perLitre),
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
-                    determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
+                    loads,
                     determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty(),
                     determinate ? saturation(recipe, s) : List.of());
         } catch (IndeterminateException e) {
@@ -499,6 +511,7 @@ public final class Analyzer {
             double air = FormulationReader.AIR_CO2_FRACTION * FormulationReader.STANDARD_PRESSURE;
             return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air), Map.of()).pH());
         } catch (IndeterminateException e) {
+            // caught: a hint in the report only (no rule judges it); where it cannot be solved none is shown
             return OptionalDouble.empty();
         }
     }

@@ -130,6 +130,20 @@ class BatchFailsClosedTest {
                 () -> describe(r));
     }
 
+    /** The same limit on a formulation: 27 mmol of HCl from a 0.001 mol/L stock would be 27 L for a 1 L buffer. */
+    @Test
+    void aFormulationWhoseQsNeedsMoreStockThanItMakesFails() throws IOException {
+        Path sample = Path.of(System.getProperty("protolyte.projectRoot", ".."), "sample-formulations",
+                "laboratory-tris-buffer-37c.json");
+        Path file = dir.resolve("tris.json");
+        Files.writeString(file, Files.readString(sample).replace("\"concentration\": \"1 mol/L\"",
+                "\"concentration\": \"0.001 mol/L\""));
+        DocumentReport r = PROTOLYTE.check(file, dir);
+        assertEquals(Status.FAIL, r.status(), () -> describe(r));
+        assertTrue(findings(r, "titrant-reaches-goal").stream().anyMatch(f -> f.message().contains("more than the "
+                + "1000.0 mL")), () -> describe(r));
+    }
+
     /** The repro: a target of 7.30–7.50 at 20 °C and a reading of 7.58 at 20 °C after adjustment. */
     @Test
     void aReadingAboveTheMastersTargetIsOutOfSpecification() throws IOException {
