@@ -38,7 +38,8 @@ public final class BatchDiagnosis implements BatchCheckKind {
         List<Fit> fits = new ArrayList<>();
         List<String> uncomputed = new ArrayList<>();
         for (BatchAnalysis.Candidate c : b.candidates().subList(1, b.candidates().size())) {
-            c.unpredicted().ifPresent(why -> uncomputed.add(c.cause() + " (" + why + ")"));
+            c.unpredicted().ifPresent(why -> uncomputed.add(uncomputed.isEmpty() ? c.cause() + " (" + why + ")"
+                    : c.cause()));
             double score = 0;
             boolean fits_ = true;
             for (int i = 0; i < obs.size(); i++) {
@@ -79,7 +80,8 @@ public final class BatchDiagnosis implements BatchCheckKind {
             }
         }
         if (!uncomputed.isEmpty()) {
-            m.append("; not judged, since the engine cannot predict them: ").append(String.join("; ", uncomputed));
+            m.append(String.format(Locale.ROOT, "; %d of the usual mistakes could not be predicted and are not judged: ",
+                    uncomputed.size())).append(String.join("; ", uncomputed));
         }
         BatchAnalysis.Observation first = obs.stream().filter(o -> !Double.isNaN(o.predicted())
                 && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted())).findFirst().orElseThrow();

@@ -158,6 +158,19 @@ class BatchFailsClosedTest {
         assertTrue(r.status() == Status.FAIL, () -> describe(r));
     }
 
+    /** A usual mistake whose prediction cannot be made (here NaOH would have to lower the pH) is named, not dropped. */
+    @Test
+    void aCandidateThatCannotBePredictedIsNamedAsNotJudged() throws IOException {
+        UnaryOperator<String> target = m -> m.replace("\"pH\": 7.2,", "\"pH\": 7.4,").replace("\"value\": 7.2,",
+                "\"value\": 7.4,");
+        DocumentReport r = check("br-clean.json", s -> s.replace("\"value\": 7.20", "\"value\": 7.58"), target);
+        List<Finding> diagnosis = findings(r, "batch-diagnosis");
+        assertEquals(1, diagnosis.size(), () -> describe(r));
+        assertTrue(diagnosis.get(0).message().contains("could not be predicted and are not judged: ")
+                && diagnosis.get(0).message().contains("sodium dihydrogen phosphate dihydrate left out (step 2)"),
+                diagnosis.get(0)::message);
+    }
+
     @Test
     void theCleanSampleIsWithinItsSpecificationAndPasses() throws IOException {
         DocumentReport r = check("br-clean.json", UnaryOperator.identity());
