@@ -138,7 +138,7 @@ public final class Protolyte {
         this.waivers = waivers;
         this.schemas = schemas;
         this.batchReader = new BatchRecordReader(schemas);
-        this.batchAnalyzer = new BatchAnalyzer(schemas, library, analyzer);
+        this.batchAnalyzer = new BatchAnalyzer(library, analyzer);
     }
 
     public static String version() {
@@ -423,7 +423,7 @@ public final class Protolyte {
         try {
             verdict = checker.check(analysis);
         } catch (DocumentException e) {
-            throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
+            throw packsCannotBeCombined(e);
         }
         boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
         List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
@@ -438,9 +438,15 @@ public final class Protolyte {
         try {
             verdict = checker.check(b);
         } catch (DocumentException e) {
-            throw new IllegalStateException("the rule packs cannot be combined: " + e.getMessage(), e);
+            throw packsCannotBeCombined(e);
         }
         return DocumentReport.ofBatch(b, sha256, verdict, failOn);
+    }
+
+    /** Packs that cannot be combined are a problem of the input the run was given, not an internal fault. */
+    private static DocumentException packsCannotBeCombined(DocumentException e) {
+        return new DocumentException(e.problems().stream().map(p -> new Problem(p.pointer(), p.location(),
+                "the rule packs cannot be combined: " + p.message())).toList());
     }
 
     /** Adds the substance names that do not resolve, so that one pass reports everything a reviewer must fix. */

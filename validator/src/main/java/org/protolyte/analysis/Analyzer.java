@@ -71,26 +71,32 @@ public final class Analyzer {
         List<ConditionResult> own = all.subList(0, n);
         Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
                 recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
+        Optional<TitratableAcidity> acidity = titratableAcidity(recipe, solution, caveats);
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, own), drifts(recipe, own),
-                titratableAcidity(recipe, solution), Optional.empty(), diluted);
+                sensitivities(recipe, doses, own), drifts(recipe, own), acidity, Optional.empty(), diluted);
     }
 
     /**
      * What a recipe gives without its uncertainties: the q.s. dose of each titrant (mol per basis; empty where its
-     * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate). For comparing a
-     * batch as made with what was measured, many times over.
+     * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate), with the reasons of
+     * every empty one in {@code caveats}. For comparing a batch as made with what was measured, many times over.
      */
-    public record Forecast(Map<Ingredient, java.util.OptionalDouble> doses, List<Optional<EquilibriumState>> states) {
+    public record Forecast(Map<Ingredient, OptionalDouble> doses, List<Optional<EquilibriumState>> states,
+                           List<Caveat> caveats) {
+        public Forecast {
+            caveats = List.copyOf(caveats);
+        }
     }
 
     public Forecast forecast(Recipe recipe) {
-        Map<Ingredient, java.util.OptionalDouble> out = new java.util.LinkedHashMap<>();
+        Map<Ingredient, OptionalDouble> out = new LinkedHashMap<>();
         Map<Ingredient, Double> doses = new HashMap<>();
+        List<Caveat> caveats = new ArrayList<>();
         if (!recipe.titrants().isEmpty()) {
-            for (TitrantResult t : adjust(recipe, new ArrayList<>())) {
+            for (TitrantResult t : adjust(recipe, caveats)) {
                 boolean reached = t.unreachable().isEmpty();
-                out.put(t.ingredient(), reached ? java.util.OptionalDouble.of(t.moles()) : java.util.OptionalDouble.empty());
+                out.put(t.ingredient(), reached ? OptionalDouble.of(t.moles()) : OptionalDouble.empty());
+                t.unreachable().ifPresent(u -> caveats.add(Caveat.indeterminate("qs-unreachable", u.reason())));
                 doses.put(t.ingredient(), t.moles());
             }
         }
@@ -100,11 +106,13 @@ public final class Analyzer {
             try {
                 EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
                 states.add(s.determinate() ? Optional.of(s) : Optional.empty());
+                caveats.addAll(s.caveats().stream().filter(x -> x.severity() == Caveat.Severity.INDETERMINATE).toList());
             } catch (IndeterminateException e) {
                 states.add(Optional.empty());
+                caveats.add(e.caveat());
             }
         }
-        return new Forecast(out, states);
+        return new Forecast(out, states, caveats);
     }
 
     /**
@@ -119,6 +127,8 @@ public final class Analyzer {
                 adjust(recipe, ignored).forEach(t -> doses.put(t.ingredient(), t.moles()));
             }
         } catch (DocumentException e) {
+            // caught: a moved constant that makes the q.s. fail leaves this world out; the caller then reports the
+            // uncertainty as not computed
             return null;
         }
         Solution concentrate = recipe.solution(doses);
@@ -135,6 +145,7 @@ public final class Analyzer {
                 out[0][i] = s.pH();
                 out[1][i] = s.bufferCapacity() * solution.waterKg() / solution.volumeLitres(c.kelvin());
             } catch (IndeterminateException e) {
+                // caught: NaN marks the condition, whose uncertainty the caller then reports as not computed
                 out[0][i] = Double.NaN;
                 out[1][i] = Double.NaN;
             }
@@ -164,7 +175,8 @@ public final class Analyzer {
             double part = t.ingredient().line().adjustTo().orElseThrow().atVolume();
             return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty(), part));
         } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
-            return t;   // no setpoint can be stood behind; the pH finding stands on its own
+            // caught: an optional hint; no setpoint can be stood behind, and the pH finding stands on its own
+            return t;
         }
     }
 
@@ -214,7 +226,7 @@ public final class Analyzer {
     }
 
     /** Strong base (or acid, negative) per litre and per dose to bring the recipe to pH 7.4 at 37 °C, closed. */
-    private Optional<TitratableAcidity> titratableAcidity(Recipe recipe, Solution solution) {
+    private Optional<TitratableAcidity> titratableAcidity(Recipe recipe, Solution solution, List<Caveat> caveats) {
         try {
             double perLitre = load(recipe, solution, TitratableAcidity.BODY_KELVIN, OptionalDouble.empty(),
                     TitratableAcidity.PHYSIOLOGICAL_PH);
@@ -222,6 +234,8 @@ public final class Analyzer {
                     ? OptionalDouble.of(perLitre * recipe.formulation().doseLitres().get()) : OptionalDouble.empty();
             return Optional.of(new TitratableAcidity(perLitre, perDose));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            caveats.add(Caveat.warning("titratable-acidity-not-computed", "the titratable acidity to pH 7.4 at 37 °C "
+                    + "could not be computed, so no rule judges it: " + e.getMessage()));
             return Optional.empty();
         }
     }
@@ -275,7 +289,8 @@ public final class Analyzer {
         return base ? mmolPerLitre : -mmolPerLitre;
     }
 
-    private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH) {
+    private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH,
+                                  List<Caveat> caveats) {
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
         if (target.isEmpty()) {
             return Optional.empty();
@@ -289,6 +304,8 @@ public final class Analyzer {
                     : OptionalDouble.of(pH >= max ? 0 : load(recipe, solution, c.kelvin(), c.co2Pascal(), max));
             return Optional.of(new Loads(acid, base));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            caveats.add(Caveat.warning("loads-not-computed", "the acid and base loads that take the pH out of the "
+                    + "target could not be computed, so no rule judges them: " + e.getMessage()));
             return Optional.empty();
         }
     }
@@ -310,6 +327,7 @@ public final class Analyzer {
             }
             return OptionalDouble.of(Math.pow(10, new BrentSolver(1e-12, 1e-9).solve(200, f, 0, Math.log10(5e4))));
         } catch (IndeterminateException | MathIllegalStateException e) {
+            // caught: a hint in the report only (no rule judges it); where it cannot be found none is shown
             return OptionalDouble.empty();
         }
     }
@@ -344,7 +362,7 @@ public final class Analyzer {
                 double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal(), Map.of()).pH();
                 out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
             } catch (IndeterminateException e) {
-                // a component whose 1 % change cannot be solved has no sensitivity to report
+                // caught: a component whose 1 % change cannot be solved has no sensitivity to report
             }
         }
         out.sort(java.util.Comparator.comparingDouble((Sensitivity x) -> -Math.abs(x.dpHPerPercent())));
@@ -395,11 +413,13 @@ public final class Analyzer {
             EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
             double perLitre = solution.waterKg() / volume;
             boolean determinate = s.determinate();
-            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre,
+            List<Caveat> caveats = new ArrayList<>(s.caveats());
+            Optional<Loads> loads = determinate ? loads(recipe, solution, c, s.pH(), caveats) : Optional.empty();
+            return new ConditionResult(c, Optional.of(s), caveats, s.bufferCapacity() * perLitre,
                     s.osmolality() * perLitre, volume,
                     buffers(recipe, solution, s, perLitre),
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
-                    determinate ? loads(recipe, solution, c, s.pH()) : Optional.empty(),
+                    loads,
                     determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty(),
                     determinate ? saturation(recipe, s) : List.of());
         } catch (IndeterminateException e) {
@@ -491,6 +511,7 @@ public final class Analyzer {
             double air = FormulationReader.AIR_CO2_FRACTION * FormulationReader.STANDARD_PRESSURE;
             return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air), Map.of()).pH());
         } catch (IndeterminateException e) {
+            // caught: a hint in the report only (no rule judges it); where it cannot be solved none is shown
             return OptionalDouble.empty();
         }
     }
@@ -622,6 +643,10 @@ public final class Analyzer {
             }
             moles = Math.abs(startPH - goalPH) < 1e-9 ? 0
                     : new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
+            if (overflow.isPresent()) {
+                return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);
+            }
         } catch (IndeterminateException | MathIllegalStateException e) {
             caveats.add(Caveat.indeterminate("qs-indeterminate", "the q.s. of " + t.substance().name()
                     + " could not be computed: " + e.getMessage()));
@@ -647,6 +672,22 @@ public final class Analyzer {
             }
         }
         return result;
+    }
+
+    /**
+     * A q.s. whose stock volume exceeds the final volume cannot be made: the goal is out of this stock's reach
+     * (however the pH would come out, the recipe would have to hold more stock than solution).
+     */
+    private static Optional<TitrantResult.Unreachable> overflow(Recipe recipe, Ingredient t, double moles, double goalPH,
+                                                              double startPH) {
+        Formulation.Basis basis = recipe.formulation().basis();
+        if (!basis.finalVolume() || !t.hasStock() || !(moles / t.stockMolarity() > basis.amount())) {
+            return Optional.empty();
+        }
+        return Optional.of(new TitrantResult.Unreachable(String.format(Locale.ROOT,
+                "the q.s. to pH %.2f needs %.1f mL of the %.3g mol/L %s stock, more than the %.1f mL of solution the "
+                        + "recipe makes; use a stronger stock", goalPH, moles / t.stockMolarity() * 1000,
+                t.stockMolarity(), t.substance().name(), basis.amount() * 1000), startPH, startPH));
     }
 
     /** The meter reads a closed sample while adjusting; the target holds in the CO2 state of its condition. */

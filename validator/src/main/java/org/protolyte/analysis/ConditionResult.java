@@ -43,6 +43,14 @@ public record ConditionResult(Formulation.Condition condition, Optional<Equilibr
                 loads, co2ForTarget, Optional.of(u), saturation);
     }
 
+    /** The same result with one more caveat (a figure beside the pH that could not be computed). */
+    public ConditionResult withCaveat(Caveat c) {
+        List<Caveat> more = new java.util.ArrayList<>(caveats);
+        more.add(c);
+        return new ConditionResult(condition, state, more, bufferCapacityPerLitre, osmolarity, volumeLitres, buffers,
+                pHInAir, loads, co2ForTarget, uncertainty, saturation);
+    }
+
     /** The system that carries most of the buffer capacity, if any system buffers at all. */
     public Optional<BufferContribution> mainBuffer() {
         return buffers.stream().max(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre));

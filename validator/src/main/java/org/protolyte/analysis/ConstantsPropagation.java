@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.Species;
@@ -92,7 +93,9 @@ final class ConstantsPropagation {
         List<ConditionResult> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (failed[i]) {
-                out.add(results.get(i));
+                out.add(results.get(i).determinate() ? results.get(i).withCaveat(Caveat.warning("uncertainty-not-computed",
+                        "the uncertainty from the constants could not be computed here: the pH is shown without it"))
+                        : results.get(i));
                 continue;
             }
             List<Uncertainty.Contribution> c = new ArrayList<>(parts.get(i));

@@ -56,8 +56,16 @@ public final class Robustness {
                                       double lowestCornerPH, double highestCornerPH, Map<String, Double> sensitivities) {
     }
 
+    /**
+     * {@code samplesSolved} of the settings' samples; the others could not be solved, {@code unsolved} says why (the
+     * first such batch's reason). An unsolved batch counts as one outside the pH target: a batch the engine cannot
+     * stand behind is not one that passes, so the risk is never understated.
+     */
     public record Result(Settings settings, int samplesSolved, List<ConditionRobustness> conditions,
-                         Map<String, Double> tolerances) {
+                         Map<String, Double> tolerances, Optional<String> unsolved) {
+        public int samplesUnsolved() {
+            return settings.samples() - samplesSolved;
+        }
     }
 
     private final Analyzer analyzer;
@@ -118,10 +126,12 @@ public final class Robustness {
             Map<String, Double> sensitivities = sensitivities(sampler, weighed, c, nominal);
             double[] corners = corners(sampler, weighed, tolerances, sensitivities, c);
             out.add(new ConditionRobustness(cond.name(), interval(pH[c]), interval(beta[c]), interval(osmolality[c]),
-                    atTarget && solved > 0 ? OptionalDouble.of((double) outside[c] / solved) : OptionalDouble.empty(),
+                    atTarget && settings.samples() > 0
+                            ? OptionalDouble.of((double) (outside[c] + settings.samples() - solved) / settings.samples())
+                            : OptionalDouble.empty(),
                     interval(systematic[c]), corners[0], corners[1], sensitivities));
         }
-        return new Result(settings, solved, out, tolerances);
+        return new Result(settings, solved, out, tolerances, sampler.firstFailure());
     }
 
     private static double tolerance(Ingredient i, Settings settings) {
@@ -227,6 +237,7 @@ public final class Robustness {
         private final int[] titrantIndex;                 // per titrant: its index among the ingredients
         private final double[] atVolume;                  // per titrant: the fraction of volume it is dosed at
         private final double[][] nominal;
+        private Optional<String> firstFailure = Optional.empty();
 
         Sampler(Analyzer analyzer, Recipe recipe, Nominal dose, Batches batches) {
             this.recipe = recipe;
@@ -257,6 +268,11 @@ public final class Robustness {
                 Arrays.fill(warm, null);
                 Arrays.fill(meterWarm, null);
             }
+        }
+
+        /** Why the first batch that could not be solved failed, if one did. */
+        Optional<String> firstFailure() {
+            return firstFailure;
         }
 
         /** The nominal batch, as {@link #sample} gives it; null where it cannot be solved. */
@@ -300,7 +316,11 @@ public final class Robustness {
                 }
                 return out;
             } catch (IndeterminateException | IllegalStateException | DocumentException e) {
-                return null;   // a number the engine cannot stand behind is not a sample
+                // a number the engine cannot stand behind is not a sample: it is counted unsolved, with its reason
+                if (firstFailure.isEmpty()) {
+                    firstFailure = Optional.of(e.getMessage());
+                }
+                return null;
             }
         }
 

@@ -1,6 +1,5 @@
 package org.protolyte.batch;
 
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -11,14 +10,13 @@ import java.util.OptionalDouble;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
-import org.protolyte.document.FormulationReader;
-import org.protolyte.document.JsonReader;
 import org.protolyte.document.Problem;
-import org.protolyte.document.SchemaCatalog;
+import org.protolyte.document.SourceDocument;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
@@ -27,9 +25,12 @@ import org.protolyte.substance.LookupException;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
 import org.protolyte.units.Dimension;
+import org.protolyte.units.Quantity;
+
+import tools.jackson.databind.node.JsonNodeFactory;
 
 /**
- * Compares a batch record with its master and with chemistry. The batch as recorded is written as a formulation of
+ * Compares a batch record with its master and with chemistry. The batch as recorded is built as a formulation of
  * its own (every addition in mmol after the certificate corrections, per batch), and the engine predicts each
  * measurement from the additions made up to its step. For a q.s. recipe the meter sets the pH after the titrant, so
  * that pH is the goal of a q.s. computed from the recorded weighings, and the titrant volume is what is compared.
@@ -48,14 +49,11 @@ public final class BatchAnalyzer {
 
     private final SubstanceLibrary library;
     private final RecipeResolver resolver;
-    private final FormulationReader reader;
     private final Analyzer analyzer;
-    private final JsonReader json = new JsonReader();
 
-    public BatchAnalyzer(SchemaCatalog schemas, SubstanceLibrary library, Analyzer analyzer) {
+    public BatchAnalyzer(SubstanceLibrary library, Analyzer analyzer) {
         this.library = library;
         this.resolver = new RecipeResolver(library);
-        this.reader = new FormulationReader(schemas);
         this.analyzer = analyzer;
     }
 
@@ -72,22 +70,27 @@ public final class BatchAnalyzer {
         List<Made> made = made(r, master);
         List<BatchAnalysis.AdditionCheck> checks = compare(master, made, scale);
         Plan plan = plan(r, master, made);
-        double[] recorded = predict(r, master, made, plan, 1);
+        Predicted[] recorded = predict(r, master, made, plan, 1);
         List<BatchAnalysis.Observation> observations = new ArrayList<>();
         for (int i = 0; i < plan.observations.size(); i++) {
             BatchAnalysis.Observation o = plan.observations.get(i);
-            observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i], o.pointer()));
+            observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i].value(),
+                    o.pointer(), recorded[i].unpredicted()));
         }
         List<BatchAnalysis.Candidate> candidates = new ArrayList<>();
         if (observations.stream().anyMatch(BatchAnalyzer::unexplained)) {
-            candidates.add(new BatchAnalysis.Candidate("as recorded", recorded, further(r, master, made, plan, 1)));
+            candidates.add(new BatchAnalysis.Candidate("as recorded", values(recorded), further(r, master, made, plan, 1),
+                    unpredicted(recorded)));
             for (Scenario s : scenarios(made, master)) {
-                double[] p = predict(r, master, s.made(), plan, s.titrantFactor());
-                candidates.add(new BatchAnalysis.Candidate(s.cause(), p, further(r, master, s.made(), plan,
-                        s.titrantFactor())));
+                Predicted[] p = predict(r, master, s.made(), plan, s.titrantFactor());
+                candidates.add(new BatchAnalysis.Candidate(s.cause(), values(p), further(r, master, s.made(), plan,
+                        s.titrantFactor()), unpredicted(p)));
             }
         }
-        return new BatchAnalysis(r, master, scale, checks, observations, candidates, asMade(r, master, made));
+        List<Caveat> caveats = new ArrayList<>();
+        Optional<FormulationAnalysis> asMade = asMade(r, master, made, caveats);
+        return new BatchAnalysis(r, master, scale, checks, observations, candidates, specifiedPh(r, master, made),
+                asMade, caveats);
     }
 
     private static boolean unexplained(BatchAnalysis.Observation o) {
@@ -222,7 +225,7 @@ public final class BatchAnalyzer {
                     : String.format(Locale.ROOT, "osmolality at step %d", m.step());
             obs.add(new BatchAnalysis.Observation(m.kind() == BatchRecord.Measurement.Kind.PH
                     ? BatchAnalysis.Observation.Kind.PH : BatchAnalysis.Observation.Kind.OSMOLALITY, label, m.value(),
-                    Double.NaN, m.pointer()));
+                    Double.NaN, m.pointer(), Optional.empty()));
             measured.add(m);
         }
         if (qs) {
@@ -232,7 +235,7 @@ public final class BatchAnalyzer {
                     .mapToDouble(x -> x.moles() / x.molarity() * 1000).sum();
             obs.add(new BatchAnalysis.Observation(BatchAnalysis.Observation.Kind.TITRANT,
                     "mL of " + first.substance().name() + " " + molarityText(first.molarity()), ml, Double.NaN,
-                    first.recorded().pointer() + "/amount"));
+                    first.recorded().pointer() + "/amount", Optional.empty()));
         }
         return new Plan(obs, measured, titrantStep, goal);
     }
@@ -284,20 +287,45 @@ public final class BatchAnalyzer {
         return out;
     }
 
-    /** The prediction of each observation of the plan under a scenario; NaN where the engine gives no number. */
-    private double[] predict(BatchRecord r, Recipe master, List<Made> made, Plan plan, double titrantFactor) {
-        double[] out = new double[plan.observations.size()];
+    /** A predicted value, or why the engine cannot give one. */
+    private record Predicted(double value, Optional<String> unpredicted) {
+        static Predicted of(double value) {
+            return new Predicted(value, Optional.empty());
+        }
+
+        static Predicted none(String why) {
+            return new Predicted(Double.NaN, Optional.of(why));
+        }
+    }
+
+    /** An equilibrium, or why the engine cannot stand behind one. */
+    private record Outcome(Optional<EquilibriumState> state, String unsolved) {
+        Predicted map(java.util.function.ToDoubleFunction<EquilibriumState> f) {
+            return state.map(s -> Predicted.of(f.applyAsDouble(s))).orElseGet(() -> Predicted.none(unsolved));
+        }
+    }
+
+    /** The prediction of each observation of the plan under a scenario, or why there is none. */
+    private Predicted[] predict(BatchRecord r, Recipe master, List<Made> made, Plan plan, double titrantFactor) {
+        Predicted[] out = new Predicted[plan.observations.size()];
         for (int i = 0; i < plan.measured.size(); i++) {
             BatchRecord.Measurement m = plan.measured.get(i);
             double kelvin = m.kelvin().orElse(OSMOLALITY_KELVIN);
-            Optional<EquilibriumState> s = state(r, master, upTo(made, m.step()), m.atVolume(), kelvin, titrantFactor);
-            out[i] = s.map(x -> m.kind() == BatchRecord.Measurement.Kind.PH ? x.pH() : x.osmolality() * 1000)
-                    .orElse(Double.NaN);
+            Outcome s = state(r, master, upTo(made, m.step()), m.atVolume(), kelvin, titrantFactor);
+            out[i] = s.map(x -> m.kind() == BatchRecord.Measurement.Kind.PH ? x.pH() : x.osmolality() * 1000);
         }
         if (out.length > plan.measured.size()) {
             out[out.length - 1] = titrantVolume(r, master, made, plan, titrantFactor);
         }
         return out;
+    }
+
+    private static double[] values(Predicted[] p) {
+        return java.util.Arrays.stream(p).mapToDouble(Predicted::value).toArray();
+    }
+
+    private static Optional<String> unpredicted(Predicted[] p) {
+        return java.util.Arrays.stream(p).map(Predicted::unpredicted).flatMap(Optional::stream).findFirst();
     }
 
     /** Predictions of the measurements the record lacks that would tell candidates apart. */
@@ -320,8 +348,9 @@ public final class BatchAnalyzer {
         return out;
     }
 
-    private static OptionalDouble optional(Optional<Double> x) {
-        return x.map(OptionalDouble::of).orElse(OptionalDouble.empty());
+    /** A further measurement only tells candidates apart where it can be predicted; one that cannot is left blank. */
+    private static OptionalDouble optional(Predicted x) {
+        return x.unpredicted().isPresent() ? OptionalDouble.empty() : OptionalDouble.of(x.value());
     }
 
     private static List<Made> upTo(List<Made> made, int step) {
@@ -329,59 +358,79 @@ public final class BatchAnalyzer {
     }
 
     /** The equilibrium of some additions at a fraction of the batch volume and a temperature. */
-    private Optional<EquilibriumState> state(BatchRecord r, Recipe master, List<Made> made, double atVolume,
-                                             double kelvin, double titrantFactor) {
+    private Outcome state(BatchRecord r, Recipe master, List<Made> made, double atVolume, double kelvin,
+                          double titrantFactor) {
         if (made.isEmpty()) {
-            return Optional.empty();
+            return new Outcome(Optional.empty(), "no addition is recorded by then");
         }
         try {
-            Recipe recipe = recipe(r, master, made, atVolume, List.of(kelvin), titrantFactor, Optional.empty());
-            return analyzer.forecast(recipe).states().get(0);
-        } catch (DocumentException | IllegalArgumentException e) {
-            return Optional.empty();
+            Recipe recipe = recipe(r, master, made, atVolume, conditions(List.of("c0"), List.of(kelvin)),
+                    titrantFactor, Optional.empty());
+            Analyzer.Forecast f = analyzer.forecast(recipe);
+            return new Outcome(f.states().get(0), reasons(f.caveats()));
+        } catch (DocumentException e) {
+            return new Outcome(Optional.empty(), problems(e));
         }
+    }
+
+    private static String reasons(List<Caveat> caveats) {
+        return caveats.isEmpty() ? "the engine gives no determinate result"
+                : String.join("; ", caveats.stream().map(Caveat::message).toList());
+    }
+
+    private static String problems(DocumentException e) {
+        return "the batch cannot be computed: " + String.join("; ", e.problems().stream().map(Problem::message).toList());
     }
 
     /**
      * mL of the recorded titrant stock the recorded weighings need for the meter to read the goal pH: a q.s. of the
      * master's titrant line at the true strength (recorded × factor), in volume of that stock.
      */
-    private double titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
-        Made titrant = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElse(null);
-        if (titrant == null) {
-            return Double.NaN;
+    private Predicted titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
+        Optional<Made> stocked = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst();
+        if (stocked.isEmpty()) {
+            return Predicted.none("no titrant from a stock is recorded");
         }
+        Made titrant = stocked.get();
         int goalStep = plan.goal.map(BatchRecord.Measurement::step).orElse(Integer.MAX_VALUE);
         List<Made> before = made.stream().filter(x -> !x.titrant() && x.recorded().step() <= goalStep).toList();
         double goalPH;
         double goalKelvin;
         double atVolume;
+        String goal;
         if (plan.goal.isPresent()) {
-            goalPH = plan.goal.get().value();
-            goalKelvin = plan.goal.get().kelvin().getAsDouble();
-            atVolume = plan.goal.get().atVolume();
+            BatchRecord.Measurement g = plan.goal.get();
+            goalPH = g.value();
+            goalKelvin = g.kelvin().getAsDouble();
+            atVolume = g.atVolume();
+            goal = String.format(Locale.ROOT, "the pH %.2f read at step %d (%s)", goalPH, g.step(), g.pointer());
         } else {
             Formulation.Adjustment adj = master.titrants().get(0).line().adjustTo().orElseThrow();
             Optional<Formulation.PhTarget> target = master.formulation().pHTarget();
             if (adj.pH().isEmpty() && target.isEmpty()) {
-                return Double.NaN;
+                return Predicted.none("no pH was read after the titrant and the master states no pH to adjust to");
             }
             goalPH = adj.pH().isPresent() ? adj.pH().getAsDouble() : target.get().midpoint();
             goalKelvin = adj.kelvin();
             atVolume = adj.atVolume();
+            goal = String.format(Locale.ROOT, "the master's pH %.2f (no pH was read after the titrant)", goalPH);
         }
+        if (before.isEmpty()) {
+            return Predicted.none("no addition is recorded before the titrant");
+        }
+        String why = "the q.s. to " + goal + " cannot be predicted: ";
         try {
-            Recipe recipe = recipe(r, master, before, 1, List.of(goalKelvin), factor,
+            Recipe recipe = recipe(r, master, before, 1, conditions(List.of("c0"), List.of(goalKelvin)), factor,
                     Optional.of(new Goal(titrant.substance(), titrant.molarity() * factor, goalPH, goalKelvin, atVolume)));
             Analyzer.Forecast f = analyzer.forecast(recipe);
             for (Map.Entry<Ingredient, OptionalDouble> e : f.doses().entrySet()) {
                 if (e.getKey().substance().name().equals(titrant.substance().name()) && e.getValue().isPresent()) {
-                    return e.getValue().getAsDouble() / (titrant.molarity() * factor) * 1000;
+                    return Predicted.of(e.getValue().getAsDouble() / (titrant.molarity() * factor) * 1000);
                 }
             }
-            return Double.NaN;
-        } catch (DocumentException | IllegalArgumentException e) {
-            return Double.NaN;
+            return Predicted.none(why + reasons(f.caveats()));
+        } catch (DocumentException e) {
+            return Predicted.none(why + problems(e));
         }
     }
 
@@ -389,64 +438,98 @@ public final class BatchAnalyzer {
     private record Goal(Substance titrant, double molarity, double pH, double kelvin, double atVolume) {
     }
 
-    /**
-     * The batch (or part of it) as a formulation of its own: every addition in mmol, on the batch's basis (at a
-     * fraction of its volume), at the given temperatures; the titrant either as recorded (times the factor) or, for
-     * a goal, as a q.s.
-     */
-    private Recipe recipe(BatchRecord r, Recipe master, List<Made> made, double atVolume, List<Double> kelvins,
-                          double titrantFactor, Optional<Goal> goal) {
-        List<String> names = new ArrayList<>();
-        for (int i = 0; i < kelvins.size(); i++) {
-            names.add("c" + i);
+    private static List<Formulation.Condition> conditions(List<String> names, List<Double> kelvins) {
+        List<Formulation.Condition> out = new ArrayList<>();
+        for (int i = 0; i < names.size(); i++) {
+            out.add(new Formulation.Condition(names.get(i), kelvins.get(i), false, "/conditions/" + i));
         }
-        return recipe(r, master, made, atVolume, names, kelvins, titrantFactor, goal);
+        return out;
     }
 
-    private Recipe recipe(BatchRecord r, Recipe master, List<Made> made, double atVolume, List<String> names,
-                          List<Double> kelvins, double titrantFactor, Optional<Goal> goal) {
+    /**
+     * The batch (or part of it) as a formulation of its own, built as objects: every addition in mmol, on the batch's
+     * basis (at a fraction of its volume), at the given conditions; the titrant either as recorded (times the factor)
+     * or, for a goal, as a q.s. Nothing a record says is written out as text and read again.
+     */
+    private Recipe recipe(BatchRecord r, Recipe master, List<Made> made, double atVolume,
+                          List<Formulation.Condition> conditions, double titrantFactor, Optional<Goal> goal) {
         Formulation m = master.formulation();
-        StringBuilder c = new StringBuilder();
         Map<String, Double> moles = new LinkedHashMap<>();
         for (Made x : made) {
             moles.merge(x.substance().name(), x.moles() * (x.titrant() ? titrantFactor : 1), Double::sum);
         }
-        moles.forEach((name, n) -> c.append(c.length() == 0 ? "" : ",").append(String.format(Locale.ROOT,
-                "{\"substance\": %s, \"amount\": \"%.9g mmol\"}", quote(name), n * 1000)));
-        goal.ifPresent(g -> c.append(c.length() == 0 ? "" : ",").append(String.format(Locale.ROOT,
-                "{\"substance\": %s, \"stock\": {\"concentration\": \"%.9g mol/L\"}, \"adjustTo\": {\"pH\": %.6f, "
-                        + "\"temperature\": \"%.4f K\", \"atVolume\": %.6f}}", quote(g.titrant().name()), g.molarity(),
-                g.pH(), g.kelvin(), g.atVolume())));
-        StringBuilder t = new StringBuilder();
-        for (int i = 0; i < kelvins.size(); i++) {
-            t.append(i == 0 ? "" : ",").append(String.format(Locale.ROOT,
-                    "{\"name\": %s, \"temperature\": \"%.4f K\"}", quote(names.get(i)), kelvins.get(i)));
-        }
-        String basis = m.basis().finalVolume()
-                ? String.format(Locale.ROOT, "{\"finalVolume\": \"%.9g L\"}", r.batchSize() * atVolume)
-                : String.format(Locale.ROOT, "{\"waterMass\": \"%.9g kg\"}", r.batchSize());
-        String text = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": " + quote(r.id() + " as made")
-                + ", \"title\": " + quote("batch " + r.batch() + " as made")
-                + m.intendedUse().map(u -> ", \"intendedUse\": " + quote(u)).orElse("") + ", \"basis\": " + basis
-                + ", \"components\": [" + c + "], \"conditions\": [" + t + "]}";
-        Formulation f = reader.read(json.read(r.document().source() + " (as made)", text.getBytes(StandardCharsets.UTF_8)));
+        List<Formulation.Line> lines = new ArrayList<>();
+        moles.forEach((name, n) -> {
+            String p = "/components/" + lines.size();
+            lines.add(new Formulation.Line(lines.size(), name, Optional.of(Quantity.of(n * 1000, "mmol")),
+                    Optional.empty(), Optional.empty(), Optional.empty(), p, Optional.empty()));
+        });
+        goal.ifPresent(g -> {
+            String p = "/components/" + lines.size();
+            lines.add(new Formulation.Line(lines.size(), g.titrant().name(), Optional.empty(),
+                    Optional.of(new Formulation.Stock(Quantity.of(g.molarity(), "mol/L"), Optional.empty(), p + "/stock")),
+                    Optional.of(new Formulation.Adjustment(OptionalDouble.of(g.pH()), g.kelvin(), p + "/adjustTo",
+                            g.atVolume())), Optional.empty(), p, Optional.empty()));
+        });
+        Formulation.Basis basis = m.basis().finalVolume()
+                ? new Formulation.Basis(true, r.batchSize() * atVolume, "/basis/finalVolume")
+                : new Formulation.Basis(false, r.batchSize(), "/basis/waterMass");
+        SourceDocument doc = new SourceDocument(r.document().source() + " (as made)",
+                JsonNodeFactory.instance.objectNode(), Map.of());
+        Formulation f = new Formulation(doc, r.id() + " as made", Optional.of("batch " + r.batch() + " as made"),
+                Optional.empty(), m.intendedUse(), basis, lines, Optional.empty(), conditions, Optional.empty(),
+                Optional.empty());
         return resolver.resolve(f);
     }
 
-    /** The whole batch as recorded, analysed at the master's own conditions, for the report. */
-    private Optional<FormulationAnalysis> asMade(BatchRecord r, Recipe master, List<Made> made) {
+    /** The whole batch as recorded, analysed at the master's own conditions, for the report; a failure is a caveat. */
+    private Optional<FormulationAnalysis> asMade(BatchRecord r, Recipe master, List<Made> made, List<Caveat> caveats) {
+        List<Formulation.Condition> cs = master.formulation().conditions().stream().filter(c -> !c.implicit()).toList();
         try {
-            List<Formulation.Condition> cs = master.formulation().conditions().stream().filter(c -> !c.implicit()).toList();
-            Recipe recipe = recipe(r, master, made, 1, cs.stream().map(Formulation.Condition::name).toList(),
-                    cs.stream().map(Formulation.Condition::kelvin).toList(), 1, Optional.empty());
+            Recipe recipe = recipe(r, master, made, 1, conditions(cs.stream().map(Formulation.Condition::name).toList(),
+                    cs.stream().map(Formulation.Condition::kelvin).toList()), 1, Optional.empty());
             return Optional.of(analyzer.analyze(recipe));
-        } catch (DocumentException | IllegalArgumentException e) {
+        } catch (DocumentException e) {
+            caveats.add(Caveat.warning("batch-as-made", "the batch as made cannot be shown at the master's conditions: "
+                    + problems(e)));
             return Optional.empty();
         }
     }
 
-    private static String quote(String s) {
-        return "\"" + s.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
+    /**
+     * Each pH reading of the finished batch with the master's pH target at its temperature. At another temperature
+     * than the target's, the target moves with the batch: by the pH change the engine predicts for the additions as
+     * recorded between the two temperatures (a reading at 25 °C of a target set at 20 °C is held to the target plus
+     * that drift). Where the drift cannot be predicted, the reading cannot be judged and says why.
+     */
+    private List<BatchAnalysis.SpecifiedPh> specifiedPh(BatchRecord r, Recipe master, List<Made> made) {
+        Optional<Formulation.PhTarget> target = master.formulation().pHTarget();
+        List<BatchAnalysis.SpecifiedPh> out = new ArrayList<>();
+        if (target.isEmpty()) {
+            return out;
+        }
+        Formulation.PhTarget t = target.get();
+        for (BatchRecord.Measurement m : r.measurements()) {
+            if (m.kind() != BatchRecord.Measurement.Kind.PH || !r.ofFinishedBatch(m)) {
+                continue;
+            }
+            double kelvin = m.kelvin().getAsDouble();
+            String label = String.format(Locale.ROOT, "pH at step %d (%.1f °C)", m.step(), kelvin - Thermo.KELVIN_OFFSET);
+            if (Formulation.sameTemperature(kelvin, t.kelvin())) {
+                out.add(new BatchAnalysis.SpecifiedPh(label, m.value(), t.min(), t.max(), t.kelvin(), 0, m.pointer(),
+                        Optional.empty()));
+                continue;
+            }
+            List<Made> upTo = upTo(made, m.step());
+            Predicted at = state(r, master, upTo, 1, kelvin, 1).map(EquilibriumState::pH);
+            Predicted atTarget = state(r, master, upTo, 1, t.kelvin(), 1).map(EquilibriumState::pH);
+            Optional<String> why = at.unpredicted().or(atTarget::unpredicted);
+            double shift = why.isPresent() ? Double.NaN : at.value() - atTarget.value();
+            out.add(new BatchAnalysis.SpecifiedPh(label, m.value(), t.min() + shift, t.max() + shift, t.kelvin(), shift,
+                    m.pointer(), why.map(w -> String.format(Locale.ROOT, "the pH target (at %.1f °C) cannot be moved to "
+                    + "the reading's temperature: %s", t.kelvin() - Thermo.KELVIN_OFFSET, w))));
+        }
+        return out;
     }
 
     static String molarityText(double molarity) {

@@ -23,6 +23,15 @@ public record BatchRecord(SourceDocument document, String id, String batch, Form
         measurements = List.copyOf(measurements);
     }
 
+    /**
+     * A measurement of the finished batch, which the master's specification applies to: taken at or after the last
+     * addition, at full volume. Earlier readings (the pH before adjustment) are in-process and judged by prediction.
+     */
+    public boolean ofFinishedBatch(Measurement m) {
+        int last = additions.stream().mapToInt(Addition::step).max().orElse(0);
+        return m.step() >= last && m.atVolume() == 1;
+    }
+
     /** How a recorded amount relates to the pure substance. */
     public enum Weighed { AS_IS, PURE, ANHYDROUS }
 

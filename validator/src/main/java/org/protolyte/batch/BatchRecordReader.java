@@ -19,6 +19,7 @@ import org.protolyte.document.Location;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
 import org.protolyte.document.SourceDocument;
+import org.protolyte.document.Temperatures;
 import org.protolyte.units.Dimension;
 import org.protolyte.units.Quantity;
 import org.protolyte.units.UnitException;
@@ -33,6 +34,13 @@ import tools.jackson.databind.JsonNode;
 public final class BatchRecordReader {
 
     public static final String SCHEMA = "batch-record.schema.json";
+    /**
+     * A recorded pH lies within 0–14 inclusive, the scale a laboratory pH meter reads (common practice): the
+     * calibration buffers of USP <791> and Ph. Eur. 2.2.3 lie well inside it, and the glass electrode's acid and
+     * alkaline errors grow beyond it, so a value outside is a recording error, not a reading to judge.
+     */
+    static final double MIN_PH = 0;
+    static final double MAX_PH = 14;
 
     private final SchemaCatalog schemas;
     private final FormulationReader formulations;
@@ -182,7 +190,10 @@ public final class BatchRecordReader {
         if (n.has("stock")) {
             Quantity c = quantity(doc, n.get("stock").get("concentration"), p + "/stock/concentration", problems,
                     Dimension.AMOUNT_CONCENTRATION);
-            if (c != null) {
+            if (c != null && !(c.base() > 0)) {
+                problems.add(doc.problem(p + "/stock/concentration", "a stock concentration must be greater than "
+                        + "zero, not " + c));
+            } else if (c != null) {
                 molarity = OptionalDouble.of(c.base());
             }
         }
@@ -229,9 +240,19 @@ public final class BatchRecordReader {
             if (t == null) {
                 return null;
             }
+            Optional<String> implausible = Temperatures.implausible(t);
+            if (implausible.isPresent()) {
+                problems.add(doc.problem(p + "/temperature", implausible.get()));
+                return null;
+            }
             kelvin = OptionalDouble.of(t.base());
         }
         double value = n.get("value").asDouble();
+        if (kind == BatchRecord.Measurement.Kind.PH && !(value >= MIN_PH && value <= MAX_PH)) {
+            problems.add(doc.problem(p + "/value", "a pH reading of " + value + " is outside " + MIN_PH + "–" + MAX_PH
+                    + ", the range a pH meter is calibrated and read in; check the record"));
+            return null;
+        }
         if (kind == BatchRecord.Measurement.Kind.OSMOLALITY && !(value > 0)) {
             problems.add(doc.problem(p + "/value", "an osmolality must be greater than zero"));
             return null;

@@ -136,6 +136,7 @@ final class ReportFile {
         try {
             Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } catch (AtomicMoveNotSupportedException e) {
+            // caught: a file system without atomic rename still gets the report, by a plain replacing move
             Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
         }
     }

@@ -118,12 +118,12 @@ public final class FormulationReader {
             if (q.isEmpty()) {
                 return OptionalDouble.empty();
             }
-            double k = q.get().base();
-            if (!(k > 0)) {
-                problems.add(doc.problem(pointer, "temperature " + q.get() + " is below absolute zero"));
+            Optional<String> implausible = Temperatures.implausible(q.get());
+            if (implausible.isPresent()) {
+                problems.add(doc.problem(pointer, implausible.get()));
                 return OptionalDouble.empty();
             }
-            return OptionalDouble.of(k);
+            return OptionalDouble.of(q.get().base());
         }
 
         private Formulation.Basis basis(JsonNode n) {

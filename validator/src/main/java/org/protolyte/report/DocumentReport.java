@@ -9,6 +9,7 @@ import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.document.Formulation;
+import org.protolyte.document.SourceDocument;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.Finding;
 import org.protolyte.rules.RulePack;
@@ -43,15 +44,35 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
     }
 
     /**
-     * A batch record's report: the findings of the batch rules decide pass or fail; the batch as made is shown (its
-     * conditions), but its own indeterminate conditions do not make the record indeterminate, since the record is
-     * judged by its measurements.
+     * A batch record's report. A measurement the engine could not predict, or a pH reading whose specification could
+     * not be brought to its temperature, is a diagnostic at the measurement's place and makes the record
+     * INDETERMINATE; that outranks a fail, as for a formulation, since a record that cannot be judged in full can never
+     * pass. Otherwise the findings of the batch rules decide pass or fail. The batch as made is shown (its
+     * conditions), but its own indeterminate conditions do not make the record indeterminate: it is judged by its
+     * measurements.
      */
     public static DocumentReport ofBatch(BatchAnalysis b, String sha256, Checker.Verdict verdict, Severity failOn) {
+        SourceDocument doc = b.record().document();
+        List<Diagnostic> diagnostics = new ArrayList<>();
+        for (Caveat c : b.caveats()) {
+            diagnostics.add(new Diagnostic(c.code(), c.severity(), c.message(), Optional.empty(), Optional.empty(),
+                    Optional.empty()));
+        }
+        for (BatchAnalysis.Observation o : b.observations()) {
+            o.unpredicted().ifPresent(why -> diagnostics.add(new Diagnostic("batch-unpredicted",
+                    Caveat.Severity.INDETERMINATE, o.label() + ": no prediction, so this measurement is not judged: "
+                    + why, Optional.empty(), Optional.of(o.pointer()), doc.locate(o.pointer()))));
+        }
+        for (BatchAnalysis.SpecifiedPh p : b.specifiedPh()) {
+            p.unjudged().ifPresent(why -> diagnostics.add(new Diagnostic("batch-specification-unjudged",
+                    Caveat.Severity.INDETERMINATE, p.label() + ": not judged against the specification: " + why,
+                    Optional.empty(), Optional.of(p.pointer()), doc.locate(p.pointer()))));
+        }
+        boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE);
         boolean failed = verdict.findings().stream().anyMatch(x -> x.active() && x.severity().compareTo(failOn) >= 0);
-        return new DocumentReport(b.record().document().source(), Optional.of(sha256), Optional.of(b.record().id()),
-                failed ? Status.FAIL : Status.PASS, b.asMade(), verdict.findings(), List.of(), verdict.packs(),
-                Optional.of(b));
+        Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
+        return new DocumentReport(doc.source(), Optional.of(sha256), Optional.of(b.record().id()), s, b.asMade(),
+                verdict.findings(), diagnostics, verdict.packs(), Optional.of(b));
     }
 
     /** Status from the analysis: indeterminate outranks fail; a finding at or above {@code failOn} fails. */

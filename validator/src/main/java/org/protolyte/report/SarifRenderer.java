@@ -278,6 +278,7 @@ public final class SarifRenderer {
             Path p = Path.of(source);
             return p.isAbsolute() ? Optional.of(p.toUri().toASCIIString()) : Optional.empty();
         } catch (InvalidPathException e) {
+            // caught: a source that is no path on this system stays a relative reference, as given
             return Optional.empty();
         }
     }

@@ -13,6 +13,11 @@ public interface BatchCheckKind extends CheckKind {
 
     List<Finding> check(BatchAnalysis batch, Rule rule);
 
+    /** With the other rules the record is judged by, for a kind that takes a limit from one of them. */
+    default List<Finding> check(BatchAnalysis batch, Rule rule, List<Rule> selection) {
+        return check(batch, rule);
+    }
+
     @Override
     default List<Finding> check(FormulationAnalysis analysis, Rule rule) {
         return List.of();

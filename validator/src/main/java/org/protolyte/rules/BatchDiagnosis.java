@@ -36,7 +36,10 @@ public final class BatchDiagnosis implements BatchCheckKind {
             return List.of();
         }
         List<Fit> fits = new ArrayList<>();
+        List<String> uncomputed = new ArrayList<>();
         for (BatchAnalysis.Candidate c : b.candidates().subList(1, b.candidates().size())) {
+            c.unpredicted().ifPresent(why -> uncomputed.add(uncomputed.isEmpty() ? c.cause() + " (" + why + ")"
+                    : c.cause()));
             double score = 0;
             boolean fits_ = true;
             for (int i = 0; i < obs.size(); i++) {
@@ -75,6 +78,10 @@ public final class BatchDiagnosis implements BatchCheckKind {
             if (fits.size() > 1) {
                 m.append(tellApart(rule, fits));
             }
+        }
+        if (!uncomputed.isEmpty()) {
+            m.append(String.format(Locale.ROOT, "; %d of the usual mistakes could not be predicted and are not judged: ",
+                    uncomputed.size())).append(String.join("; ", uncomputed));
         }
         BatchAnalysis.Observation first = obs.stream().filter(o -> !Double.isNaN(o.predicted())
                 && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted())).findFirst().orElseThrow();

@@ -35,10 +35,13 @@ public final class BatchRisk implements CheckKind {
         for (Robustness.ConditionRobustness c : r.conditions()) {
             if (c.probabilityOutsideTarget().isPresent() && c.probabilityOutsideTarget().getAsDouble() > max) {
                 String pointer = a.recipe().formulation().pHTarget().map(t -> t.pointer()).orElse("");
+                String unsolved = r.samplesUnsolved() == 0 ? "" : String.format(Locale.ROOT, "; %d of them could not "
+                        + "be solved and count as outside (%s)", r.samplesUnsolved(), r.unsolved().orElse("no reason given"));
                 out.add(rule.finding(a.recipe().formulation(), pointer, String.format(Locale.ROOT,
                         "%.1f %% of simulated batches (%d, seed %d) leave the pH target at %s; limit %.1f %%; batch pH "
-                                + "%.3f [%.3f–%.3f]", c.probabilityOutsideTarget().getAsDouble() * 100, r.samplesSolved(),
-                        r.settings().seed(), c.condition(), max * 100, c.pH().mean(), c.pH().p025(), c.pH().p975())));
+                                + "%.3f [%.3f–%.3f]%s", c.probabilityOutsideTarget().getAsDouble() * 100,
+                        r.settings().samples(), r.settings().seed(), c.condition(), max * 100, c.pH().mean(),
+                        c.pH().p025(), c.pH().p975(), unsolved)));
             }
         }
         return out;

@@ -63,9 +63,10 @@ public final class Checker {
     public Verdict check(org.protolyte.batch.BatchAnalysis batch) {
         List<String> selected = selection(batch.record().master().intendedUse());
         List<Finding> out = new ArrayList<>();
-        for (Rule rule : resolved.computeIfAbsent(selected, book::rules)) {
+        List<Rule> rules = resolved.computeIfAbsent(selected, book::rules);
+        for (Rule rule : rules) {
             if (rule.enabled() && book.kinds().get(rule.check()).orElseThrow() instanceof BatchCheckKind k) {
-                out.addAll(k.check(batch, rule));
+                out.addAll(k.check(batch, rule, rules));
             }
         }
         return new Verdict(book.withAncestors(selected), out);

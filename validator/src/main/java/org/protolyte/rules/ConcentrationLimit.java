@@ -39,7 +39,8 @@ public final class ConcentrationLimit implements CheckKind {
             try {
                 substance = Optional.of(a.recipe().library().lookup(rule.text("substance").orElseThrow()));
             } catch (LookupException e) {
-                return List.of();   // the library does not hold it: nothing to judge
+                // caught: the library does not hold the rule's substance, so no document can contain it: nothing to judge
+                return List.of();
             }
         }
         double moles = 0;
