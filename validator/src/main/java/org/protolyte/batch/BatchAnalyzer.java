@@ -76,7 +76,8 @@ public final class BatchAnalyzer {
         List<BatchAnalysis.Observation> observations = new ArrayList<>();
         for (int i = 0; i < plan.observations.size(); i++) {
             BatchAnalysis.Observation o = plan.observations.get(i);
-            observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i], o.pointer()));
+            observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i], o.pointer(),
+                    i < plan.measured.size() ? bufferCapacity(r, master, made, plan.measured.get(i)) : Double.NaN));
         }
         List<BatchAnalysis.Candidate> candidates = new ArrayList<>();
         if (observations.stream().anyMatch(BatchAnalyzer::unexplained)) {
@@ -282,6 +283,15 @@ public final class BatchAnalyzer {
         List<Made> out = new ArrayList<>(made);
         out.set(i, with);
         return out;
+    }
+
+    /** A pH reading's predicted buffer capacity as recorded, mmol/kg of water per pH; NaN for another measurement. */
+    private double bufferCapacity(BatchRecord r, Recipe master, List<Made> made, BatchRecord.Measurement m) {
+        if (m.kind() != BatchRecord.Measurement.Kind.PH || m.kelvin().isEmpty()) {
+            return Double.NaN;
+        }
+        return state(r, master, upTo(made, m.step()), m.atVolume(), m.kelvin().getAsDouble(), 1)
+                .map(x -> x.bufferCapacity() * 1000).orElse(Double.NaN);
     }
 
     /** The prediction of each observation of the plan under a scenario; NaN where the engine gives no number. */
