@@ -427,7 +427,7 @@ public final class Protolyte {
         }
         boolean ownWaivers = verdict.packs().stream().anyMatch(p -> p.documentWaivers());
         List<Finding> findings = waivers.apply(f, sha256, ownWaivers, verdict.findings());
-        return DocumentReport.of(analysis, sha256, new Checker.Verdict(verdict.packs(), findings), failOn);
+        return DocumentReport.of(analysis, sha256, verdict.withFindings(findings), failOn);
     }
 
     /** A batch record: read with its master, compared, recomputed, judged by the batch rules. */

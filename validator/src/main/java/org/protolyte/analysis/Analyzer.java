@@ -292,7 +292,8 @@ public final class Analyzer {
     private Optional<Loads> loads(Recipe recipe, Solution solution, Formulation.Condition c, double pH,
                                   List<Caveat> caveats) {
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
-        if (target.isEmpty()) {
+        // a target holds at its own temperature: another condition's pH is not judged against it
+        if (target.isEmpty() || !Formulation.sameTemperature(c.kelvin(), target.get().kelvin())) {
             return Optional.empty();
         }
         try {
@@ -615,7 +616,7 @@ public final class Analyzer {
                 out.add(dose(recipe, t, needed, startPH, goalPH, goalK, adjustK, explicit, part, caveats));
             }
         }
-        return out;
+        return out.stream().map(r -> r.withStartPH(startPH)).toList();
     }
 
     /**

@@ -14,27 +14,34 @@ import org.protolyte.recipe.Ingredient;
  * @param setpointForTarget where adjustTo states its own pH: the setpoint that would have met the pH target
  * @param atVolume      fraction of the final volume at which the meter is read (1: at volume)
  * @param pHAfterMakingUp where adjusted at part volume: the pH at the adjustment temperature after making up
+ * @param startPH       the pH before any titrant, at the goal's temperature and volume (NaN where not computed): with
+ *                      the goal, the range the titrant crosses
  */
 public record TitrantResult(Ingredient ingredient, Role role, double moles, boolean used,
                             OptionalDouble setpointPH, double adjustKelvin, double goalPH, double goalKelvin,
                             Optional<Unreachable> unreachable, OptionalDouble setpointForTarget, double atVolume,
-                            OptionalDouble pHAfterMakingUp) {
+                            OptionalDouble pHAfterMakingUp, double startPH) {
 
     public TitrantResult(Ingredient ingredient, Role role, double moles, boolean used, OptionalDouble setpointPH,
                          double adjustKelvin, double goalPH, double goalKelvin, Optional<Unreachable> unreachable) {
         this(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin, unreachable,
-                OptionalDouble.empty(), 1, OptionalDouble.empty());
+                OptionalDouble.empty(), 1, OptionalDouble.empty(), Double.NaN);
+    }
+
+    public TitrantResult withStartPH(double pH) {
+        return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
+                unreachable, setpointForTarget, atVolume, pHAfterMakingUp, pH);
     }
 
     public TitrantResult withSetpointForTarget(double pH) {
         return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
-                unreachable, OptionalDouble.of(pH), atVolume, pHAfterMakingUp);
+                unreachable, OptionalDouble.of(pH), atVolume, pHAfterMakingUp, startPH);
     }
 
     /** Adjusted at a part volume: the fraction, and the pH at the adjustment temperature once made up. */
     public TitrantResult withMakingUp(double fraction, double pH) {
         return new TitrantResult(ingredient, role, moles, used, setpointPH, adjustKelvin, goalPH, goalKelvin,
-                unreachable, setpointForTarget, fraction, OptionalDouble.of(pH));
+                unreachable, setpointForTarget, fraction, OptionalDouble.of(pH), startPH);
     }
 
     public enum Role { ACID, BASE }

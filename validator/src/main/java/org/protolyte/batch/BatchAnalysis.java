@@ -54,10 +54,18 @@ public record BatchAnalysis(BatchRecord record, Recipe master, double scale, Lis
      * A measured value and the engine's prediction for the batch as recorded: a pH at a step and temperature, an
      * osmolality (mOsm/kg), or the volume of titrant (mL) against the q.s. the recorded weighings need to reach the
      * pH the meter showed after it. {@code predicted} is NaN where the engine cannot stand behind a number, and
-     * {@code unpredicted} then says why.
+     * {@code unpredicted} then says why. {@code bufferCapacity}, for a pH: the predicted β of the batch at that step,
+     * mmol per kg of water per pH (NaN where not known), which says how far traces and dissolved CO2 can move the
+     * reading.
      */
     public record Observation(Kind kind, String label, double measured, double predicted, String pointer,
-                              Optional<String> unpredicted) {
+                              Optional<String> unpredicted, double bufferCapacity) {
+
+        public Observation(Kind kind, String label, double measured, double predicted, String pointer,
+                           Optional<String> unpredicted) {
+            this(kind, label, measured, predicted, pointer, unpredicted, Double.NaN);
+        }
+
         public enum Kind {
             PH, OSMOLALITY, TITRANT;
 

@@ -75,7 +75,8 @@ public final class BatchAnalyzer {
         for (int i = 0; i < plan.observations.size(); i++) {
             BatchAnalysis.Observation o = plan.observations.get(i);
             observations.add(new BatchAnalysis.Observation(o.kind(), o.label(), o.measured(), recorded[i].value(),
-                    o.pointer(), recorded[i].unpredicted()));
+                    o.pointer(), recorded[i].unpredicted(),
+                    i < plan.measured.size() ? bufferCapacity(r, master, made, plan.measured.get(i)) : Double.NaN));
         }
         List<BatchAnalysis.Candidate> candidates = new ArrayList<>();
         if (observations.stream().anyMatch(BatchAnalyzer::unexplained)) {
@@ -285,6 +286,15 @@ public final class BatchAnalyzer {
         List<Made> out = new ArrayList<>(made);
         out.set(i, with);
         return out;
+    }
+
+    /** A pH reading's predicted buffer capacity as recorded, mmol/kg of water per pH; NaN for another measurement. */
+    private double bufferCapacity(BatchRecord r, Recipe master, List<Made> made, BatchRecord.Measurement m) {
+        if (m.kind() != BatchRecord.Measurement.Kind.PH || m.kelvin().isEmpty()) {
+            return Double.NaN;
+        }
+        return state(r, master, upTo(made, m.step()), m.atVolume(), m.kelvin().getAsDouble(), 1)
+                .map(x -> x.bufferCapacity() * 1000).value();
     }
 
     /** A predicted value, or why the engine cannot give one. */

@@ -22,7 +22,8 @@ import picocli.CommandLine.Parameters;
 @Command(name = "diff", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Compares two revisions of a formulation: components, predicted values per condition, "
                 + "findings.%nExit codes: 0 no new failing finding, 1 the new revision fails on a finding the old "
-                + "one did not, 2 invalid input or usage.")
+                + "one did not, 2 invalid input or usage (a batch record, or revisions of different documents without "
+                + "--allow-different-id), 3 the new revision is indeterminate, 4 internal fault.")
 public final class DiffCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "OLD")
@@ -37,6 +38,9 @@ public final class DiffCommand implements Callable<Integer> {
     @Option(names = "--fail-on", paramLabel = "SEVERITY",
             description = "error (default), warning or note.")
     Severity failOn = Severity.ERROR;
+
+    @Option(names = "--allow-different-id", description = "Compare documents whose ids differ.")
+    boolean allowDifferentId;
 
     @Mixin
     Setup setup;
@@ -60,14 +64,31 @@ public final class DiffCommand implements Callable<Integer> {
         }
         DocumentReport old = protolyte.check(before);
         DocumentReport now = protolyte.check(after);
+        if (old.batch().isPresent() || now.batch().isPresent()) {
+            err.println("protolyte: " + (old.batch().isPresent() ? before : after) + " is a batch record, not a "
+                    + "revision of a formulation; diff compares formulations");
+            return 2;
+        }
+        if (old.status() != Status.INVALID && now.status() != Status.INVALID && !old.id().equals(now.id())
+                && !allowDifferentId) {
+            err.println("protolyte: " + before + " is " + old.id().orElse("(no id)") + " and " + after + " is "
+                    + now.id().orElse("(no id)") + ": not two revisions of one document (--allow-different-id "
+                    + "compares them anyway)");
+            return 2;
+        }
         RevisionDiff diff = RevisionDiff.compare(old, now);
+        // the new revision's own verdict comes first: one that can never pass does not exit 0
         int exit = old.status() == Status.INVALID || now.status() == Status.INVALID ? 2
+                : now.status() == Status.INDETERMINATE || now.status() == Status.FAULT ? now.status().exitCode()
                 : diff.newFailure(threshold) ? 1 : 0;
         PrintWriter out = spec.commandLine().getOut();
         out.print(format.equals("json") ? new DiffRenderer().json(diff, exit) : new DiffRenderer().text(diff));
         if (exit == 2) {
             err.println("protolyte: " + (old.status() == Status.INVALID ? before : after)
                     + " is not a valid formulation document; 'protolyte check' names its problems");
+        } else if (exit == 3) {
+            err.println("protolyte: " + after + " is indeterminate: it cannot pass ('protolyte check' gives the "
+                    + "diagnostics)");
         }
         out.flush();
         return exit;

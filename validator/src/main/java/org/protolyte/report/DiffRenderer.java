@@ -17,7 +17,8 @@ public final class DiffRenderer {
         b.append("Protolyte ").append(toolVersion()).append(" — revision comparison").append(NL);
         b.append("  old: ").append(label(d.before())).append(NL);
         b.append("  new: ").append(label(d.after())).append(NL);
-        b.append(NL).append("components:").append(d.components().isEmpty() ? " unchanged" : "").append(NL);
+        d.basis().ifPresent(x -> b.append(NL).append(x).append(NL));
+        b.append(NL).append("components (mmol per L of solution or kg of water):").append(d.components().isEmpty() ? " unchanged" : "").append(NL);
         for (RevisionDiff.ComponentChange c : d.components()) {
             switch (c.kind()) {
                 case ADDED -> b.append(String.format(Locale.ROOT, "  + %s: %s (%.4g mmol)%n", c.substance(),
@@ -52,6 +53,7 @@ public final class DiffRenderer {
         root.putObject("tool").put("name", "Protolyte").put("version", toolVersion()).put("caution", RunReport.CAUTION);
         document(root.putObject("old"), d.before());
         document(root.putObject("new"), d.after());
+        d.basis().ifPresent(x -> root.put("basis", x));
         ArrayNode comps = root.putArray("components");
         for (RevisionDiff.ComponentChange c : d.components()) {
             ObjectNode o = comps.addObject().put("change", c.kind().name().toLowerCase(Locale.ROOT))

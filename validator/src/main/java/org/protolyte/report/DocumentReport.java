@@ -92,6 +92,10 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
                         pointer.isEmpty() ? Optional.empty() : f.document().locate(pointer)));
             }
         }
+        for (Checker.Unjudged u : verdict.unjudged()) {
+            diagnostics.add(new Diagnostic("rule-not-judged", Caveat.Severity.INDETERMINATE, u.reason(),
+                    Optional.empty(), Optional.empty(), Optional.empty()));
+        }
         boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE)
                 || a.conditions().stream().anyMatch(r -> !r.determinate());
         boolean failed = findings.stream().anyMatch(x -> x.active() && x.severity().compareTo(failOn) >= 0);

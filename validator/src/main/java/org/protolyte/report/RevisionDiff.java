@@ -22,11 +22,14 @@ import org.protolyte.rules.Severity;
  * findings by rule and by the component or condition they concern.
  */
 public record RevisionDiff(DocumentReport before, DocumentReport after, List<ComponentChange> components,
-                           List<ValueChange> values, List<FindingChange> findings) {
+                           List<ValueChange> values, List<FindingChange> findings, Optional<String> basis) {
 
     public enum Kind { ADDED, REMOVED, CHANGED }
 
-    /** A component line; amounts in mmol per basis so that different units compare. */
+    /**
+     * A component line; amounts in mmol per litre of solution (finalVolume) or per kg of water (waterMass), so that
+     * different units and batch sizes compare: 8 g in 1 L and 4 g in 500 mL are the same recipe.
+     */
     public record ComponentChange(Kind kind, String substance, Optional<String> was, Optional<String> now,
                                   double mmolBefore, double mmolAfter) {
     }
@@ -63,7 +66,29 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
             components(a, b, components);
             values(a, b, values);
         }
-        return new RevisionDiff(before, after, components, values, findings(before, after));
+        return new RevisionDiff(before, after, components, values, findings(before, after), basis(before, after));
+    }
+
+    /** The basis as a reader names it, where the two revisions differ in it. */
+    private static Optional<String> basis(DocumentReport before, DocumentReport after) {
+        if (before.analysis().isEmpty() || after.analysis().isEmpty()) {
+            return Optional.empty();
+        }
+        Formulation.Basis x = before.analysis().get().recipe().formulation().basis();
+        Formulation.Basis y = after.analysis().get().recipe().formulation().basis();
+        if (x.finalVolume() == y.finalVolume() && Math.abs(x.amount() - y.amount()) <= 1e-12 * x.amount()) {
+            return Optional.empty();
+        }
+        String change = x.finalVolume() == y.finalVolume() ? "batch size" : "basis";
+        return Optional.of(change + " " + basisText(x) + " → " + basisText(y)
+                + (x.finalVolume() == y.finalVolume() ? "; amounts compared per " + (x.finalVolume() ? "litre of solution"
+                : "kg of water") : "; amounts compared per litre of solution and per kg of water are not alike: "
+                + "check every amount"));
+    }
+
+    private static String basisText(Formulation.Basis b) {
+        return b.finalVolume() ? Numbers.significant(b.amount(), 6).toPlainString() + " L final volume"
+                : Numbers.significant(b.amount(), 6).toPlainString() + " kg of water";
     }
 
     private static Map<String, Ingredient> bySubstance(FormulationAnalysis a) {
@@ -74,8 +99,9 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
         return out;
     }
 
+    /** mmol per litre (finalVolume) or per kg of water (waterMass) of the basis. */
     private static double mmol(FormulationAnalysis a, Ingredient i) {
-        return a.solution().moles().getOrDefault(i, 0.0) * 1000;
+        return a.solution().moles().getOrDefault(i, 0.0) * 1000 / a.recipe().formulation().basis().amount();
     }
 
     private static Optional<String> written(Ingredient i) {
@@ -93,7 +119,10 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
             } else {
                 double x = mmol(a, e.getValue());
                 double y = mmol(b, n);
-                boolean sameText = written(e.getValue()).equals(written(n));
+                // the written amounts differ whenever the batch size does: compare concentrations, and the text only
+                // for a q.s. line, whose amount is a prediction
+                boolean sameText = e.getValue().kind() != Ingredient.Kind.TITRANT
+                        || written(e.getValue()).equals(written(n));
                 boolean titrant = e.getValue().kind() == Ingredient.Kind.TITRANT;   // its q.s. is a predicted value
                 if (!sameText || !titrant && Math.abs(x - y) > 1e-9 * Math.max(1, Math.abs(x))) {
                     out.add(new ComponentChange(Kind.CHANGED, e.getKey(), written(e.getValue()), written(n), x, y));
@@ -118,13 +147,15 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
                 add(out, where, "pH", "", pH(x), pH(y));
                 add(out, where, "buffer capacity", "mmol/L per pH", beta(x), beta(y));
                 add(out, where, "ionic strength", "mol/kg", ionic(x), ionic(y));
+                add(out, where, "osmolality", "mOsm/kg", osmolality(x), osmolality(y));
             }
         }
         for (TitrantResult x : a.titrants()) {
             for (TitrantResult y : b.titrants()) {
                 if (x.ingredient().substance().name().equals(y.ingredient().substance().name())) {
-                    add(out, "q.s. " + x.ingredient().substance().name(), "amount", "mmol per basis",
-                            x.moles() * 1000, y.moles() * 1000);
+                    add(out, "q.s. " + x.ingredient().substance().name(), "amount", "mmol per L or kg of basis",
+                            x.moles() * 1000 / a.recipe().formulation().basis().amount(),
+                            y.moles() * 1000 / b.recipe().formulation().basis().amount());
                 }
             }
         }
@@ -143,6 +174,10 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
 
     private static double beta(ConditionResult c) {
         return c.determinate() ? c.bufferCapacityPerLitre() * 1000 : Double.NaN;
+    }
+
+    private static double osmolality(ConditionResult c) {
+        return c.determinate() ? c.state().orElseThrow().osmolality() * 1000 : Double.NaN;
     }
 
     private static double ionic(ConditionResult c) {

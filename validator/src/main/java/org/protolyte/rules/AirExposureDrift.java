@@ -32,8 +32,9 @@ public final class AirExposureDrift implements CheckKind {
             double change = c.pHInAir().getAsDouble() - pH;
             if (Math.abs(change) > max) {
                 out.add(rule.finding(a.recipe().formulation(), Conditions.pointer(c), String.format(Locale.ROOT,
-                        "in room air the pH at %s (%.0f °C) moves from %.2f to %.2f (%+.2f; limit ±%.2f)",
-                        c.condition().name(), Conditions.celsius(c), pH, c.pHInAir().getAsDouble(), change, max)));
+                        "in room air the pH at %s (%.0f °C) moves from %.2f to %.2f (%+.2f%s)",
+                        c.condition().name(), Conditions.celsius(c), pH, c.pHInAir().getAsDouble(), change,
+                        Conditions.limit(";", max))));
             }
         }
         return out;

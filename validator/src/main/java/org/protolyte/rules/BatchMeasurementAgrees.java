@@ -13,6 +13,13 @@ import org.protolyte.batch.BatchAnalysis;
  */
 public abstract class BatchMeasurementAgrees implements BatchCheckKind {
 
+    /**
+     * mmol/L of strong acid or base that traces in the materials and CO2 taken up during a reading may carry, and the
+     * buffer capacity (mmol/kg per pH) below which a reading is not compared at all: common practice.
+     */
+    static final double TRACE_LOAD = 0.2;
+    static final double UNBUFFERED_BELOW = 1.0;
+
     private final String id;
     private final BatchAnalysis.Observation.Kind kind;
     private final double defaultLimit;
@@ -60,13 +67,32 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
 
     @Override
     public List<Finding> check(BatchAnalysis b, Rule rule) {
-        double limit = rule.number("maxDifference", defaultLimit);
         List<Finding> out = new ArrayList<>();
         for (BatchAnalysis.Observation o : b.observations()) {
             if (o.kind() != kind || Double.isNaN(o.predicted())) {
                 continue;
             }
+            double limit = rule.number("maxDifference", defaultLimit);
             double d = o.measured() - o.predicted();
+            if (kind == BatchAnalysis.Observation.Kind.PH && Double.isFinite(o.bufferCapacity())) {
+                double beta = o.bufferCapacity();
+                // a trace of acid or base (or CO2 taken up while reading) moves a pH by its amount over β
+                limit = Math.max(limit, rule.number("traceLoad", TRACE_LOAD) / beta);
+                double unbuffered = rule.number("unbufferedBelow", UNBUFFERED_BELOW);
+                if (beta < unbuffered) {
+                    if (Math.abs(d) > rule.number("maxDifference", defaultLimit)) {
+                        out.add(new Finding(rule.id(), Severity.NOTE, String.format(Locale.ROOT,
+                                "%s: measured %s, the additions as recorded give %s (%+.2f), not compared: the "
+                                        + "solution is unbuffered there (β %.2g mmol/kg per pH, below %.2g), so traces "
+                                        + "of acid or base in the materials and dissolved CO2 set the reading, not the "
+                                        + "recorded additions", o.label(), BatchText.value(o.kind(), o.measured()),
+                                BatchText.value(o.kind(), o.predicted()), d, beta, unbuffered),
+                                java.util.Optional.of(o.pointer()), b.record().document().locate(o.pointer()),
+                                java.util.Optional.of(rule)));
+                    }
+                    continue;
+                }
+            }
             boolean off = kind == BatchAnalysis.Observation.Kind.PH ? Math.abs(d) > limit
                     : Math.abs(d) > limit / 100 * Math.abs(o.predicted());
             if (off) {

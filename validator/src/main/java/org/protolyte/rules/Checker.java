@@ -13,12 +13,29 @@ import org.protolyte.analysis.FormulationAnalysis;
  */
 public final class Checker {
 
-    /** The packs a document was judged by, and what they found. */
-    public record Verdict(List<RulePack> packs, List<Finding> findings) {
+    /**
+     * The packs a document was judged by, what they found, and the rules that could not judge it (a rule that names a
+     * condition the document does not have): such a document cannot pass.
+     */
+    public record Verdict(List<RulePack> packs, List<Finding> findings, List<Unjudged> unjudged) {
         public Verdict {
             packs = List.copyOf(packs);
             findings = List.copyOf(findings);
+            unjudged = List.copyOf(unjudged);
         }
+
+        public Verdict(List<RulePack> packs, List<Finding> findings) {
+            this(packs, findings, List.of());
+        }
+
+        /** The same verdict with its findings replaced (waivers applied). */
+        public Verdict withFindings(List<Finding> changed) {
+            return new Verdict(packs, changed, unjudged);
+        }
+    }
+
+    /** A rule that could not be applied to a document, and why. */
+    public record Unjudged(String rule, String pack, String reason) {
     }
 
     private final RuleBook book;
@@ -75,11 +92,23 @@ public final class Checker {
     public Verdict check(FormulationAnalysis analysis) {
         List<String> selected = selection(analysis.recipe().formulation().intendedUse());
         List<Finding> out = new ArrayList<>();
+        List<Unjudged> unjudged = new ArrayList<>();
+        List<String> names = analysis.conditions().stream().map(c -> c.condition().name()).toList();
         for (Rule rule : resolved.computeIfAbsent(selected, book::rules)) {
-            if (rule.enabled()) {
-                out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
+            if (!rule.enabled()) {
+                continue;
             }
+            // a rule aimed at a condition the document lacks would otherwise judge nothing and stay silent
+            Optional<String> named = rule.text("condition");
+            if (named.isPresent() && !names.contains(named.get())) {
+                unjudged.add(new Unjudged(rule.id(), rule.pack(), "rule " + rule.id() + " (pack " + rule.pack()
+                        + ") judges the condition '" + named.get() + "', which this document does not have (its "
+                        + "conditions: " + String.join(", ", names) + "); name the condition in the document or "
+                        + "correct the pack"));
+                continue;
+            }
+            out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
         }
-        return new Verdict(book.withAncestors(selected), out);
+        return new Verdict(book.withAncestors(selected), out, unjudged);
     }
 }

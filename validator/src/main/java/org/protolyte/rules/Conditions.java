@@ -39,4 +39,12 @@ final class Conditions {
     static double celsius(ConditionResult c) {
         return c.condition().kelvin() - 273.15;
     }
+
+    /**
+     * "; limit ±0.30" (after {@code separator}) for a limit on a change; nothing for a zero limit, which a pack sets to
+     * report every change (a note), so that no message reads "limit ±0.00".
+     */
+    static String limit(String separator, double max) {
+        return max > 0 ? String.format(java.util.Locale.ROOT, "%s limit ±%.2f", separator, max) : "";
+    }
 }

@@ -9,7 +9,8 @@ import org.protolyte.analysis.FormulationAnalysis;
 
 /**
  * The recipe takes at least {@code minAcid} (and {@code minBase}) mmol/L of strong acid (base) before its pH
- * leaves the target: for a medium, the lactic acid that cells produce between feeds.
+ * leaves the target: for a medium, the lactic acid that cells produce between feeds. Judged at the condition at the
+ * target's temperature, the only one where the target says what the pH must be.
  */
 public final class LoadCapacity implements CheckKind {
 
@@ -26,7 +27,7 @@ public final class LoadCapacity implements CheckKind {
     @Override
     public List<Finding> check(FormulationAnalysis a, Rule rule) {
         List<Finding> out = new ArrayList<>();
-        for (ConditionResult c : Conditions.judged(a, rule)) {
+        for (ConditionResult c : Conditions.atTarget(a).stream().toList()) {
             if (c.loads().isEmpty()) {
                 continue;
             }

@@ -10,7 +10,10 @@ import org.protolyte.document.Formulation;
 
 /**
  * The calculated pH at the target's temperature lies within the document's pH target. USP &lt;791&gt; and
- * Ph. Eur. 2.2.3 state pH at a stated temperature, which is why the target's temperature is used.
+ * Ph. Eur. 2.2.3 state pH at a stated temperature, which is why the target's temperature is used. A closed solution
+ * with almost no buffer capacity (below {@code unbufferedBelow}, default 1 mmol/L per pH, common practice) takes the
+ * pH its dissolved CO2 gives it: its finding gives the range from closed to air-equilibrated and says that the target
+ * was judged closed, as the document states it.
  */
 public final class PhWithinTarget implements CheckKind {
 
@@ -40,6 +43,19 @@ public final class PhWithinTarget implements CheckKind {
         String range = Double.isInfinite(target.min()) ? String.format(Locale.ROOT, "at most %.2f", target.max())
                 : Double.isInfinite(target.max()) ? String.format(Locale.ROOT, "at least %.2f", target.min())
                 : String.format(Locale.ROOT, "%.2f to %.2f", target.min(), target.max());
+        ConditionResult c = at.get();
+        double beta = c.bufferCapacityPerLitre() * 1000;
+        double unbuffered = rule.number("unbufferedBelow", 1.0);
+        if (c.condition().co2Pascal().isEmpty() && beta < unbuffered && c.pHInAir().isPresent()) {
+            double air = c.pHInAir().getAsDouble();
+            return List.of(rule.finding(f, target.pointer(), String.format(Locale.ROOT,
+                    "pH at %.0f °C is %.2f closed and free of CO2, target %s; the solution is unbuffered (β %.2g mmol/L "
+                            + "per pH, below %.2g), so dissolved CO2 and traces set its pH: between %.2f closed and "
+                            + "%.2f in room air (%s the target), depending on handling. The target is judged for the "
+                            + "closed, CO2-free solution the condition '%s' states; if it is meant for the solution as "
+                            + "made in air, give that condition \"co2\": \"air\"", t, pH, range, beta, unbuffered,
+                    pH, air, target.contains(air) ? "within" : "also outside", c.condition().name())));
+        }
         String main = at.get().mainBuffer().map(b -> String.format(Locale.ROOT, "; %s carries %.0f %% of the buffering",
                 b.system(), b.share() * 100)).orElse("");
         String lever = a.targetSensitivities().stream().findFirst().filter(x -> x.dpHPerPercent() != 0)

@@ -38,8 +38,8 @@ public final class TemperatureDrift implements CheckKind {
             String cause = d.system().map(s -> String.format(Locale.ROOT, "; mostly %s, dpKa/dT %+.4f per K, %.0f %% of "
                     + "the buffering", s, d.dpKadT(), d.share() * 100)).orElse("; water's own ionisation");
             out.add(rule.finding(a.recipe().formulation(), pointer, String.format(Locale.ROOT,
-                    "pH moves %+.2f from %s (%.0f °C) to %s (%.0f °C), limit ±%.2f%s", d.change(), d.from(),
-                    d.fromCelsius(), d.to(), d.toCelsius(), max, cause)));
+                    "pH moves %+.2f from %s (%.0f °C) to %s (%.0f °C)%s%s", d.change(), d.from(),
+                    d.fromCelsius(), d.to(), d.toCelsius(), Conditions.limit(",", max), cause)));
         }
         return out;
     }

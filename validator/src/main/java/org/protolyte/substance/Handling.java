@@ -9,15 +9,19 @@ import java.util.OptionalDouble;
  * exchanges water with air, each with its source. Empty where the library has no data: rules then say nothing
  * rather than guess.
  */
-public record Handling(List<Hazard> hazards, Optional<Sourced> lightSensitivity, Optional<Solubility> solubility,
+public record Handling(List<Hazard> hazards, Optional<Light> lightSensitivity, Optional<Solubility> solubility,
                        Optional<Hygroscopy> hygroscopy) {
 
     /** A harmonised (or supplier) hazard classification, e.g. "Skin Corr. 1B" with "H314". */
     public record Hazard(String classification, String statement, String appliesTo, String source) {
     }
 
-    /** A short text with its source. */
-    public record Sourced(String text, String source) {
+    /**
+     * Light sensitivity with its source. {@code photosensitiser}: the substance absorbs light and passes it on to
+     * others (riboflavin); {@code withPhotosensitiser}: the hazard arises only where a photosensitiser is present too
+     * (HEPES forms hydrogen peroxide with riboflavin under light, not alone).
+     */
+    public record Light(String text, String source, boolean photosensitiser, boolean withPhotosensitiser) {
     }
 
     /** Solubility of the form in water at a temperature: g/L and/or the pharmacopoeial term (Ph. Eur. 1.4). */

@@ -377,7 +377,9 @@ public final class LibraryLoader {
             JsonNode hyg = n.get("hygroscopy");
             return new Handling(hazards,
                     light == null ? Optional.empty()
-                            : Optional.of(new Handling.Sourced(light.get("text").asString(), light.get("source").asString())),
+                            : Optional.of(new Handling.Light(light.get("text").asString(), light.get("source").asString(),
+                            light.path("photosensitiser").asBoolean(false),
+                            light.path("onlyWithPhotosensitiser").asBoolean(false))),
                     sol == null ? Optional.empty() : Optional.of(new Handling.Solubility(
                             sol.has("gramsPerLitre") ? OptionalDouble.of(sol.get("gramsPerLitre").asDouble())
                                     : OptionalDouble.empty(),

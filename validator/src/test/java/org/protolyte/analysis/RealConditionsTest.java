@@ -63,6 +63,30 @@ class RealConditionsTest {
         assertEquals(t.mmolPerLitre() * 0.002, t.mmolPerDose().getAsDouble(), 1e-9);
     }
 
+    /**
+     * A target holds at its own temperature: a phosphate saline in the cold room is not "already outside" a target set
+     * for 25 °C. Loads are judged where the target is, so the 4 °C condition carries none and the 25 °C one has room on
+     * both sides (phosphate's pKa2 rises by about 0.05 from 25 to 4 °C, ΔH° 3.6 kJ/mol, from memory of Goldberg et al.
+     * 2002: enough to leave a ±0.03 target set with sodium hydroxide at 25 °C).
+     */
+    @Test
+    void loadsAreJudgedAtTheTargetsTemperatureOnly() {
+        FormulationAnalysis a = analyse("\"components\": [{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": "
+                + "\"10 mmol/L\"}, {\"substance\": \"sodium chloride\", \"amount\": \"137 mmol/L\"},"
+                + " {\"substance\": \"sodium hydroxide\", \"stock\": {\"concentration\": \"1 mol/L\"},"
+                + " \"adjustTo\": {\"temperature\": \"25 Cel\"}}],"
+                + " \"targets\": {\"pH\": {\"value\": 7.4, \"tolerance\": 0.03, \"temperature\": \"25 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"},"
+                + " {\"name\": \"storage\", \"temperature\": \"4 Cel\"}]");
+        var use = a.conditions().get(0);
+        var storage = a.conditions().get(1);
+        assertTrue(use.loads().isPresent(), "no loads at the target's temperature");
+        assertTrue(use.loads().get().acidToLeaveTarget().getAsDouble() > 0, use.loads()::toString);
+        assertTrue(use.loads().get().baseToLeaveTarget().getAsDouble() > 0, use.loads()::toString);
+        assertTrue(storage.state().orElseThrow().pH() > 7.43, () -> "storage pH " + storage.state());
+        assertTrue(storage.loads().isEmpty(), () -> "judged at 4 °C against a 25 °C target: " + storage.loads());
+    }
+
     /** For a small step, the acid load to leave the target is about β·ΔpH (the definition of β, derived). */
     @Test
     void acidLoadMatchesBufferCapacityTimesTheDistanceToTheTargetEdge() {

@@ -44,10 +44,36 @@ class RevisionDiffTest {
         // 10 mmol of KH2PO4 is 1.3609 g (molar mass 136.09 g/mol, Ph. Eur.): the same amount, written differently
         String grams = PHOSPHATE.replace("\"10 mmol/L\"}," , "\"1.3609 g\"},");
         RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("B", grams));
+        assertTrue(d.components().stream().allMatch(c -> Math.abs(c.mmolBefore() - c.mmolAfter()) < 0.001),
+                d.components()::toString);
+        assertTrue(d.values().stream().allMatch(v -> Math.abs(v.delta()) < 1e-3));
+    }
+
+    private static DocumentReport sized(String revision, String volume, String grams) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-DIFF\", \"revision\": \""
+                + revision + "\", \"intendedUse\": \"parenteral\", \"basis\": {\"finalVolume\": \"" + volume + "\"},"
+                + " \"components\": [{\"substance\": \"sodium chloride\", \"amount\": \"" + grams + "\"}],"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        return PROTOLYTE.check("r" + revision + ".json", json.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** 8 g in 1 L and 4 g in 500 mL are one concentration (arithmetic): a batch size, not a change of amount. */
+    @Test
+    void aBatchSizeChangeIsNotAChangeOfEveryAmount() {
+        RevisionDiff d = RevisionDiff.compare(sized("A", "1 L", "8 g"), sized("B", "500 mL", "4 g"));
+        assertEquals(java.util.List.of(), d.components());
+        assertTrue(d.basis().orElseThrow().contains("batch size 1 L final volume → 0.5 L final volume"),
+                d.basis()::toString);
+    }
+
+    @Test
+    void aChangedConcentrationIsReportedPerLitre() {
+        RevisionDiff d = RevisionDiff.compare(sized("A", "1 L", "8 g"), sized("B", "500 mL", "5 g"));
         RevisionDiff.ComponentChange c = d.components().get(0);
         assertEquals(RevisionDiff.Kind.CHANGED, c.kind());
-        assertEquals(c.mmolBefore(), c.mmolAfter(), 0.001);
-        assertTrue(d.values().stream().allMatch(v -> Math.abs(v.delta()) < 1e-3));
+        assertEquals(1.25, c.mmolAfter() / c.mmolBefore(), 1e-9);    // 10 g/L against 8 g/L
+        assertTrue(d.values().stream().anyMatch(v -> v.quantity().equals("osmolality") && v.delta() > 0),
+                d.values()::toString);
     }
 
     @Test

@@ -394,4 +394,31 @@ class RulePackLoadingTest {
         Problem p = problemAt(e, "/rules/0/severity");
         assertEquals(8, p.location().orElseThrow().line(), p::toString);
     }
+
+    // ---- a rule aimed at a condition the document lacks ----
+
+    @Test
+    void ruleNamingAConditionTheDocumentLacksMakesItIndeterminate() {
+        RuleBook book = shipped();
+        book.add("site-typo.json", utf8(pack("site-typo", """
+                    { "id": "site-use-ph", "check": "ph-within-limits", "severity": "error",
+                      "parameters": { "min": 0, "max": 1, "condition": "usee" },
+                      "summary": "s", "explanation": "e", "references": ["common practice"] }""")), false);
+        DocumentReport r = judge(book, "site-typo", "revision-stated", "quiet.json");
+        assertEquals(Status.INDETERMINATE, r.status(), () -> r.status() + " " + r.diagnostics());
+        assertTrue(r.diagnostics().stream().anyMatch(d -> d.code().equals("rule-not-judged")
+                && d.message().contains("'usee'") && d.message().contains("site-use-ph")), r.diagnostics()::toString);
+    }
+
+    @Test
+    void ruleNamingAConditionTheDocumentHasJudgesIt() {
+        RuleBook book = shipped();
+        book.add("site-use.json", utf8(pack("site-use", """
+                    { "id": "site-use-ph", "check": "ph-within-limits", "severity": "error",
+                      "parameters": { "min": 0, "max": 1, "condition": "use" },
+                      "summary": "s", "explanation": "e", "references": ["common practice"] }""")), false);
+        DocumentReport r = judge(book, "site-use", "revision-stated", "quiet.json");
+        assertEquals(Status.FAIL, r.status(), () -> r.status() + " " + r.diagnostics());
+        assertEquals(1, findings(r, "site-use-ph").size(), r.findings()::toString);
+    }
 }
