@@ -57,10 +57,23 @@ public final class CheckCommand implements Callable<Integer> {
             description = "The waiver file QA holds: accepted findings, per document revision.")
     Path waivers;
 
-    @Option(names = "--as-of", paramLabel = "DATE",
+    @Option(names = "--as-of", paramLabel = "DATE", converter = IsoDate.class,
             description = "The run date (YYYY-MM-DD) for waiver approval and expiry, e.g. to re-check an archive "
                     + "as of its release (default: today).")
     LocalDate asOf;
+
+    /** A calendar date as YYYY-MM-DD (ISO 8601); anything else is a usage error that says so. */
+    static final class IsoDate implements CommandLine.ITypeConverter<LocalDate> {
+        @Override
+        public LocalDate convert(String text) {
+            try {
+                return LocalDate.parse(text);
+            } catch (java.time.format.DateTimeParseException e) {
+                throw new CommandLine.TypeConversionException("'" + text + "' is not a calendar date written as "
+                        + "YYYY-MM-DD (" + e.getMessage().replaceFirst("^Text '.*' could not be parsed:? ?", "") + ")");
+            }
+        }
+    }
 
     @Option(names = "--exclude", paramLabel = "GLOB",
             description = "Leave out files found in a folder whose path below it matches GLOB (repeatable; as a "

@@ -119,7 +119,7 @@ final class ReportFile {
         try {
             Runtime.getRuntime().removeShutdownHook(hook);
         } catch (IllegalStateException shuttingDown) {
-            // the process is being terminated: the hook is running now and removes the temporary file itself
+            // caught: the process is being terminated, so the hook is running now and removes the temporary file
             return;
         }
     }

@@ -149,6 +149,7 @@ public final class Formula {
         try {
             product = Math.multiplyExact(n, times);
         } catch (ArithmeticException e) {
+            // caught: a product beyond long is above the limit, and refused with the message just below
             product = Long.MAX_VALUE;
         }
         if (product > MAX_ATOMS) {
