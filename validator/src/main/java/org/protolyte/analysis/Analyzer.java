@@ -422,7 +422,7 @@ public final class Analyzer {
                     determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
                     loads,
                     determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty(),
-                    determinate ? saturation(recipe, s) : List.of());
+                    determinate ? saturation(recipe, s) : List.of()).finite();
         } catch (IndeterminateException e) {
             return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, Double.NaN, volume, List.of(),
                     OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty(), List.of());

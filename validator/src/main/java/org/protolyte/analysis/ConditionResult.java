@@ -51,6 +51,24 @@ public record ConditionResult(Formulation.Condition condition, Optional<Equilibr
                 pHInAir, loads, co2ForTarget, uncertainty, saturation);
     }
 
+    /**
+     * The same result, INDETERMINATE where a figure to be reported is infinite or NaN (an extreme recipe can
+     * overflow a double): no renderer is handed a number that is not one.
+     */
+    ConditionResult finite() {
+        if (state.isEmpty()) {
+            return this;
+        }
+        EquilibriumState s = state.get();
+        java.util.stream.DoubleStream figures = java.util.stream.DoubleStream.concat(
+                java.util.stream.DoubleStream.of(s.pH(), s.ionicStrength(), s.bufferCapacity(), s.osmolality(),
+                        s.particleMolality(), bufferCapacityPerLitre, osmolarity, volumeLitres),
+                s.species().stream().flatMapToDouble(a -> java.util.stream.DoubleStream.of(a.molality(),
+                        a.activityCoefficient(), a.fractionOfComponent())));
+        return figures.allMatch(Double::isFinite) ? this : withCaveat(Caveat.indeterminate("non-finite",
+                "a computed figure at this condition is not a finite number (the amounts overflow the arithmetic)"));
+    }
+
     /** The system that carries most of the buffer capacity, if any system buffers at all. */
     public Optional<BufferContribution> mainBuffer() {
         return buffers.stream().max(java.util.Comparator.comparingDouble(BufferContribution::bufferCapacityPerLitre));

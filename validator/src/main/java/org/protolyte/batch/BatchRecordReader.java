@@ -19,7 +19,7 @@ import org.protolyte.document.Location;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
 import org.protolyte.document.SourceDocument;
-import org.protolyte.document.Temperatures;
+import org.protolyte.document.Plausible;
 import org.protolyte.units.Dimension;
 import org.protolyte.units.Quantity;
 import org.protolyte.units.UnitException;
@@ -41,6 +41,8 @@ public final class BatchRecordReader {
      */
     static final double MIN_PH = 0;
     static final double MAX_PH = 14;
+    /** mOsm/kg: saturated sodium chloride is about 10,000; no medium comes near it (common practice). */
+    static final double MAX_OSMOLALITY = 10000;
 
     private final SchemaCatalog schemas;
     private final FormulationReader formulations;
@@ -240,7 +242,7 @@ public final class BatchRecordReader {
             if (t == null) {
                 return null;
             }
-            Optional<String> implausible = Temperatures.implausible(t);
+            Optional<String> implausible = Plausible.LIQUID_TEMPERATURE.check("a temperature", t);
             if (implausible.isPresent()) {
                 problems.add(doc.problem(p + "/temperature", implausible.get()));
                 return null;
@@ -253,8 +255,9 @@ public final class BatchRecordReader {
                     + ", the range a pH meter is calibrated and read in; check the record"));
             return null;
         }
-        if (kind == BatchRecord.Measurement.Kind.OSMOLALITY && !(value > 0)) {
-            problems.add(doc.problem(p + "/value", "an osmolality must be greater than zero"));
+        if (kind == BatchRecord.Measurement.Kind.OSMOLALITY && !(value > 0 && value <= MAX_OSMOLALITY)) {
+            problems.add(doc.problem(p + "/value", "an osmolality of " + value + " mOsm/kg is outside the plausible "
+                    + "range (0, " + (long) MAX_OSMOLALITY + "]: saturated salt solutions stay below it (common practice)"));
             return null;
         }
         return new BatchRecord.Measurement(n.get("step").asInt(), kind, value, kelvin, n.path("atVolume").asDouble(1),
@@ -275,7 +278,13 @@ public final class BatchRecordReader {
         try {
             Quantity q = n.isString() ? Quantity.parse(n.asString())
                     : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
-            return q.require("a " + pointer.substring(pointer.lastIndexOf('/') + 1), allowed);
+            String what = "a " + pointer.substring(pointer.lastIndexOf('/') + 1);
+            Optional<String> outside = Plausible.of(q.require(what, allowed).dimension()).check(what, q);
+            if (outside.isPresent()) {
+                problems.add(doc.problem(pointer, outside.get()));
+                return null;
+            }
+            return q;
         } catch (UnitException e) {
             problems.add(doc.problem(pointer, e.getMessage()));
             return null;

@@ -65,10 +65,11 @@ public final class RobustnessCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         PrintWriter err = spec.commandLine().getErr();
-        if (samples < 10 || samples > 10_000_000 || !(tolerancePercent >= 0) || !(meter >= 0)
-                || !format.equals("text") && !format.equals("json")) {
-            err.println("protolyte: --samples takes 10 to 10000000, --tolerance and --meter a number ≥ 0, "
-                    + "--format text or json");
+        // a tolerance is a part of the amount, more than nothing and less than all of it (as in documents)
+        if (samples < 10 || samples > 10_000_000 || !(tolerancePercent > 0 && tolerancePercent < 100)
+                || !(meter >= 0 && Double.isFinite(meter)) || !format.equals("text") && !format.equals("json")) {
+            err.println("protolyte: --samples takes 10 to 10000000, --tolerance a per cent above 0 and below 100, "
+                    + "--meter a finite number ≥ 0, --format text or json");
             return 2;
         }
         Recipe recipe;

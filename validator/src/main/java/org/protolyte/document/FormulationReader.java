@@ -26,6 +26,9 @@ public final class FormulationReader {
     /** Pa: the gas pressure assumed where a condition states a CO2 fraction but no pressure. */
     public static final double STANDARD_PRESSURE = 101325;
 
+    /** The largest dilution of a concentrate accepted: ten times the usual 1000x (common practice). */
+    static final double MAX_DILUTION = 1e4;
+
     private final SchemaCatalog schemas;
 
     public FormulationReader(SchemaCatalog schemas) {
@@ -83,6 +86,11 @@ public final class FormulationReader {
                 double factor = d.has("factor") ? d.get("factor").asDouble()
                         : (d.get("parts").get("concentrate").asDouble() + d.get("parts").get("diluent").asDouble())
                                 / d.get("parts").get("concentrate").asDouble();
+                if (!(factor <= MAX_DILUTION)) {
+                    throw new DocumentException(doc.problem("/dilution", "a dilution of " + factor + " times is "
+                            + "outside the plausible range (1, " + (long) MAX_DILUTION + "]: concentrates are made "
+                            + "2x to 1000x (common practice)"));
+                }
                 dilution = Optional.of(new Formulation.Dilution(factor, d.path("diluent").asString("water"), "/dilution"));
             }
             return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
@@ -97,11 +105,18 @@ public final class FormulationReader {
             try {
                 Quantity q = n.isString() ? Quantity.parse(n.asString())
                         : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
-                return Optional.of(q.require(what, allowed));
+                return within(Optional.of(q.require(what, allowed)), pointer, what, Plausible.of(q.dimension()));
             } catch (UnitException e) {
                 problems.add(doc.problem(pointer, e.getMessage()));
                 return Optional.empty();
             }
+        }
+
+        /** The quantity if it lies in the range; otherwise a problem at the pointer. */
+        private Optional<Quantity> within(Optional<Quantity> q, String pointer, String what, Plausible range) {
+            Optional<String> outside = q.flatMap(x -> range.check(what, x));
+            outside.ifPresent(why -> problems.add(doc.problem(pointer, why)));
+            return outside.isPresent() ? Optional.empty() : q;
         }
 
         private Optional<Quantity> positive(JsonNode n, String pointer, String what, Dimension... allowed) {
@@ -113,27 +128,20 @@ public final class FormulationReader {
             return q;
         }
 
-        private OptionalDouble temperature(JsonNode n, String pointer) {
-            Optional<Quantity> q = quantity(n, pointer, "a temperature", Dimension.TEMPERATURE);
-            if (q.isEmpty()) {
-                return OptionalDouble.empty();
-            }
-            Optional<String> implausible = Temperatures.implausible(q.get());
-            if (implausible.isPresent()) {
-                problems.add(doc.problem(pointer, implausible.get()));
-                return OptionalDouble.empty();
-            }
-            return OptionalDouble.of(q.get().base());
+        private OptionalDouble temperature(JsonNode n, String pointer, Plausible range) {
+            Optional<Quantity> q = within(quantity(n, pointer, "a temperature", Dimension.TEMPERATURE), pointer,
+                    "a temperature", range);
+            return q.isEmpty() ? OptionalDouble.empty() : OptionalDouble.of(q.get().base());
         }
 
         private Formulation.Basis basis(JsonNode n) {
             if (n.has("finalVolume")) {
                 String p = "/basis/finalVolume";
-                Optional<Quantity> q = positive(n.get("finalVolume"), p, "finalVolume", Dimension.VOLUME);
+                Optional<Quantity> q = positive(n.get("finalVolume"), p, "the final volume", Dimension.VOLUME);
                 return new Formulation.Basis(true, q.map(Quantity::base).orElse(1.0), p);
             }
             String p = "/basis/waterMass";
-            Optional<Quantity> q = positive(n.get("waterMass"), p, "waterMass", Dimension.MASS);
+            Optional<Quantity> q = positive(n.get("waterMass"), p, "the water mass", Dimension.MASS);
             return new Formulation.Basis(false, q.map(x -> x.base() / 1000).orElse(1.0), p);
         }
 
@@ -171,7 +179,8 @@ public final class FormulationReader {
             Optional<Formulation.Adjustment> adjust = Optional.empty();
             if (hasAdjust) {
                 JsonNode a = n.get("adjustTo");
-                OptionalDouble t = temperature(a.get("temperature"), p + "/adjustTo/temperature");
+                OptionalDouble t = temperature(a.get("temperature"), p + "/adjustTo/temperature",
+                        Plausible.LIQUID_TEMPERATURE);
                 OptionalDouble pH = a.has("pH") ? OptionalDouble.of(a.get("pH").asDouble()) : OptionalDouble.empty();
                 double atVolume = 1;
                 if (a.has("atVolume")) {
@@ -196,8 +205,8 @@ public final class FormulationReader {
                     ? positive(n.get("density"), p + "/density", "a density", Dimension.DENSITY).map(Quantity::base)
                     : Optional.empty();
             Optional<Double> tolerance = n.has("tolerance")
-                    ? quantity(n.get("tolerance"), p + "/tolerance", "a weighing tolerance", Dimension.FRACTION)
-                    .map(Quantity::base) : Optional.empty();
+                    ? within(quantity(n.get("tolerance"), p + "/tolerance", "a weighing tolerance", Dimension.FRACTION),
+                    p + "/tolerance", "a weighing tolerance", Plausible.TOLERANCE).map(Quantity::base) : Optional.empty();
             return new Formulation.Line(i, substance, amount, stock, adjust, density, p, tolerance);
         }
 
@@ -245,7 +254,8 @@ public final class FormulationReader {
                 }
             }
             boolean stated = n.has("temperature");
-            double t = stated ? temperature(n.get("temperature"), p + "/temperature").orElse(DEFAULT_TEMPERATURE)
+            double t = stated ? temperature(n.get("temperature"), p + "/temperature",
+                    Plausible.LIQUID_TEMPERATURE).orElse(DEFAULT_TEMPERATURE)
                     : DEFAULT_TEMPERATURE;
             return new Formulation.PhTarget(min, max, t, stated, p);
         }
@@ -259,7 +269,8 @@ public final class FormulationReader {
                 if (!names.add(name)) {
                     problems.add(doc.problem(p + "/name", "condition name '" + name + "' is used twice"));
                 }
-                OptionalDouble t = temperature(n.get(i).get("temperature"), p + "/temperature");
+                OptionalDouble t = temperature(n.get(i).get("temperature"), p + "/temperature",
+                        Plausible.CONDITION_TEMPERATURE);
                 out.add(new Formulation.Condition(name, t.orElse(DEFAULT_TEMPERATURE), false, p, co2(n.get(i), p)));
             }
             if (out.isEmpty()) {

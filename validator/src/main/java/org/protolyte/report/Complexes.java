@@ -25,7 +25,9 @@ final class Complexes {
     /** The share of each of its components' totals (from {@link #totals}) that one complex holds, by name. */
     static Map<Component, Double> shares(Map<Component, Double> totals, SpeciesAmount complex) {
         Map<Component, Double> out = new TreeMap<>(java.util.Comparator.comparing(Component::name));
-        complex.species().components().forEach((c, nu) -> out.put(c, nu * complex.molality() / totals.get(c)));
+        // a component with no total (carbonate under no CO2) holds nothing in the complex: share 0, not 0/0
+        complex.species().components().forEach((c, nu) -> out.put(c,
+                totals.get(c) > 0 ? nu * complex.molality() / totals.get(c) : 0.0));
         return out;
     }
 }
