@@ -162,6 +162,77 @@ class RuleExamplesTest {
         assertTrue(json(ruleId, "quiet.json").path("id").asString("").startsWith(prefix), ruleId);
     }
 
+    /** Every example file of every shipped rule: {@code fires*.json} and {@code quiet*.json}, as "rule-id/file". */
+    static Stream<String> exampleFiles() throws IOException, URISyntaxException {
+        URL root = RuleExamplesTest.class.getResource(ROOT);
+        assertNotNull(root, "missing " + ROOT);
+        List<String> files = new java.util.ArrayList<>();
+        for (String ruleId : shippedRuleIds().toList()) {
+            Path dir = Path.of(root.toURI()).resolve(ruleId);
+            if (!Files.isDirectory(dir)) {
+                continue; // reported by everyShippedRuleHasAFiringExample
+            }
+            try (Stream<Path> in = Files.list(dir)) {
+                in.map(f -> f.getFileName().toString())
+                        .filter(n -> n.endsWith(".json") && (n.startsWith("fires") || n.startsWith("quiet")))
+                        .sorted().forEach(n -> files.add(ruleId + "/" + n));
+            }
+        }
+        return files.stream();
+    }
+
+    /** One line of a {@code .expected} sidecar: {@code <rule-id> <json-pointer> "<phrase>"}, pointer "-" for the document. */
+    record Expected(int line, String rule, String pointer, String phrase) {
+        private static final java.util.regex.Pattern LINE =
+                java.util.regex.Pattern.compile("(\\S+)\\s+(\\S+)\\s+\"(.+)\"");
+
+        static List<Expected> parse(String where, String text) {
+            List<Expected> out = new java.util.ArrayList<>();
+            String[] lines = text.split("\\R");
+            for (int i = 0; i < lines.length; i++) {
+                String l = lines[i].strip();
+                if (l.isEmpty() || l.startsWith("#")) {
+                    continue;
+                }
+                java.util.regex.Matcher m = LINE.matcher(l);
+                int n = i + 1;
+                assertTrue(m.matches(), () -> where + ":" + n + ": expected <rule-id> <json-pointer> \"<phrase>\"");
+                out.add(new Expected(n, m.group(1), m.group(2).equals("-") ? "" : m.group(2), m.group(3)));
+            }
+            return out;
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("exampleFiles")
+    void exampleGivesTheFindingsItsSidecarStates(String example) {
+        String ruleId = example.substring(0, example.indexOf('/'));
+        String file = example.substring(example.indexOf('/') + 1);
+        DocumentReport r = check(ruleId, file);
+        if (file.startsWith("quiet")) {
+            assertEquals(List.of(), findingsOf(r, ruleId), () -> example + ": " + describe(r));
+            return;
+        }
+        String sidecar = file.substring(0, file.length() - ".json".length()) + ".expected";
+        assertTrue(example(ruleId, sidecar).isPresent(), () -> example + " has no sidecar " + sidecar);
+        String where = ROOT + ruleId + "/" + sidecar;
+        List<Expected> expected = Expected.parse(where, new String(bytes(ruleId, sidecar),
+                java.nio.charset.StandardCharsets.UTF_8));
+        assertFalse(expected.isEmpty(), () -> where + " states no finding");
+        assertTrue(expected.stream().anyMatch(e -> e.rule().equals(ruleId)),
+                () -> where + " states no finding of " + ruleId);
+        for (Expected e : expected) {
+            String at = e.pointer().isEmpty() ? "the document" : e.pointer();
+            List<Finding> there = r.findings().stream()
+                    .filter(f -> f.rule().equals(e.rule()) && f.pointer().orElse("").equals(e.pointer())).toList();
+            assertFalse(there.isEmpty(), () -> where + ":" + e.line() + ": no " + e.rule() + " finding at " + at
+                    + "; got " + describe(r));
+            assertTrue(there.stream().anyMatch(f -> f.message().contains(e.phrase())),
+                    () -> where + ":" + e.line() + ": the " + e.rule() + " finding at " + at + " lacks \""
+                            + e.phrase() + "\": " + there.stream().map(Finding::message).toList());
+        }
+    }
+
     @Test
     void everyExampleFolderBelongsToAShippedRule() throws IOException, URISyntaxException {
         URL root = RuleExamplesTest.class.getResource(ROOT);
