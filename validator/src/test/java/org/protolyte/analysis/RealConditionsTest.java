@@ -49,6 +49,36 @@ class RealConditionsTest {
     }
 
     /**
+     * The cause of a drift is the system with the largest share of β times |dpKa/dT|, not the largest share alone.
+     * Tris beside phosphate at pH 7.6: dpKa/dT is −ΔH°/(R ln10 T²), ΔH° 47.5 kJ/mol for Tris and 3.6 kJ/mol for
+     * phosphate's second step (Goldberg, Kishore and Lennen 2002, Table 1, from memory), −0.027 and −0.002 per K at
+     * 31 °C. Phosphate (20 mmol/L, mostly HPO4²⁻) holds more of β than Tris (13 mmol/L, a quarter of it base), yet Tris
+     * moves the pH: 0.4 × 0.027 against 0.6 × 0.002.
+     */
+    @Test
+    void theDriftIsBlamedOnTheSystemWhoseShareTimesDpKaDtIsLargest() {
+        FormulationAnalysis a = analyse("\"components\": [{\"substance\": \"Tris\", \"amount\": \"3 mmol/L\"},"
+                + " {\"substance\": \"Tris hydrochloride\", \"amount\": \"10 mmol/L\"},"
+                + " {\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"16 mmol/L\"},"
+                + " {\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"4 mmol/L\"}],"
+                + " \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"25 Cel\"},"
+                + " {\"name\": \"use\", \"temperature\": \"37 Cel\"}]");
+        ConditionResult prep = a.conditions().get(0);
+        double tris = share(prep, "Tris");
+        double phosphate = share(prep, "phosphate");
+        assertTrue(phosphate > tris, () -> "phosphate must hold more of β for the case to mean anything: " + prep.buffers());
+        assertEquals(7.6, prep.state().orElseThrow().pH(), 0.15);
+        Drift d = a.drifts().get(0);
+        assertEquals("Tris", d.system().orElseThrow(), d::toString);
+        assertEquals(-0.027, d.dpKadT(), 0.002);
+        assertEquals(tris, d.share(), 1e-12);
+    }
+
+    private static double share(ConditionResult c, String system) {
+        return c.buffers().stream().filter(b -> b.system().equals(system)).findFirst().orElseThrow().share();
+    }
+
+    /**
      * Titratable acidity of 10 mmol/L acetate buffer at pH ≈ 5 (acid 3.6, salt 6.4 mmol/L): to reach pH 7.4 nearly all
      * the acetic acid must be neutralised, 3.6 mmol/L of base (Henderson–Hasselbalch, derived; the acid left at 7.4
      * is 0.2 % of the total).

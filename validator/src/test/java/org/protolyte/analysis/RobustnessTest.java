@@ -100,6 +100,31 @@ class RobustnessTest {
         assertTrue(hi > lo);
     }
 
+    /**
+     * The meter's error sets the q.s. of every batch: whatever the weighings (the q.s. absorbs them), a batch adjusted
+     * at the condition's own temperature and volume, closed, is at pH setpoint + e, e normal with the meter's standard uncertainty u, so the pH's
+     * spread is u (relative standard error of σ ≈ 1/sqrt(2N), 1.1 % at N = 4000) and the batches outside a ±2.5 u
+     * target are 2(1 − Φ(2.5)) = 1.24 % (standard normal table; standard error 0.17 % at N = 4000).
+     */
+    @Test
+    void theMetersStandardUncertaintyIsTheSpreadOfAnAdjustedBatch() {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-METER\", \"revision\": \"A\","
+                + " \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": [" + PHOSPHATE + ","
+                + " {\"substance\": \"sodium hydroxide\", \"stock\": {\"concentration\": \"1 mol/L\"},"
+                + " \"adjustTo\": {\"temperature\": \"25 Cel\"}}],"
+                + " \"targets\": {\"pH\": {\"value\": 7.2, \"tolerance\": 0.05, \"temperature\": \"25 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
+        Recipe r = new RecipeResolver(LibraryLoader.shipped(SCHEMAS)).resolve(f);
+        double u = 0.02;
+        Robustness.Result result = new Robustness(EQUILIBRIUM).run(r, new Robustness.Settings(4000, 13, 0, u), x -> { });
+        Robustness.ConditionRobustness use = result.conditions().get(0);
+        assertEquals(4000, result.samplesSolved());
+        assertEquals(u, use.pH().standardDeviation(), 0.05 * u);
+        assertEquals(7.2, use.pH().mean(), 0.002);
+        assertEquals(0.0124, use.probabilityOutsideTarget().getAsDouble(), 0.006);
+    }
+
     /** A fixed seed reproduces the study exactly. */
     @Test
     void aFixedSeedReproduces() {

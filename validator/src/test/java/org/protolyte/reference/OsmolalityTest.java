@@ -63,4 +63,20 @@ class OsmolalityTest {
         assertEquals(1871, s.osmolality() * 1000, 8);
         assertTrue(s.osmolalityModel().startsWith("Pitzer"), s.osmolalityModel());
     }
+
+    /**
+     * Osmolarity is osmolality times the mass of water in a litre of solution. That mass comes from the specific
+     * volume of aqueous NaCl at 25 °C (CRC Handbook of Chemistry and Physics, "Volumetric properties of aqueous sodium
+     * chloride solutions", after Rogers and Pitzer, J. Phys. Chem. Ref. Data 11 (1982) 15): 0.998834 cm³/g at
+     * 0.100 mol/kg and 0.992832 cm³/g at 0.250 mol/kg. With M(NaCl) = 58.443 g/mol, a kilogram of water holds
+     * (1000 + 58.443 m)·v cm³ of solution: 0.99535 kg of water per litre at 0.100 mol/kg, 0.99272 at 0.250. Normal
+     * saline (9 g/L, 0.154 mol/kg) lies between, 0.99440 by linear interpolation in m. Without the factor the ratio
+     * would be 1.
+     */
+    @ParameterizedTest(name = "{0} mol/kg NaCl at 25 °C: {1} kg of water per litre")
+    @CsvSource({"0.100, 0.99535", "0.154, 0.99440", "0.250, 0.99272"})
+    void osmolarityIsOsmolalityTimesTheWaterInALitre(double molality, double waterKgPerLitre) {
+        var c = ReferenceDocuments.solution().with("sodium chloride", molality).condition(25);
+        assertEquals(waterKgPerLitre, c.osmolarity() / c.state().orElseThrow().osmolality(), 0.0005);
+    }
 }
