@@ -45,6 +45,7 @@ class DilutionTest {
         assertEquals(once.state().orElseThrow().pH(), working.state().orElseThrow().pH(), 1e-9);
         assertEquals(once.state().orElseThrow().osmolality(), working.state().orElseThrow().osmolality(), 1e-9);
         assertTrue(working.uncertainty().isPresent(), "the working solution's pH carries its uncertainty too");
+        assertEquals(once.uncertainty().orElseThrow().pH(), working.uncertainty().orElseThrow().pH(), 1e-7);
         // equimolal phosphate: the concentrate reads lower, by the activity effect of its higher ionic strength
         assertTrue(stock.conditions().get(0).state().orElseThrow().pH() < working.state().orElseThrow().pH() - 0.05);
     }

@@ -39,6 +39,8 @@ class UncertaintyTest {
         assertEquals(main.standardUncertainty(), main.pHChange(), 0.05 * main.standardUncertainty());
         assertEquals(Math.sqrt(u.contributions().stream().mapToDouble(x -> x.pHChange() * x.pHChange()).sum()), u.pH(),
                 1e-12);
+        // at the pKa β = 2.303·C·α(1 − α) is at its maximum, so a small move of the pKa leaves it all but unchanged
+        assertTrue(u.bufferCapacityPerLitre() < 1e-3 * c.bufferCapacityPerLitre(), () -> "u(β) " + u);
     }
 
     /** Dosed to a pH at a condition, the meter sets that pH whatever the constants: no uncertainty is left there. */
