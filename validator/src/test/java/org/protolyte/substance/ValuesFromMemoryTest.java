@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 
@@ -13,63 +14,76 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The dissociation steps whose constants rest (wholly or partly) on memory rather than on a publication read for
- * this project: the list is printed with every build so that it is visible, and it may only shrink (raise the
- * ceiling only with a reason in review).
+ * The constants of the shipped library that rest (wholly or partly) on memory rather than on a publication read
+ * for this project. The lists may only shrink: raise a ceiling only with a reason in review. A passing build prints
+ * nothing; a failing one names the entries.
  */
 class ValuesFromMemoryTest {
 
-    /**
-     * The shipped library's recalled steps at the time of writing. Raised from 17 to this when the library grew
-     * from 9 to 62 systems and the critical compilations (Goldberg et al. 2002 Table 1, NIST SRD 46) could not be
-     * read here; lower it as values are verified.
-     */
-    private static final int CEILING = 95;
+    /** Dissociation steps whose source says "from memory", after the readings of issue 15 (84 of 115). */
+    private static final int CEILING = 84;
 
-    @Test
-    void recalledConstantsAreListedAndDoNotGrow() throws IOException {
-        JsonNode library;
+    /** The other constants (complexes, solids, solubility tables) resting on memory: 20 of 30. */
+    private static final int OTHER_CEILING = 20;
+
+    /** The buffers the shipped rule packs and samples rely on (issue 15). */
+    private static final Set<String> NAMED_BUFFERS = Set.of("phosphate", "citrate", "acetate", "histidine", "Tris",
+            "HEPES", "MOPS", "MES", "carbonate", "borate", "succinate", "glycine", "lactate");
+
+    /**
+     * Their steps still resting on memory, because no reachable copy of a publication gave the value (the
+     * Goldberg, Kishore and Lennen 2002 tables could not be read here). Remove an entry when it is read.
+     */
+    private static final Set<String> NAMED_STILL_RECALLED = Set.of("phosphate step 2", "phosphate step 3",
+            "acetate step 1", "HEPES step 1", "histidine step 1", "histidine step 2", "histidine step 3", "MES step 1",
+            "glycine step 1", "glycine step 2");
+
+    private static JsonNode library() throws IOException {
         try (InputStream in = LibraryLoader.class.getResourceAsStream("substances.json")) {
-            library = JsonMapper.builder().build().readTree(in);
+            return JsonMapper.builder().build().readTree(in);
         }
+    }
+
+    private static List<String> recalledSteps(JsonNode library) {
         List<String> recalled = new ArrayList<>();
-        int steps = 0;
         for (JsonNode system : library.path("systems")) {
             int k = 0;
             for (JsonNode step : system.path("steps")) {
                 k++;
-                steps++;
                 if (step.path("source").asString().contains("from memory")) {
-                    recalled.add(system.path("name").asString() + " step " + k + " (pKa " + step.path("pKa").asDouble() + ")");
+                    recalled.add(system.path("name").asString() + " step " + k);
                 }
             }
         }
-        System.out.println("Dissociation steps resting on memory (" + recalled.size() + " of " + steps + "): "
-                + String.join("; ", recalled));
-        assertTrue(recalled.size() <= CEILING, "recalled constants grew to " + recalled.size() + ": " + recalled);
+        return recalled;
     }
 
-    /** The complexes, solids and solubility tables whose values (or citation details) rest on memory: 20 of 30 when added. */
-    private static final int OTHER_CEILING = 20;
+    @Test
+    void recalledStepsDoNotGrow() throws IOException {
+        List<String> recalled = recalledSteps(library());
+        assertTrue(recalled.size() <= CEILING, "recalled steps grew to " + recalled.size() + ": " + recalled);
+    }
 
     @Test
-    void recalledComplexAndSolubilityValuesAreListedAndDoNotGrow() throws IOException {
-        JsonNode library;
-        try (InputStream in = LibraryLoader.class.getResourceAsStream("substances.json")) {
-            library = JsonMapper.builder().build().readTree(in);
-        }
+    void theNamedBuffersGainNoRecalledStep() throws IOException {
+        List<String> named = recalledSteps(library()).stream()
+                .filter(s -> NAMED_BUFFERS.contains(s.substring(0, s.lastIndexOf(" step "))))
+                .filter(s -> !NAMED_STILL_RECALLED.contains(s))
+                .toList();
+        assertTrue(named.isEmpty(), "a buffer the samples rely on rests on memory: " + named);
+    }
+
+    @Test
+    void recalledComplexAndSolubilityValuesDoNotGrow() throws IOException {
+        JsonNode library = library();
         List<String> recalled = new ArrayList<>();
-        int all = 0;
         for (String section : List.of("complexes", "phases", "solubilities")) {
             for (JsonNode entry : library.path(section)) {
-                all++;
                 if (entry.path("source").asString().contains("from memory")) {
                     recalled.add(section + ": " + entry.path("name").asString());
                 }
             }
         }
-        System.out.println("Complexes, solids and solubilities resting on memory (" + recalled.size() + " of " + all
-                + "): " + String.join("; ", recalled));
         assertTrue(recalled.size() <= OTHER_CEILING, "recalled values grew to " + recalled.size() + ": " + recalled);
     }
 }
