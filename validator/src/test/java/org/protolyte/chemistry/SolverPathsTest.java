@@ -1,0 +1,159 @@
+package org.protolyte.chemistry;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * The solver evaluates the mass balances by products of powers where they fit in a double and in log space where
+ * they do not; the answer cannot depend on which. Each case sets a recipe beside one that differs only by what the
+ * chemistry says cannot matter (a component's only species holds its total whatever its constant; a complex of
+ * vanishing constant forms nothing). The constants are invented test values, not data.
+ */
+class SolverPathsTest {
+
+    private static final Equilibrium DAVIES = new Equilibrium(Davies.INSTANCE);
+    private static final Equilibrium IDEAL = new Equilibrium(IdealActivity.INSTANCE);
+    private static final Component NA = new Component("Na+", 1);
+    private static final Component CL = new Component("Cl-", -1);
+    private static final Component M = new Component("M+2", 2);
+    private static final TemperatureRange ANY = TemperatureRange.UNBOUNDED;
+    private static final AcidBaseSystem ACID = new AcidBaseSystem("A",
+            List.of(new AcidBaseSystem.Form("H2A", 0), new AcidBaseSystem.Form("HA-", -1),
+                    new AcidBaseSystem.Form("A-2", -2)),
+            List.of(new DissociationStep(4.2, 0, 0, 0, ANY), new DissociationStep(6.9, 0, 0, 0, ANY)));
+
+    private static EquilibriumState solve(List<Species> extra, Map<Component, Double> extraTotals) {
+        List<Species> species = new ArrayList<>(ACID.species());
+        species.add(Species.free(NA));
+        species.add(Species.free(CL));
+        species.addAll(extra);
+        Map<Component, Double> totals = new LinkedHashMap<>();
+        totals.put(ACID.basis(), 0.02);
+        totals.put(NA, 0.03);
+        totals.put(CL, 0.002);
+        totals.putAll(extraTotals);
+        return DAVIES.solve(species, totals, 298.15);
+    }
+
+    /**
+     * X−7 held as its only species H12X+5: its total is all there is of it, whatever its constant. log β = 0 takes the
+     * products of powers; −249 underflows them (aH^12·β below the smallest double) and takes log space; 300 is past
+     * the products' bound and takes log space from the start.
+     */
+    @ParameterizedTest(name = "log β = {0}")
+    @ValueSource(doubles = {-249, 300})
+    void aComponentsOnlySpeciesHoldsItsTotalWhateverItsConstant(double logBeta) {
+        Component x = new Component("X-7", -7);
+        EquilibriumState reference = solve(List.of(only(x, 0)), Map.of(x, 0.001));
+        EquilibriumState s = solve(List.of(only(x, logBeta)), Map.of(x, 0.001));
+        assertEquals(reference.pH(), s.pH(), 1e-10);
+        assertEquals(reference.ionicStrength(), s.ionicStrength(), 1e-12);
+        assertEquals(reference.bufferCapacity(), s.bufferCapacity(), 1e-9 * reference.bufferCapacity());
+        assertEquals(reference.osmolality(), s.osmolality(), 1e-12);
+        double held = s.species().stream().filter(a -> a.species().name().equals("H12X+5")).findFirst().orElseThrow()
+                .molality();
+        assertEquals(0.001, held, 1e-15);
+    }
+
+    private static Species only(Component x, double logBeta) {
+        return new Species("H12X+5", 5, Map.of(x, 1), 12, new FormationConstant(logBeta, 0, 0, 0, ANY));
+    }
+
+    /** A second complex of log K −300 forms nothing, but it takes the log-space path for every complex. */
+    @Test
+    void aVanishingComplexChangesNothingAndTakesLogSpace() {
+        Species bound = new Species("MA", 0, Map.of(M, 1, ACID.basis(), 1), 0, new FormationConstant(3.5, 0, 0, 0, ANY));
+        Species protonated = new Species("MHA+", 1, Map.of(M, 1, ACID.basis(), 1), 1,
+                new FormationConstant(7.9, 0, 0, 0, ANY));
+        Species vanishing = new Species("M2A+2", 2, Map.of(M, 2, ACID.basis(), 1), 0,
+                new FormationConstant(-300, 0, 0, 0, ANY));
+        Map<Component, Double> metal = new LinkedHashMap<>();
+        metal.put(M, 0.005);
+        metal.put(CL, 0.012);
+        EquilibriumState products = solve(List.of(Species.free(M), bound, protonated), metal);
+        EquilibriumState logs = solve(List.of(Species.free(M), bound, protonated, vanishing), metal);
+        assertEquals(products.pH(), logs.pH(), 1e-10);
+        assertEquals(products.ionicStrength(), logs.ionicStrength(), 1e-12);
+        assertEquals(products.bufferCapacity(), logs.bufferCapacity(), 1e-8 * products.bufferCapacity());
+        assertEquals(products.osmolality(), logs.osmolality(), 1e-12);
+        for (String name : List.of("MA", "MHA+", "M+2", "HA-")) {
+            assertEquals(molality(products, name), molality(logs, name), 1e-12 * molality(products, name), name);
+        }
+        assertEquals(0, molality(logs, "M2A+2"), 1e-30);
+    }
+
+    /** Species of a component the recipe does not hold are left out: they cannot change the answer. */
+    @Test
+    void speciesOfAbsentComponentsAreLeftOut() {
+        Component y = new Component("Y+", 1);
+        EquilibriumState plain = solve(List.of(), Map.of());
+        EquilibriumState more = solve(List.of(Species.free(y),
+                new Species("YA-", -1, Map.of(y, 1, ACID.basis(), 1), 0, new FormationConstant(5, 0, 0, 0, ANY))),
+                Map.of());
+        assertEquals(plain.pH(), more.pH(), 1e-12);
+        assertEquals(plain.species().size(), more.species().size());
+    }
+
+    /**
+     * 200 mol/kg of chloride with nothing to balance it needs mH = 200, pH −2.3 on the ideal scale; as much sodium needs
+     * mOH = 200, pH above 16. Neither root lies in the bracket, and no pH is given.
+     */
+    @Test
+    void aChargeBalanceWithoutARootInTheBracketIsIndeterminate() {
+        List<Species> species = List.of(Species.free(NA), Species.free(CL));
+        for (Component ion : List.of(NA, CL)) {
+            Map<Component, Double> totals = new LinkedHashMap<>();
+            totals.put(NA, 0.0);
+            totals.put(CL, 0.0);
+            totals.put(ion, 200.0);
+            IndeterminateException e = assertThrows(IndeterminateException.class,
+                    () -> IDEAL.solve(species, totals, 298.15));
+            assertEquals("no-root", e.caveat().code());
+            assertTrue(e.getMessage().contains("pH -2 and 16"), e.getMessage());
+        }
+    }
+
+    @Test
+    void aComponentWithoutSpeciesIsRefused() {
+        Component z = new Component("Z+", 1);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> DAVIES.solve(List.of(Species.free(NA)), Map.of(NA, 0.01, z, 0.01), 298.15));
+        assertTrue(e.getMessage().contains("Z+"), e.getMessage());
+    }
+
+    @Test
+    void aFixedSpeciesOutsideTheProblemIsRefused() {
+        Species stranger = Species.free(new Component("CO2", 0));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> DAVIES.solve(
+                List.of(Species.free(NA), Species.free(CL)), Map.of(NA, 0.01, CL, 0.01), 298.15, Double.NaN,
+                Map.of(stranger, 1e-5)));
+        assertTrue(e.getMessage().contains("CO2"), e.getMessage());
+    }
+
+    /** Water's own properties hold from −5 to 100 °C: outside, nothing can be said. */
+    @Test
+    void outsideWatersRangeNoPHIsGiven() {
+        List<Species> species = List.of(Species.free(NA), Species.free(CL));
+        IndeterminateException e = assertThrows(IndeterminateException.class,
+                () -> DAVIES.solve(species, Map.of(NA, 0.01, CL, 0.01), 374.15));
+        assertEquals("temperature-out-of-range", e.caveat().code());
+        assertTrue(e.getMessage().contains("101.0 °C"), e.getMessage());
+        Equilibrium.Prepared p = DAVIES.prepare(species, List.of(NA, CL), 374.15, Map.of());
+        assertThrows(IndeterminateException.class, () -> p.point(Map.of(NA, 0.01, CL, 0.01), null));
+        assertThrows(IndeterminateException.class, () -> p.trial(Map.of(NA, 0.01, CL, 0.01), null));
+    }
+
+    private static double molality(EquilibriumState s, String name) {
+        return s.species().stream().filter(a -> a.species().name().equals(name)).findFirst().orElseThrow().molality();
+    }
+}
