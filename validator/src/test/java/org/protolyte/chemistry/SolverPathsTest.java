@@ -153,6 +153,25 @@ class SolverPathsTest {
         assertThrows(IndeterminateException.class, () -> p.trial(Map.of(NA, 0.01, CL, 0.01), null));
     }
 
+    /** Charges beyond ±8 take log space and Davies' γ of their own charge, like any other ion. */
+    @Test
+    void ionsOfHighChargeTakeTheirOwnActivityCoefficients() {
+        Component q = new Component("Q+9", 9);
+        Component r = new Component("R-9", -9);
+        EquilibriumState s = solve(List.of(Species.free(q), Species.free(r)), Map.of(q, 1e-4, r, 1e-4));
+        double a = Water.debyeHuckelA(298.15);
+        for (String name : List.of("Q+9", "R-9", "HA-", "Na+")) {
+            SpeciesAmount x = s.species().stream().filter(y -> y.species().name().equals(name)).findFirst().orElseThrow();
+            assertEquals(Math.pow(10, Davies.INSTANCE.log10Gamma(x.species().charge(), s.ionicStrength(), a)),
+                    x.activityCoefficient(), 1e-12, name);
+        }
+        double charge = s.hydrogenMolality() - s.hydroxideMolality();
+        for (SpeciesAmount x : s.species()) {
+            charge += x.species().charge() * x.molality();
+        }
+        assertEquals(0, charge, 1e-12);
+    }
+
     private static double molality(EquilibriumState s, String name) {
         return s.species().stream().filter(a -> a.species().name().equals(name)).findFirst().orElseThrow().molality();
     }
