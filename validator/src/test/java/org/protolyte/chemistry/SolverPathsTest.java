@@ -172,6 +172,22 @@ class SolverPathsTest {
         assertEquals(0, charge, 1e-12);
     }
 
+    /** 0.154 mol/kg NaCl is 0.308 mol/kg of particles: ΔTf = 1.86 · 0.308 = 0.573 K, so at −1 °C it is ice. */
+    @Test
+    void belowTheFreezingPointTheMessageGivesBothTemperatures() {
+        List<Species> species = List.of(Species.free(NA), Species.free(CL));
+        Map<Component, Double> saline = Map.of(NA, 0.154, CL, 0.154);
+        IndeterminateException e = assertThrows(IndeterminateException.class,
+                () -> DAVIES.solve(species, saline, 272.15));
+        assertTrue(e.getMessage().startsWith("-1.0 °C is below the estimated freezing point of the solution (-0.57 °C)"),
+                e.getMessage());
+        Equilibrium.Prepared p = DAVIES.prepare(species, List.of(NA, CL), 272.15, Map.of());
+        assertThrows(IndeterminateException.class, () -> p.point(saline, null));
+        assertThrows(IndeterminateException.class, () -> p.trial(saline, null));
+        // at 0 °C it is still liquid: neutral, pH = pKw/2 on the ideal scale
+        assertEquals(Water.pKw(273.15) / 2, IDEAL.solve(species, saline, 273.15).pH(), 1e-9);
+    }
+
     private static double molality(EquilibriumState s, String name) {
         return s.species().stream().filter(a -> a.species().name().equals(name)).findFirst().orElseThrow().molality();
     }
