@@ -126,6 +126,19 @@ class ChemistryValuesTest {
         assertEquals(0, new FormationConstant(2, 0, 0, 0, ANY).times(0).log10K25(), 0);
     }
 
+    /** Two van 't Hoff constants add as such: logs, enthalpies and heat capacities, with no equation behind them. */
+    @Test
+    void twoVantHoffConstantsAddTermByTerm() {
+        FormationConstant sum = new FormationConstant(2, -1_000, 10, 0.03, TemperatureRange.celsius(0, 40))
+                .plus(new FormationConstant(3, -2_000, 20, 0.04, TemperatureRange.celsius(10, 50)));
+        assertEquals(null, sum.equation());
+        assertEquals(5, sum.log10K25(), 0);
+        assertEquals(-3_000, sum.deltaH(), 0);
+        assertEquals(30, sum.deltaCp(), 0);
+        assertEquals(0.05, sum.uncertainty(), 1e-15);
+        assertEquals(TemperatureRange.celsius(10, 40), sum.validity());
+    }
+
     /** The association is the dissociation reversed: log K = pKa, ΔH° and ΔCp° change sign. */
     @Test
     void theAssociationReversesTheDissociation() {
