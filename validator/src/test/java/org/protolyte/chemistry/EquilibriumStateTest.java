@@ -55,6 +55,40 @@ class EquilibriumStateTest {
         return s.species().stream().filter(a -> a.species().name().equals(name)).findFirst().orElseThrow();
     }
 
+    /** Mass action for every step at the solution: pKa(T) = pH + log10(a_acid/a_base) with Davies γ at its I. */
+    @Test
+    void everyStepObeysMassActionAtTheSolution() {
+        for (double kelvin : new double[] {283.15, 310.15}) {
+            EquilibriumState s = buffer(kelvin);
+            for (AcidBaseSystem system : List.of(ACID, AMINE)) {
+                for (int k = 0; k < system.steps().size(); k++) {
+                    SpeciesAmount acid = amount(s, system.forms().get(k).name());
+                    SpeciesAmount base = amount(s, system.forms().get(k + 1).name());
+                    double logRatio = Math.log10(acid.activityCoefficient() * acid.molality()
+                            / (base.activityCoefficient() * base.molality()));
+                    assertEquals(system.steps().get(k).pKa(kelvin), s.pH() + logRatio, 1e-9,
+                            system.forms().get(k).name() + " at " + kelvin + " K");
+                }
+            }
+        }
+    }
+
+    /** A component prepared but absent has species of share 0, not 0/0. */
+    @Test
+    void anAbsentComponentsFormsHaveNoShare() {
+        List<Species> species = new ArrayList<>(ACID.species());
+        species.addAll(AMINE.species());
+        species.add(Species.free(NA));
+        species.add(Species.free(CL));
+        Map<Component, Double> totals = new LinkedHashMap<>();
+        totals.put(ACID.basis(), 0.02);
+        totals.put(AMINE.basis(), 0.0);
+        totals.put(NA, 0.03);
+        EquilibriumState s = DAVIES.solve(species, totals, 298.15);
+        assertEquals(0, amount(s, "BH+").fractionOfComponent(), 0);
+        assertEquals(0, amount(s, "B").molality(), 0);
+    }
+
     @Test
     void eachFormsShareIsItsMolalityOverItsComponentsTotal() {
         EquilibriumState s = buffer(310.15);

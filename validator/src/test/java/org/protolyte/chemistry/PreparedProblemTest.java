@@ -135,6 +135,19 @@ class PreparedProblemTest {
         assertSame(s, p.trial(t, null));     // a search's step still gets its number
     }
 
+    /** After a solve with complexes, a recipe without any of their components forms none: plain saline, neutral. */
+    @Test
+    void complexesOfComponentsNowAbsentFormNothing() {
+        Equilibrium.Prepared p = DAVIES.prepare(species(true), totals(0).keySet(), 298.15, Map.of());
+        p.point(totals(0.05), null);
+        Map<Component, Double> saline = new LinkedHashMap<>();
+        saline.put(NA, 0.03);
+        saline.put(CL, 0.03);
+        EquilibriumState fresh = DAVIES.solve(List.of(Species.free(NA), Species.free(CL)), saline, 298.15);
+        assertSame(fresh, p.point(saline, null));
+        assertEquals(Water.pKw(298.15) / 2, p.point(saline, null).pH(), 0.01);
+    }
+
     @Test
     void aComponentTheMapLeavesOutIsAbsent() {
         Equilibrium.Prepared p = DAVIES.prepare(species(false), totals(0).keySet(), 298.15, Map.of());
