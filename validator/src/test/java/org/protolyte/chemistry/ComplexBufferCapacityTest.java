@@ -104,6 +104,32 @@ class ComplexBufferCapacityTest {
         assertTrue(sum >= 0.5 * rest, sum + " ≪ " + rest);
     }
 
+    /** A buffer in no complex beside complexed ones: its own balance alone, the titration slope still. */
+    @ParameterizedTest(name = "Na+ {0} mol/kg")
+    @ValueSource(doubles = {0.03, 0.045})
+    void aBufferInNoComplexBesideComplexesBuffersAsTheTitrationSays(double sodium) {
+        EquilibriumState s = withFreeBuffer(sodium, Double.NaN);
+        double i = s.ionicStrength();
+        double h = 1e-7;
+        double numeric = 2 * h / (withFreeBuffer(sodium + h, i).pH() - withFreeBuffer(sodium - h, i).pH());
+        assertEquals(numeric, s.bufferCapacity(), 1e-4 * numeric, "pH " + s.pH());
+    }
+
+    private static EquilibriumState withFreeBuffer(double sodium, double fixedI) {
+        AcidBaseSystem free = new AcidBaseSystem("E", List.of(new AcidBaseSystem.Form("HE", 0),
+                new AcidBaseSystem.Form("E-", -1)), List.of(new DissociationStep(5.5, 0, 0, 0, ANY)));
+        List<Species> s = new ArrayList<>(species());
+        s.addAll(free.species());
+        Map<Component, Double> t = new LinkedHashMap<>();
+        t.put(ACID.basis(), 0.01);
+        t.put(BASE.basis(), 0.02);
+        t.put(free.basis(), 0.02);
+        t.put(NA, sodium);
+        t.put(CL, 0.01);
+        t.put(M, 0.005);
+        return DAVIES.solve(s, t, 298.15, fixedI);
+    }
+
     /**
      * Open to CO2 (CO2(aq) held), with M+2 + CO3-2 ⇌ MCO3 and M+2 + HCO3- ⇌ MHCO3+: base taken up per pH with the
      * gas phase supplying carbonate, β = dC_Na/dpH again.

@@ -188,6 +188,34 @@ class SolverPathsTest {
         assertEquals(Water.pKw(273.15) / 2, IDEAL.solve(species, saline, 273.15).pH(), 1e-9);
     }
 
+    /** Open to CO2 (CO2(aq) held) the answer is the same whether the molalities take products or log space. */
+    @Test
+    void anOpenComponentGivesTheSameAnswerInLogSpace() {
+        AcidBaseSystem carbonate = new AcidBaseSystem("C", List.of(new AcidBaseSystem.Form("CO2", 0),
+                new AcidBaseSystem.Form("HCO3-", -1), new AcidBaseSystem.Form("CO3-2", -2)),
+                List.of(new DissociationStep(6.35, 0, 0, 0, ANY), new DissociationStep(10.3, 0, 0, 0, ANY)));
+        Component x = new Component("X-7", -7);
+        EquilibriumState[] s = new EquilibriumState[2];
+        for (int k = 0; k < 2; k++) {
+            List<Species> species = new ArrayList<>(carbonate.species());
+            species.add(Species.free(NA));
+            species.add(Species.free(CL));
+            species.add(only(x, k == 0 ? 0 : 300));
+            Map<Component, Double> totals = new LinkedHashMap<>();
+            totals.put(carbonate.basis(), 0.0);
+            totals.put(NA, 0.03);
+            totals.put(CL, 0.002);
+            totals.put(x, 0.001);
+            s[k] = DAVIES.solve(species, totals, 298.15, Double.NaN, Map.of(carbonate.species().get(0), 1.2e-3));
+        }
+        assertEquals(s[0].pH(), s[1].pH(), 1e-10);
+        assertEquals(s[0].bufferCapacity(), s[1].bufferCapacity(), 1e-9 * s[0].bufferCapacity());
+        for (String name : List.of("CO2", "HCO3-", "CO3-2")) {
+            assertEquals(molality(s[0], name), molality(s[1], name), 1e-12 * molality(s[0], name), name);
+        }
+        assertEquals(1.2e-3, molality(s[1], "CO2"), 1e-18);
+    }
+
     private static double molality(EquilibriumState s, String name) {
         return s.species().stream().filter(a -> a.species().name().equals(name)).findFirst().orElseThrow().molality();
     }
