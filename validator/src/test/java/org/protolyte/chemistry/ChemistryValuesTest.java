@@ -48,7 +48,8 @@ class ChemistryValuesTest {
     void aSystemNeedsOneFormMoreThanStepsEachOneChargeLower() {
         assertThrows(IllegalArgumentException.class, () -> new AcidBaseSystem("A", FORMS, STEPS.subList(0, 2)));
         List<AcidBaseSystem.Form> skipping = List.of(new AcidBaseSystem.Form("H2A", 0), new AcidBaseSystem.Form("A-2", -2));
-        assertThrows(IllegalArgumentException.class, () -> new AcidBaseSystem("A", skipping, STEPS.subList(0, 1)));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new AcidBaseSystem("A", skipping,
+                STEPS.subList(0, 1))).getMessage().contains("one charge less"));
         List<AcidBaseSystem.Form> rising = List.of(new AcidBaseSystem.Form("A-", -1), new AcidBaseSystem.Form("HA", 0));
         assertThrows(IllegalArgumentException.class, () -> new AcidBaseSystem("A", rising, STEPS.subList(0, 1)));
     }

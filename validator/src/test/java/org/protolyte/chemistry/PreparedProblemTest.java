@@ -148,6 +148,16 @@ class PreparedProblemTest {
         assertEquals(Water.pKw(298.15) / 2, p.point(saline, null).pH(), 0.01);
     }
 
+    /** A search's trial takes the totals it is given, not those of the solve before it; a zero total is allowed. */
+    @Test
+    void eachTrialTakesItsOwnTotals() {
+        Equilibrium.Prepared p = DAVIES.prepare(species(false), totals(0).keySet(), 298.15, Map.of());
+        p.point(totals(0.02), null);
+        assertSame(DAVIES.solve(species(false), totals(0.07), 298.15), p.trial(totals(0.07), null));
+        double[] t = {0.02, 0.015, 0.0, 0.03, 0.004};
+        assertSame(DAVIES.solve(species(false), totals(0), 298.15), p.point(t, null));
+    }
+
     @Test
     void aComponentTheMapLeavesOutIsAbsent() {
         Equilibrium.Prepared p = DAVIES.prepare(species(false), totals(0).keySet(), 298.15, Map.of());
