@@ -14,6 +14,9 @@ import org.protolyte.recipe.Solution;
 /** The pH's uncertainty from the constants: see {@link Uncertainty} for what it covers. */
 final class ConstantsPropagation {
 
+    /** pH changes smaller than this are not resolved by the solver. */
+    static final double PH_RESOLUTION = 1e-9;
+
     private final Equilibrium equilibrium;
 
     ConstantsPropagation(Equilibrium equilibrium) {
@@ -77,7 +80,10 @@ final class ConstantsPropagation {
                     failed[i] = true;
                     continue;
                 }
-                double dpH = moved[0][i] - r.state().orElseThrow().pH();
+                // below the solver's pH resolution (Equilibrium settles to 1e-9) a change is rounding, which varies
+                // with how the JVM compiled the maths: none, so that a report is the same from one run to the next
+                double raw = moved[0][i] - r.state().orElseThrow().pH();
+                double dpH = Math.abs(raw) < PH_RESOLUTION ? 0 : raw;
                 double dBeta = moved[1][i] - r.bufferCapacityPerLitre();
                 dpHs[q][i] = dpH;
                 dBetas[q][i] = dBeta;
