@@ -36,6 +36,7 @@ public record WaiverDates(LocalDate approved, LocalDate expires) {
         try {
             return Optional.of(LocalDate.parse(text));
         } catch (DateTimeParseException e) {
+            // caught: the parser's message names its own formatter; the problem at the field says it for a reviewer
             problems.add(doc.problem(at + "/" + field, "the waiver's " + field + " date '" + text
                     + "' is not a calendar date (YYYY-MM-DD, a month 01–12 and a day that month has)"));
             return Optional.empty();
