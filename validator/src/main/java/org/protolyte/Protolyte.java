@@ -248,7 +248,12 @@ public final class Protolyte {
 
     /** A new run's summary: the tool version, now, and the library files with their hashes. */
     public RunSummary newSummary() {
-        return new RunSummary(version(), Instant.now(), library.files());
+        return newSummary(Optional.empty());
+    }
+
+    /** A summary whose provenance names the run date given for the waivers, if one was. */
+    public RunSummary newSummary(Optional<java.time.LocalDate> asOf) {
+        return new RunSummary(version(), Instant.now(), library.files(), asOf);
     }
 
     /** The whole run held in memory, for renderers that need every report at once (SARIF). */

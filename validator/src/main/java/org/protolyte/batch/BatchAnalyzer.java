@@ -69,8 +69,19 @@ public final class BatchAnalyzer {
         double scale = r.batchSize() / r.master().basis().amount();
         List<Made> made = made(r, master);
         List<BatchAnalysis.AdditionCheck> checks = compare(master, made, scale);
-        Plan plan = plan(r, master, made);
+        List<Caveat> caveats = new ArrayList<>();
+        Plan plan = plan(r, master, made, false);
         Predicted[] recorded = predict(r, master, made, plan, 1);
+        Optional<String> noQs = plan.titrantStep != Integer.MAX_VALUE && plan.observations.size() > plan.measured.size()
+                ? recorded[recorded.length - 1].unpredicted() : Optional.empty();
+        if (noQs.isPresent() && plan.goal.isPresent()) {
+            // the reading the q.s. aimed at is still a result: judge it against the pH the recorded additions give
+            plan = plan(r, master, made, true);
+            recorded = predict(r, master, made, plan, 1);
+            caveats.add(Caveat.warning("batch-titrant-not-compared", "the titrant volume is not compared: "
+                    + noQs.get() + "; the pH read at step " + plan.goal.get().step() + " (" + plan.goal.get().pointer()
+                    + ") is compared with the pH the recorded additions, titrant included, give instead"));
+        }
         List<BatchAnalysis.Observation> observations = new ArrayList<>();
         for (int i = 0; i < plan.observations.size(); i++) {
             BatchAnalysis.Observation o = plan.observations.get(i);
@@ -88,7 +99,6 @@ public final class BatchAnalyzer {
                         s.titrantFactor()), unpredicted(p)));
             }
         }
-        List<Caveat> caveats = new ArrayList<>();
         Optional<FormulationAnalysis> asMade = asMade(r, master, made, caveats);
         return new BatchAnalysis(r, master, scale, checks, observations, candidates, specifiedPh(r, master, made),
                 asMade, caveats);
@@ -206,7 +216,11 @@ public final class BatchAnalyzer {
                         int titrantStep, Optional<BatchRecord.Measurement> goal) {
     }
 
-    private Plan plan(BatchRecord r, Recipe master, List<Made> made) {
+    /**
+     * {@code forward}: the q.s. cannot be predicted, so the pH it aimed at is compared as an ordinary reading (from the
+     * recorded titrant amount) and the titrant volume is not.
+     */
+    private Plan plan(BatchRecord r, Recipe master, List<Made> made, boolean forward) {
         // a titrant counts as the q.s. only where it was taken from a stated stock (its volume is what is compared)
         int titrantStep = made.stream().filter(x -> x.titrant() && x.molarity() > 0).mapToInt(x -> x.recorded().step())
                 .min().orElse(Integer.MAX_VALUE);
@@ -217,7 +231,7 @@ public final class BatchAnalyzer {
         List<BatchAnalysis.Observation> obs = new ArrayList<>();
         List<BatchRecord.Measurement> measured = new ArrayList<>();
         for (BatchRecord.Measurement m : r.measurements()) {
-            if (goal.isPresent() && goal.get() == m) {
+            if (!forward && goal.isPresent() && goal.get() == m) {
                 continue;
             }
             String label = m.kind() == BatchRecord.Measurement.Kind.PH
@@ -229,7 +243,7 @@ public final class BatchAnalyzer {
                     Double.NaN, m.pointer(), Optional.empty()));
             measured.add(m);
         }
-        if (qs) {
+        if (qs && !forward) {
             Made first = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElseThrow();
             double ml = made.stream().filter(x -> x.titrant() && x.molarity() > 0
                             && x.substance().name().equals(first.substance().name()))

@@ -35,12 +35,12 @@ public final class BatchRecordReader {
 
     public static final String SCHEMA = "batch-record.schema.json";
     /**
-     * A recorded pH lies within 0–14 inclusive, the scale a laboratory pH meter reads (common practice): the
-     * calibration buffers of USP <791> and Ph. Eur. 2.2.3 lie well inside it, and the glass electrode's acid and
-     * alkaline errors grow beyond it, so a value outside is a recording error, not a reading to judge.
+     * A recorded pH lies within −2 to 16 inclusive, the display range of a laboratory pH meter (common practice): a
+     * value beyond it cannot have been read and is a recording error. Inside it, a reading far from the buffers of
+     * USP <791> and Ph. Eur. 2.2.3 (below 0 or above 14, say) is still a result: it is judged, and fails.
      */
-    static final double MIN_PH = 0;
-    static final double MAX_PH = 14;
+    static final double MIN_PH = -2;
+    static final double MAX_PH = 16;
     /** mOsm/kg: saturated sodium chloride is about 10,000; no medium comes near it (common practice). */
     static final double MAX_OSMOLALITY = 10000;
 
@@ -251,8 +251,8 @@ public final class BatchRecordReader {
         }
         double value = n.get("value").asDouble();
         if (kind == BatchRecord.Measurement.Kind.PH && !(value >= MIN_PH && value <= MAX_PH)) {
-            problems.add(doc.problem(p + "/value", "a pH reading of " + value + " is outside " + MIN_PH + "–" + MAX_PH
-                    + ", the range a pH meter is calibrated and read in; check the record"));
+            problems.add(doc.problem(p + "/value", "a pH reading of " + value + " is outside " + MIN_PH + " to " + MAX_PH
+                    + ", the range a pH meter displays; check the record"));
             return null;
         }
         if (kind == BatchRecord.Measurement.Kind.OSMOLALITY && !(value > 0 && value <= MAX_OSMOLALITY)) {

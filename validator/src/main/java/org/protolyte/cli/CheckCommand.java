@@ -143,7 +143,7 @@ public final class CheckCommand implements Callable<Integer> {
 
     /** One code path for every format: each document's report is written as soon as it is made. */
     private int report(Protolyte protolyte, Inputs.Found found, Writer out) throws IOException {
-        RunSummary summary = protolyte.newSummary();
+        RunSummary summary = protolyte.newSummary(java.util.Optional.ofNullable(asOf));
         found.excluded().forEach(summary::skip);
         List<Protolyte.Input> inputs = found.inputs();
         switch (format) {
@@ -159,7 +159,7 @@ public final class CheckCommand implements Callable<Integer> {
             }
             case text -> {
                 TextRenderer text = new TextRenderer();
-                out.write(text.header(summary.toolVersion()));
+                out.write(text.header(summary.toolVersion(), summary.asOf()));
                 protolyte.stream(inputs, summary, r -> write(() -> out.write(text.document(r))));
                 out.write(text.footer(summary.skipped(), summary.documents(), summary::count));
             }

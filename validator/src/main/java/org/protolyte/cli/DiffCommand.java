@@ -65,8 +65,9 @@ public final class DiffCommand implements Callable<Integer> {
         DocumentReport old = protolyte.check(before);
         DocumentReport now = protolyte.check(after);
         if (old.batch().isPresent() || now.batch().isPresent()) {
-            err.println("protolyte: " + (old.batch().isPresent() ? before : after) + " is a batch record, not a "
-                    + "revision of a formulation; diff compares formulations");
+            DocumentReport batch = old.batch().isPresent() ? old : now;
+            err.println("protolyte: " + (batch == old ? before : after) + " is batch record "
+                    + batch.id().orElse("(no id)") + ", not a revision of a formulation; diff compares formulations");
             return 2;
         }
         if (old.status() != Status.INVALID && now.status() != Status.INVALID && !old.id().equals(now.id())

@@ -91,6 +91,10 @@ final class Inputs {
         }
         boolean stdinTaken = false;
         for (Path p : named) {
+            if (p.toString().isEmpty()) {
+                // Path.of("") is the working folder: an empty argument (an unset variable) must not check all of it
+                throw new Setup.UsageException("an empty file argument ('') names no file; give a file or folder");
+            }
             if (p.toString().equals(STANDARD_INPUT)) {
                 if (stdinTaken) {
                     throw new Setup.UsageException("'-' (standard input) is named more than once");

@@ -36,6 +36,10 @@ public final class RulesCommand implements Callable<Integer> {
         RuleBook book;
         Checker checker;
         try {
+            if (intendedUse != null && !Checker.intendedUses().contains(intendedUse)) {
+                throw new Setup.UsageException("--intended-use '" + intendedUse + "' is not an intended use; known: "
+                        + String.join(", ", Checker.intendedUses()));
+            }
             book = setup.ruleBook();
             checker = setup.checker(book);
         } catch (Setup.UsageException e) {

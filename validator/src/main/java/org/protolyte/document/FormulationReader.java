@@ -72,6 +72,14 @@ public final class FormulationReader {
             Optional<Formulation.PhTarget> target = root.path("targets").has("pH")
                     ? Optional.ofNullable(target(root.path("targets").get("pH"))) : Optional.empty();
             List<Formulation.Condition> conditions = conditions(root.path("conditions"), target);
+            JsonNode waivers = root.path("waivers");
+            for (int i = 0; i < waivers.size(); i++) {
+                try {
+                    WaiverDates.read(doc, waivers.get(i), "/waivers/" + i);
+                } catch (DocumentException e) {
+                    problems.addAll(e.problems());
+                }
+            }
             if (!problems.isEmpty()) {
                 throw new DocumentException(problems);
             }

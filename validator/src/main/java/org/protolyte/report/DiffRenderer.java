@@ -37,6 +37,13 @@ public final class DiffRenderer {
                     num(v.before()), num(v.after()), Double.isNaN(v.delta()) ? "—" : String.format(Locale.ROOT, "%+.3g",
                             v.delta()), v.unit().isEmpty() ? "" : " " + v.unit()));
         }
+        b.append(NL).append(String.format(Locale.ROOT, "species that moved (share of their component, more than %.0f "
+                + "percentage points):", RevisionDiff.SPECIES_MOVED * 100)).append(d.species().isEmpty() ? " none" : "")
+                .append(NL);
+        for (RevisionDiff.SpeciesChange s : d.species()) {
+            b.append(String.format(Locale.ROOT, "  %-24s %-16s %5.1f %% → %5.1f %% of %s%n", s.where(), s.species(),
+                    s.before() * 100, s.after() * 100, s.component()));
+        }
         b.append(NL).append("findings:").append(d.findings().isEmpty() ? " unchanged" : "").append(NL);
         for (RevisionDiff.FindingChange f : d.findings()) {
             String sev = f.before().map(s -> s.code()).orElse("—") + " → " + f.after().map(s -> s.code()).orElse("cleared");
@@ -69,6 +76,14 @@ public final class DiffRenderer {
             finite(o, "before", v.before());
             finite(o, "after", v.after());
         }
+        ArrayNode species = root.putArray("species");
+        for (RevisionDiff.SpeciesChange s : d.species()) {
+            ObjectNode o = species.addObject().put("where", s.where()).put("component", s.component())
+                    .put("species", s.species());
+            finite(o, "shareBefore", s.before());
+            finite(o, "shareAfter", s.after());
+        }
+        root.put("speciesThreshold", RevisionDiff.SPECIES_MOVED);
         ArrayNode findings = root.putArray("findings");
         for (RevisionDiff.FindingChange f : d.findings()) {
             ObjectNode o = findings.addObject().put("change", f.kind().name().toLowerCase(Locale.ROOT))

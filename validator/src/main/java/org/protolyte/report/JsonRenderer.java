@@ -37,6 +37,7 @@ public final class JsonRenderer {
     public Stream begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
         ObjectNode tool = mapper.createObjectNode();
         fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        run.asOf().ifPresent(d -> tool.put("asOf", d.toString()));
         out.write("{\n\"tool\" : " + mapper.writeValueAsString(tool) + ",\n\"reports\" : [");
         return new Stream(out);
     }

@@ -10,6 +10,7 @@ import java.util.Optional;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
+import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.document.Formulation;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.rules.Finding;
@@ -22,9 +23,23 @@ import org.protolyte.rules.Severity;
  * findings by rule and by the component or condition they concern.
  */
 public record RevisionDiff(DocumentReport before, DocumentReport after, List<ComponentChange> components,
-                           List<ValueChange> values, List<FindingChange> findings, Optional<String> basis) {
+                           List<ValueChange> values, List<SpeciesChange> species, List<FindingChange> findings,
+                           Optional<String> basis) {
 
     public enum Kind { ADDED, REMOVED, CHANGED }
+
+    /**
+     * A species' share of its component moves by more than this between revisions (0.05: five percentage points, the
+     * smallest share the report's speciation lists) before it is named: below it, a buffer's form has not changed.
+     */
+    public static final double SPECIES_MOVED = 0.05;
+
+    /**
+     * A species whose share of its component (of the acid–base system or metal it belongs to) moved at a condition by
+     * more than {@link #SPECIES_MOVED}; 0 where the revision has none of it, NaN where its condition is indeterminate.
+     */
+    public record SpeciesChange(String where, String component, String species, double before, double after) {
+    }
 
     /**
      * A component line; amounts in mmol per litre of solution (finalVolume) or per kg of water (waterMass), so that
@@ -48,6 +63,7 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
     public RevisionDiff {
         components = List.copyOf(components);
         values = List.copyOf(values);
+        species = List.copyOf(species);
         findings = List.copyOf(findings);
     }
 
@@ -60,13 +76,16 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
     public static RevisionDiff compare(DocumentReport before, DocumentReport after) {
         List<ComponentChange> components = new ArrayList<>();
         List<ValueChange> values = new ArrayList<>();
+        List<SpeciesChange> species = new ArrayList<>();
         if (before.analysis().isPresent() && after.analysis().isPresent()) {
             FormulationAnalysis a = before.analysis().get();
             FormulationAnalysis b = after.analysis().get();
             components(a, b, components);
             values(a, b, values);
+            species(a, b, species);
         }
-        return new RevisionDiff(before, after, components, values, findings(before, after), basis(before, after));
+        return new RevisionDiff(before, after, components, values, species, findings(before, after),
+                basis(before, after));
     }
 
     /** The basis as a reader names it, where the two revisions differ in it. */
@@ -157,6 +176,32 @@ public record RevisionDiff(DocumentReport before, DocumentReport after, List<Com
                             x.moles() * 1000 / a.recipe().formulation().basis().amount(),
                             y.moles() * 1000 / b.recipe().formulation().basis().amount());
                 }
+            }
+        }
+    }
+
+    /** Per condition of both revisions, determinate in both, the species whose share moved beyond the threshold. */
+    private static void species(FormulationAnalysis a, FormulationAnalysis b, List<SpeciesChange> out) {
+        for (ConditionResult x : a.conditions()) {
+            for (ConditionResult y : b.conditions()) {
+                if (!x.condition().name().equals(y.condition().name()) || !x.determinate() || !y.determinate()) {
+                    continue;
+                }
+                Map<String, double[]> shares = new LinkedHashMap<>();
+                for (SpeciesAmount s : x.state().orElseThrow().species()) {
+                    shares.computeIfAbsent(s.component().name() + "|" + s.species().name(), k -> new double[2])[0] =
+                            s.fractionOfComponent();
+                }
+                for (SpeciesAmount s : y.state().orElseThrow().species()) {
+                    shares.computeIfAbsent(s.component().name() + "|" + s.species().name(), k -> new double[2])[1] =
+                            s.fractionOfComponent();
+                }
+                shares.forEach((k, v) -> {
+                    if (Math.abs(v[1] - v[0]) > SPECIES_MOVED) {
+                        out.add(new SpeciesChange(x.condition().name(), k.substring(0, k.indexOf('|')),
+                                k.substring(k.indexOf('|') + 1), v[0], v[1]));
+                    }
+                });
             }
         }
     }

@@ -1,9 +1,11 @@
 package org.protolyte.report;
 
 import java.time.Instant;
+import java.time.LocalDate;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * What a streamed run keeps once each document's report has been written: counts, skipped files and the
@@ -14,11 +16,19 @@ public final class RunSummary {
     private final String toolVersion;
     private final Instant generatedAt;
     private final Map<String, String> libraryFiles;
+    private final Optional<LocalDate> asOf;
     private final Map<Status, Long> counts = new EnumMap<>(Status.class);
     private final List<Skipped> skipped = new java.util.ArrayList<>();
     private int documents;
 
     public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles) {
+        this(toolVersion, generatedAt, libraryFiles, Optional.empty());
+    }
+
+    /** {@code asOf}: the run date given for the waivers (--as-of), part of the provenance. */
+    public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
+                      Optional<LocalDate> asOf) {
+        this.asOf = asOf;
         this.toolVersion = toolVersion;
         this.generatedAt = generatedAt;
         this.libraryFiles = Map.copyOf(libraryFiles);
@@ -38,6 +48,10 @@ public final class RunSummary {
 
     public String toolVersion() {
         return toolVersion;
+    }
+
+    public Optional<LocalDate> asOf() {
+        return asOf;
     }
 
     public Instant generatedAt() {

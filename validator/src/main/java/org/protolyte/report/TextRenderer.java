@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -34,7 +35,13 @@ public final class TextRenderer {
 
     /** Streaming: the first line, each document's block, then the footer. */
     public String header(String version) {
-        return "Protolyte " + version + NL;
+        return header(version, Optional.empty());
+    }
+
+    /** The tool line, and the run date the waivers were judged as of where one was given (--as-of). */
+    public String header(String version, Optional<java.time.LocalDate> asOf) {
+        return "Protolyte " + version + NL + asOf.map(d -> "as of " + d + " (--as-of): waiver approval and expiry "
+                + "judged on that date" + NL).orElse("");
     }
 
     public String document(DocumentReport r) {

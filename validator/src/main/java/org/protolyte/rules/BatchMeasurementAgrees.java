@@ -9,7 +9,8 @@ import org.protolyte.batch.BatchAnalysis;
 /**
  * A measurement of one kind agrees with the engine's prediction for the batch as recorded: pH within
  * {@code maxDifference} (default 0.1), a titrant volume or an osmolality within {@code maxDifference} per cent
- * (defaults 10 and 3). One class for the three kinds, which differ only in what they compare.
+ * (defaults 10 and 3); beyond {@code errorBeyond}, where stated, the finding is an error. One class for the three
+ * kinds, which differ only in what they compare.
  */
 public abstract class BatchMeasurementAgrees implements BatchCheckKind {
 
@@ -49,6 +50,20 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
         public Osmolality() {
             super("batch-osmolality-agrees", BatchAnalysis.Observation.Kind.OSMOLALITY, 3);
         }
+    }
+
+    /**
+     * A rule may state {@code errorBeyond} (same unit as {@code maxDifference}): a difference beyond it is an error
+     * whatever the rule's severity, since neither the model nor the instrument is that far off.
+     */
+    private boolean beyond(BatchAnalysis.Observation o, double d, Rule rule) {
+        double e = rule.number("errorBeyond", Double.POSITIVE_INFINITY);
+        return kind == BatchAnalysis.Observation.Kind.PH ? Math.abs(d) > e : Math.abs(d) > e / 100 * Math.abs(o.predicted());
+    }
+
+    private String unit(double limit) {
+        return kind == BatchAnalysis.Observation.Kind.PH ? String.format(Locale.ROOT, "%.2f", limit)
+                : String.format(Locale.ROOT, "%.0f %%", limit);
     }
 
     @Override
@@ -96,13 +111,18 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
             boolean off = kind == BatchAnalysis.Observation.Kind.PH ? Math.abs(d) > limit
                     : Math.abs(d) > limit / 100 * Math.abs(o.predicted());
             if (off) {
-                out.add(rule.finding(b.record().document(), o.pointer(), String.format(Locale.ROOT,
-                        "%s: measured %s, the additions as recorded give %s (%s; limit %s)", o.label(),
+                Finding f = rule.finding(b.record().document(), o.pointer(), String.format(Locale.ROOT,
+                        "%s: measured %s, the additions as recorded give %s (%s; limit %s)%s", o.label(),
                         BatchText.value(o.kind(), o.measured()), BatchText.value(o.kind(), o.predicted()),
                         kind == BatchAnalysis.Observation.Kind.PH ? String.format(Locale.ROOT, "%+.2f", d)
                                 : String.format(Locale.ROOT, "%+.0f %%", 100 * d / o.predicted()),
                         kind == BatchAnalysis.Observation.Kind.PH ? String.format(Locale.ROOT, "%.2f", limit)
-                                : String.format(Locale.ROOT, "%.0f %%", limit))));
+                                : String.format(Locale.ROOT, "%.0f %%", limit), beyond(o, d, rule)
+                                ? String.format(Locale.ROOT, "; beyond %s, more than the model and the instrument "
+                                + "can explain", unit(rule.number("errorBeyond", 0))) : ""));
+                out.add(beyond(o, d, rule) && f.severity().compareTo(Severity.ERROR) < 0
+                        ? new Finding(f.rule(), Severity.ERROR, f.message(), f.pointer(), f.location(), f.definition())
+                        : f);
             }
         }
         return out;

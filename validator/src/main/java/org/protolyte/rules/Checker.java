@@ -66,6 +66,11 @@ public final class Checker {
     private static final List<String> USES = List.of("", "parenteral", "ophthalmic", "cell-culture", "bioprocess",
             "oral", "topical", "laboratory", "other");
 
+    /** The intended uses a document may state (the formulation schema's list). */
+    public static List<String> intendedUses() {
+        return USES.subList(1, USES.size());
+    }
+
     public static Checker byIntendedUse(RuleBook book) {
         return new Checker(book, List.of(), List.of());
     }

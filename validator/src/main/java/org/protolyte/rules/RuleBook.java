@@ -180,6 +180,7 @@ public final class RuleBook {
                 CheckKind kind = kinds.get(r.check()).orElseThrow(() -> new DocumentException(doc.problem(at + "/check",
                         "unknown check kind '" + r.check() + "'; known: " + String.join(", ", kinds.all().keySet()))));
                 problems.addAll(schemas.validate(doc, at + "/parameters", r.parameters(), kind.parameterSchema()));
+                inverted(doc, at + "/parameters", r.parameters(), problems);
                 rules.put(id, r);
             } catch (DocumentException ex) {
                 problems.addAll(ex.problems());
@@ -190,6 +191,28 @@ public final class RuleBook {
             throw new DocumentException(problems.stream().map(p -> new Problem(p.pointer(), p.location(),
                     p.message() + " (in rule pack " + pack.name() + ", " + doc.source() + ")")).toList());
         }
+    }
+
+    /**
+     * A range whose lower end lies above its upper one ({@code min}/{@code max}, {@code minX}/{@code maxX}, at any
+     * depth) passes nothing, or everything, depending on how a check reads it: a schema cannot say so, so it is
+     * refused here, after a pack's changes are merged into its parent's values.
+     */
+    private static void inverted(SourceDocument doc, String at, JsonNode parameters, List<Problem> problems) {
+        if (!parameters.isObject()) {
+            return;
+        }
+        parameters.properties().forEach(p -> {
+            String name = p.getKey();
+            JsonNode upper = parameters.get("max" + name.substring(Math.min(3, name.length())));
+            if (name.startsWith("min") && p.getValue().isNumber() && upper != null && upper.isNumber()
+                    && p.getValue().asDouble() > upper.asDouble()) {
+                String max = "max" + name.substring(3);
+                problems.add(doc.problem(at, name + " " + p.getValue().asString() + " is above " + max + " "
+                        + upper.asString() + ": the range is inverted and would judge nothing as stated"));
+            }
+            inverted(doc, at + "/" + name.replace("~", "~0").replace("/", "~1"), p.getValue(), problems);
+        });
     }
 
     private static Rule complete(RulePack pack, JsonNode e, String at) {

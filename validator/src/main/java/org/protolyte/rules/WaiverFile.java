@@ -1,7 +1,5 @@
 package org.protolyte.rules;
 
-import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -11,6 +9,7 @@ import org.protolyte.document.JsonReader;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
 import org.protolyte.document.SourceDocument;
+import org.protolyte.document.WaiverDates;
 
 import tools.jackson.databind.JsonNode;
 
@@ -51,27 +50,13 @@ public final class WaiverFile {
 
     /** One waiver entry, from a waiver file or from a document's own "waivers". */
     static Waiver waiver(JsonNode w, String origin, boolean authorGranted, SourceDocument doc, String at) {
-        LocalDate approved = date(w, "approved", doc, at);
-        LocalDate expires = date(w, "expires", doc, at);
-        if (expires.isBefore(approved)) {
-            throw new DocumentException(doc.problem(at + "/expires", "expires " + expires + " before it was approved ("
-                    + approved + ")"));
-        }
+        WaiverDates dates = WaiverDates.read(doc, w, at);
         return new Waiver(w.get("rule").asString(), text(w, "documentId"), text(w, "revision"), text(w, "sha256"),
-                text(w, "pointer"), w.get("reason").asString(), w.get("approver").asString(), approved, expires, origin,
-                authorGranted);
+                text(w, "pointer"), w.get("reason").asString(), w.get("approver").asString(), dates.approved(), dates.expires(),
+                origin, authorGranted);
     }
 
     private static Optional<String> text(JsonNode w, String field) {
         return w.has(field) ? Optional.of(w.get(field).asString()) : Optional.empty();
-    }
-
-    private static LocalDate date(JsonNode w, String field, SourceDocument doc, String at) {
-        try {
-            return LocalDate.parse(w.get(field).asString());
-        } catch (DateTimeParseException e) {
-            throw new DocumentException(doc.problem(at + "/" + field, "'" + w.get(field).asString()
-                    + "' is not a calendar date (YYYY-MM-DD)"));
-        }
     }
 }

@@ -73,25 +73,51 @@ class BatchFailsClosedTest {
         assertEquals(findings(plain, "batch-titrant-agrees").size(), findings(tab, "batch-titrant-agrees").size());
     }
 
-    /** NaOH cannot bring a phosphate buffer at pH 6.7 down to pH 2: no titrant prediction, so no pass. */
-    @Test
-    void aFinalPhTheTitrantCannotReachIsIndeterminateWithThePlaceAndTheReason() throws IOException {
-        DocumentReport r = check("br-clean.json", s -> s.replace("\"value\": 7.20", "\"value\": 2.0"));
-        assertEquals(Status.INDETERMINATE, r.status(), () -> describe(r));
-        Diagnostic d = r.diagnostics().stream().filter(x -> x.code().equals("batch-unpredicted")).findFirst()
+    /**
+     * NaOH cannot bring a phosphate buffer at pH 6.7 down to pH 2 (nor, from 73.5 mL, up to 15): the q.s. cannot be
+     * predicted, so the final reading is judged against the pH the recorded additions give, and fails at its place;
+     * the titrant not being compared is said, with the reason.
+     */
+    @ParameterizedTest
+    @ValueSource(strings = {"2.0", "15", "-1"})
+    void aFinalPhTheTitrantCannotReachFailsAtTheReadingWithTheReason(String value) throws IOException {
+        DocumentReport r = check("br-clean.json", s -> s.replace("\"value\": 7.20", "\"value\": " + value));
+        assertEquals(Status.FAIL, r.status(), () -> describe(r));
+        assertTrue(findings(r, "batch-ph-agrees").stream().anyMatch(f -> f.pointer().orElseThrow()
+                .equals("/measurements/1")), () -> describe(r));
+        assertTrue(findings(r, "batch-out-of-specification").stream().anyMatch(f -> f.pointer().orElseThrow()
+                .equals("/measurements/1")), () -> describe(r));
+        Diagnostic d = r.diagnostics().stream().filter(x -> x.code().equals("batch-titrant-not-compared")).findFirst()
                 .orElseThrow(() -> new AssertionError(describe(r)));
-        assertEquals("/additions/3/amount", d.pointer().orElseThrow());
-        assertTrue(d.location().isPresent(), d::toString);
         assertTrue(d.message().contains("sodium hydroxide") && d.message().contains("/measurements/1"), d::message);
     }
 
+    /** A meter displays about −2 to 16 (common practice): beyond that a value was never read. */
     @ParameterizedTest
-    @ValueSource(strings = {"15", "20", "-1", "14.01"})
-    void aPhReadingOutsideZeroToFourteenIsRefusedAtItsPlace(String value) throws IOException {
+    @ValueSource(strings = {"20", "-5", "16.01", "-2.01"})
+    void aPhReadingBeyondWhatAMeterDisplaysIsRefusedAtItsPlace(String value) throws IOException {
         DocumentReport r = check("br-clean.json", s -> s.replace("\"value\": 7.20", "\"value\": " + value));
         assertEquals(Status.INVALID, r.status(), () -> describe(r));
         assertEquals("/measurements/1/value", r.findings().get(0).pointer().orElseThrow(), () -> describe(r));
-        assertTrue(r.findings().get(0).message().contains("0–14"), () -> describe(r));
+        assertTrue(r.findings().get(0).message().contains("-2.0 to 16.0"), () -> describe(r));
+    }
+
+    /** 5000 mOsm/kg against 285 predicted is no calibration error: the record does not describe what was made. */
+    @Test
+    void anOsmolalityFarFromThePredictionFails() throws IOException {
+        DocumentReport r = check("br-clean.json", s -> s.replace("\"value\": 283", "\"value\": 5000"));
+        assertEquals(Status.FAIL, r.status(), () -> describe(r));
+        Finding f = findings(r, "batch-osmolality-agrees").stream().findFirst()
+                .orElseThrow(() -> new AssertionError(describe(r)));
+        assertEquals("/measurements/2", f.pointer().orElseThrow());
+        assertEquals(org.protolyte.rules.Severity.ERROR, f.severity(), () -> describe(r));
+    }
+
+    /** 283 against 285 is within the model's and the osmometer's few per cent: no finding at all. */
+    @Test
+    void anOsmolalityNearThePredictionIsQuiet() throws IOException {
+        DocumentReport r = check("br-clean.json", UnaryOperator.identity());
+        assertTrue(findings(r, "batch-osmolality-agrees").isEmpty(), () -> describe(r));
     }
 
     @Test
@@ -120,12 +146,15 @@ class BatchFailsClosedTest {
         assertTrue(r.findings().get(0).message().contains("below absolute zero"), () -> describe(r));
     }
 
-    /** 73.5 mmol of NaOH from a 0.001 mol/L stock would be 73.5 L for a 10 L batch: not a prediction to judge by. */
+    /**
+     * 73.5 mmol of NaOH from a 0.001 mol/L stock would be 73.5 L for a 10 L batch: not a q.s. to judge by, so the final
+     * pH is judged from the 0.07 mmol recorded, which cannot give 7.20; the volumes are named.
+     */
     @Test
-    void aQsThatNeedsMoreStockThanTheBatchHoldsIsIndeterminateWithTheVolumes() throws IOException {
+    void aQsThatNeedsMoreStockThanTheBatchHoldsFailsWithTheVolumes() throws IOException {
         DocumentReport r = check("br-clean.json", s -> s.replace("\"concentration\": \"1 mol/L\"",
                 "\"concentration\": \"0.001 mol/L\""));
-        assertEquals(Status.INDETERMINATE, r.status(), () -> describe(r));
+        assertEquals(Status.FAIL, r.status(), () -> describe(r));
         assertTrue(r.diagnostics().stream().anyMatch(d -> d.message().contains("more than the 10000.0 mL")),
                 () -> describe(r));
     }

@@ -47,7 +47,7 @@ class DiffCommandTest {
         var r = MainCommandLineTest.run("diff", records.resolve("master-phosphate-buffered-saline.json").toString(),
                 records.resolve("br-clean.json").toString());
         assertEquals(2, r.exitCode(), r::toString);
-        assertTrue(r.err().contains("batch record"), r::toString);
+        assertTrue(r.err().contains("batch record") && r.err().contains("BR-0310-041"), r::toString);
     }
 
     /** Tris's constants hold to about 50 °C (library range): at 95 °C the pH cannot be stood behind. */

@@ -218,4 +218,17 @@ class FolderInputsTest {
         MainCommandLineTest.Result bad = run("check", "--as-of", "01/10/2026", FAILING.toString());
         assertEquals(2, bad.exitCode(), bad::all);
     }
+
+    /** A re-run as of another date is a different judgement of the waivers: the report must say which date. */
+    @Test
+    void asOfIsPartOfTheProvenanceInTextAndJson() {
+        MainCommandLineTest.Result text = run("check", "--as-of", "2026-10-01", FAILING.toString());
+        assertTrue(text.out().contains("as of 2026-10-01"), text::out);
+        MainCommandLineTest.Result json = run("check", "--format", "json", "--as-of", "2026-10-01", FAILING.toString());
+        assertEquals("2026-10-01", tools.jackson.databind.json.JsonMapper.builder().build().readTree(json.out())
+                .path("tool").path("asOf").asString(""), json::out);
+        MainCommandLineTest.Result today = run("check", "--format", "json", FAILING.toString());
+        assertTrue(tools.jackson.databind.json.JsonMapper.builder().build().readTree(today.out()).path("tool")
+                .path("asOf").isMissingNode(), today::out);
+    }
 }

@@ -120,6 +120,22 @@ class MainCommandLineTest {
         assertTrue(r.err().contains("FILE"), r.err());
     }
 
+    /** '' is the working folder to a Path: an unset shell variable must not check every file below it. */
+    @Test
+    void anEmptyFileArgumentIsAUsageError() {
+        Result r = run("check", "");
+        assertEquals(2, r.exitCode(), r::all);
+        assertTrue(r.err().contains("empty file argument"), r::all);
+    }
+
+    @Test
+    void rulesForAnUnknownIntendedUseIsAUsageErrorListingTheKnownOnes() {
+        Result r = run("rules", "--intended-use", "martian");
+        assertEquals(2, r.exitCode(), r::all);
+        assertTrue(r.err().contains("'martian'") && r.err().contains("parenteral") && r.err().contains("laboratory"),
+                r::all);
+    }
+
     @Test
     void validDocumentExitsZero() {
         Result r = run("check", doc("pass-acetate.json"));

@@ -35,8 +35,36 @@ class RevisionDiffTest {
         RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("A", PHOSPHATE));
         assertEquals(0, d.components().size());
         assertEquals(0, d.values().size());
+        assertEquals(0, d.species().size());
         assertEquals(0, d.findings().size());
         assertFalse(d.newFailure(Severity.ERROR));
+    }
+
+    /**
+     * 10 + 10 mmol/L of the two phosphate salts against 10 + 30: between pKa1 (2.1) and pKa3 (12.3) each salt
+     * gives its own form, so HPO4-2 is about 10/20 of the phosphate before and 30/40 after (mass and proton balance,
+     * arithmetic); H2PO4- moves the other way. Both are named; a change of half a percentage point is not.
+     */
+    @Test
+    void theSpeciesThatMovedAreNamedPerCondition() {
+        String more = PHOSPHATE.replace("\"disodium hydrogen phosphate dihydrate\", \"amount\": \"10 mmol/L\"",
+                "\"disodium hydrogen phosphate dihydrate\", \"amount\": \"30 mmol/L\"");
+        assertFalse(more.equals(PHOSPHATE), "the change did not apply");
+        RevisionDiff d = RevisionDiff.compare(doc("A", PHOSPHATE), doc("B", more));
+        RevisionDiff.SpeciesChange hpo4 = d.species().stream().filter(x -> x.species().equals("HPO4-2")).findFirst()
+                .orElseThrow(() -> new AssertionError(d.species().toString()));
+        assertEquals("use", hpo4.where());
+        assertEquals(0.50, hpo4.before(), 0.02);
+        assertEquals(0.75, hpo4.after(), 0.02);
+        assertTrue(d.species().stream().anyMatch(x -> x.species().equals("H2PO4-") && x.after() < x.before() - 0.2),
+                d.species()::toString);
+        String text = new DiffRenderer().text(d);
+        assertTrue(text.contains("species that moved") && text.contains("HPO4-2"), text);
+        assertTrue(new DiffRenderer().json(d, 0).contains("\"species\" : \"HPO4-2\""), () -> new DiffRenderer().json(d, 0));
+
+        String little = PHOSPHATE.replace("\"disodium hydrogen phosphate dihydrate\", \"amount\": \"10 mmol/L\"",
+                "\"disodium hydrogen phosphate dihydrate\", \"amount\": \"10.2 mmol/L\"");
+        assertEquals(java.util.List.of(), RevisionDiff.compare(doc("A", PHOSPHATE), doc("B", little)).species());
     }
 
     @Test

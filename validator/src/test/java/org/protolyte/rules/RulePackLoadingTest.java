@@ -242,6 +242,18 @@ class RulePackLoadingTest {
         assertEquals(8, p.location().orElseThrow().line(), p::toString);
     }
 
+    /** A range with its ends swapped judges nothing as written: refused at load, not left to each check to read. */
+    @Test
+    void aRangeWithMinAboveMaxIsRefusedAtItsParameters() {
+        DocumentException e = refused(pack("site", """
+                    { "id": "site-osmolality", "check": "osmolality-range", "severity": "error",
+                      "parameters": { "min": 2000, "max": 1000 },
+                      "summary": "Osmolality within range.", "explanation": "Tonicity matters.",
+                      "references": ["common practice"] }"""));
+        Problem p = problemAt(e, "/rules/0/parameters");
+        assertTrue(p.message().contains("min 2000") && p.message().contains("max 1000"), p::toString);
+    }
+
     @Test
     void parameterOfTheWrongTypeIsRefusedAtTheParameter() {
         DocumentException e = refused(pack("site", """

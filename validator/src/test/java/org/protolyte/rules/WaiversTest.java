@@ -9,6 +9,8 @@ import java.time.LocalDate;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.protolyte.Protolyte;
 import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
@@ -166,5 +168,28 @@ class WaiversTest {
         DocumentReport r = check("", OWN_WAIVER, new Checker(book, List.of("lab-site"), List.of()));
         assertEquals(Status.PASS, r.status());
         assertTrue(r.findings().stream().anyMatch(f -> f.waivedBy().map(Waiver::authorGranted).orElse(false)));
+    }
+
+    /** ISO 8601 has no month 13 and no 30 February; a waiver dated so is refused where it is read, never applied. */
+    @ParameterizedTest
+    @ValueSource(strings = {"2026-13-45", "2026-02-30"})
+    void aWaiverFileWithAnImpossibleDateIsRefusedAtItsPlace(String date) {
+        DocumentException e = assertThrows(DocumentException.class, () -> WaiverFile.read(SCHEMAS, "w.json",
+                waiverFile("C", "2027-06-01", "").replace("2026-11-01", date).getBytes(StandardCharsets.UTF_8)));
+        assertEquals("/waivers/0/approved", e.problems().get(0).pointer(), e.problems()::toString);
+        assertTrue(e.problems().get(0).message().contains(date), e.problems()::toString);
+    }
+
+    /** A document's own waiver is read with the document: an impossible one is INVALID whatever the packs allow. */
+    @ParameterizedTest
+    @ValueSource(strings = {"\"approved\": \"2026-13-45\"", "\"approved\": \"2026-02-30\"",
+        "\"expires\": \"2026-10-01\""})
+    void aDocumentWaiverWithAnImpossibleDateIsInvalidAtItsPlace(String field) {
+        String name = field.substring(1, field.indexOf('"', 1));
+        String waiver = OWN_WAIVER.replaceAll("\"" + name + "\": \"[0-9-]+\"", java.util.regex.Matcher.quoteReplacement(field));
+        assertTrue(!waiver.equals(OWN_WAIVER), "the change did not apply");
+        DocumentReport r = check("", waiver, Checker.byIntendedUse(RuleBook.shipped(SCHEMAS, CheckKinds.load())));
+        assertEquals(Status.INVALID, r.status(), () -> r.findings().toString());
+        assertEquals("/waivers/0/" + name, r.findings().get(0).pointer().orElseThrow(), () -> r.findings().toString());
     }
 }
