@@ -91,13 +91,16 @@ public final class JsonReader {
         if (n >= 4 && b[0] == 0 && b[1] == 0 && (b[2] == 0 ? b[3] != 0 : (b[2] & 0xff) == 0xfe && (b[3] & 0xff) == 0xff)) {
             return Optional.of("UTF-32 (big-endian)");
         }
-        if (n >= 4 && b[1] == 0 && b[2] == 0 && b[3] == 0 && (b[0] != 0 || n == 4)) {
+        if (n >= 4 && b[2] == 0 && b[3] == 0 && (b[0] != 0 && b[1] == 0 || (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe)) {
             return Optional.of("UTF-32 (little-endian)");
         }
-        if (n >= 2 && ((b[0] & 0xff) == 0xfe && (b[1] & 0xff) == 0xff || b[0] == 0 && b[1] != 0)) {
+        // two ASCII characters in 16-bit units: 00 xx 00 yy or xx 00 yy 00 (one where the file is that short)
+        boolean bigEndian = n >= 2 && b[0] == 0 && b[1] != 0 && (n < 4 || b[2] == 0 && b[3] != 0);
+        boolean littleEndian = n >= 2 && b[0] != 0 && b[1] == 0 && (n < 4 || b[2] != 0 && b[3] == 0);
+        if (n >= 2 && (b[0] & 0xff) == 0xfe && (b[1] & 0xff) == 0xff || bigEndian) {
             return Optional.of("UTF-16 (big-endian)");
         }
-        if (n >= 2 && ((b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe || b[0] != 0 && b[1] == 0)) {
+        if (n >= 2 && (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe || littleEndian) {
             return Optional.of("UTF-16 (little-endian)");
         }
         return Optional.empty();

@@ -120,6 +120,13 @@ class JsonReaderBadInputTest {
     }
 
     @Test
+    void aNulBeforeUtf8TextIsNotCalledUtf16() {
+        byte[] bytes = "\u0000\n  {\"a\": 1}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        DocumentException e = assertThrows(DocumentException.class, () -> reader.read("t.json", bytes));
+        assertFalse(e.problems().get(0).message().contains("UTF-16"), e.problems()::toString);
+    }
+
+    @Test
     void utf8IsRead() {
         assertDoesNotThrow(() -> reader.read("t.json", "{\"title\": \"µ °C\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
     }
