@@ -186,6 +186,8 @@ public final class BatchRecordReader {
     }
 
     private static BatchRecord.Addition addition(SourceDocument doc, JsonNode n, String p, List<Problem> problems) {
+        FormulationReader.controlCharacter(n.get("substance").asString())
+                .ifPresent(why -> problems.add(doc.problem(p + "/substance", why)));
         Quantity amount = quantity(doc, n.get("amount"), p + "/amount", problems, Dimension.MASS, Dimension.VOLUME,
                 Dimension.AMOUNT);
         OptionalDouble molarity = OptionalDouble.empty();

@@ -19,6 +19,7 @@ import org.protolyte.report.SarifRenderer;
 import org.protolyte.report.TextRenderer;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.Severity;
+import org.protolyte.report.Printable;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -125,8 +126,8 @@ public final class CheckCommand implements Callable<Integer> {
         try {
             return target.get().write(body);
         } catch (IOException | UncheckedIOException e) {
-            err.println("protolyte: cannot write the report to " + output + ": "
-                    + (e instanceof UncheckedIOException u ? u.getCause().getMessage() : e.getMessage()));
+            err.println("protolyte: cannot write the report to " + Printable.text(output + ": "
+                    + (e instanceof UncheckedIOException u ? u.getCause().getMessage() : e.getMessage())));
             return 2;
         }
     }

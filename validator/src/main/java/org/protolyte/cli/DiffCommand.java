@@ -11,6 +11,7 @@ import org.protolyte.report.DocumentReport;
 import org.protolyte.report.RevisionDiff;
 import org.protolyte.report.Status;
 import org.protolyte.rules.Severity;
+import org.protolyte.report.Printable;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -53,7 +54,7 @@ public final class DiffCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Severity threshold = failOn;
         if (!format.equals("text") && !format.equals("json")) {
-            err.println("protolyte: --format takes text or json, not '" + format + "'");
+            err.println("protolyte: --format takes text or json, not '" + Printable.text(format) + "'");
             return 2;
         }
         Protolyte protolyte;
@@ -66,15 +67,15 @@ public final class DiffCommand implements Callable<Integer> {
         DocumentReport now = protolyte.check(after);
         if (old.batch().isPresent() || now.batch().isPresent()) {
             DocumentReport batch = old.batch().isPresent() ? old : now;
-            err.println("protolyte: " + (batch == old ? before : after) + " is batch record "
-                    + batch.id().orElse("(no id)") + ", not a revision of a formulation; diff compares formulations");
+            err.println("protolyte: " + Printable.text((batch == old ? before : after) + " is batch record "
+                    + batch.id().orElse("(no id)") + ", not a revision of a formulation; diff compares formulations"));
             return 2;
         }
         if (old.status() != Status.INVALID && now.status() != Status.INVALID && !old.id().equals(now.id())
                 && !allowDifferentId) {
-            err.println("protolyte: " + before + " is " + old.id().orElse("(no id)") + " and " + after + " is "
+            err.println("protolyte: " + Printable.text(before + " is " + old.id().orElse("(no id)") + " and " + after + " is "
                     + now.id().orElse("(no id)") + ": not two revisions of one document (--allow-different-id "
-                    + "compares them anyway)");
+                    + "compares them anyway)"));
             return 2;
         }
         RevisionDiff diff = RevisionDiff.compare(old, now);
@@ -85,11 +86,11 @@ public final class DiffCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         out.print(format.equals("json") ? new DiffRenderer().json(diff, exit) : new DiffRenderer().text(diff));
         if (exit == 2) {
-            err.println("protolyte: " + (old.status() == Status.INVALID ? before : after)
-                    + " is not a valid formulation document; 'protolyte check' names its problems");
+            err.println("protolyte: " + Printable.text((old.status() == Status.INVALID ? before : after)
+                    + " is not a valid formulation document; 'protolyte check' names its problems"));
         } else if (exit == 3) {
-            err.println("protolyte: " + after + " is indeterminate: it cannot pass ('protolyte check' gives the "
-                    + "diagnostics)");
+            err.println("protolyte: " + Printable.text(after + " is indeterminate: it cannot pass ('protolyte check' gives the "
+                    + "diagnostics)"));
         }
         out.flush();
         return exit;

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.protolyte.document.Suggestions;
+import org.protolyte.report.Printable;
 import org.protolyte.rules.Rule;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.RulePack;
@@ -58,8 +59,8 @@ public final class ExplainCommand implements Callable<Integer> {
             }
         }
         List<String> near = Suggestions.nearest(ruleId, rules.stream().map(Rule::id).toList(), 3);
-        spec.commandLine().getErr().println("protolyte: no rule '" + ruleId + "'"
-                + (near.isEmpty() ? "; 'protolyte rules' lists them" : "; did you mean " + String.join(", ", near) + "?"));
+        spec.commandLine().getErr().println("protolyte: no rule '" + Printable.text(ruleId) + "'"
+                + (near.isEmpty() ? "; 'protolyte rules' lists them" : "; did you mean " + Printable.text(String.join(", ", near)) + "?"));
         return 2;
     }
 }

@@ -1,5 +1,7 @@
 package org.protolyte.cli;
 
+import org.protolyte.report.Printable;
+
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -22,12 +24,12 @@ public final class Main implements Runnable {
     static int run(String... args) {
         CommandLine cl = new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> {
-            cmd.getErr().println("protolyte: internal fault: " + ex);
+            cmd.getErr().println("protolyte: internal fault: " + Printable.text(ex.toString()));
             return 4;
         });
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
-            c.getErr().println("protolyte: " + ex.getMessage());
+            c.getErr().println("protolyte: " + Printable.text(ex.getMessage()));
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help'.");
             return 2;
         });

@@ -17,6 +17,8 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.UUID;
 
+import org.protolyte.report.Printable;
+
 /**
  * A report written to a file: checked before the run (a regular file or nothing, never one of the run's inputs, in a
  * folder that exists and may be written), then written to a temporary file beside it and moved into place, so that
@@ -128,7 +130,8 @@ final class ReportFile {
         try {
             Files.deleteIfExists(tmp);
         } catch (IOException e) {
-            System.err.println("protolyte: could not remove the temporary file " + tmp + ": " + e.getMessage());
+            System.err.println("protolyte: could not remove the temporary file "
+                    + Printable.text(tmp + ": " + e.getMessage()));
         }
     }
 

@@ -19,6 +19,7 @@ import org.protolyte.document.JsonReader;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.report.RobustnessRenderer;
+import org.protolyte.report.Printable;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -82,7 +83,7 @@ public final class RobustnessCommand implements Callable<Integer> {
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
         } catch (DocumentException e) {
-            e.problems().forEach(p -> err.println("protolyte: " + file + ": " + p));
+            e.problems().forEach(p -> err.println("protolyte: " + Printable.text(file + ": " + p)));
             return 2;
         }
         boolean terminal = System.console() != null;
@@ -110,7 +111,7 @@ public final class RobustnessCommand implements Callable<Integer> {
                 return 0;
             });
         } catch (IOException e) {
-            err.println("protolyte: cannot write the report to " + output + ": " + e.getMessage());
+            err.println("protolyte: cannot write the report to " + Printable.text(output + ": " + e.getMessage()));
             return 2;
         }
     }

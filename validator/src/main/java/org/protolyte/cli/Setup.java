@@ -19,6 +19,7 @@ import org.protolyte.rules.WaiverFile;
 import org.protolyte.rules.Waivers;
 import org.protolyte.substance.LibraryLoader;
 import org.protolyte.substance.SubstanceLibrary;
+import org.protolyte.report.Printable;
 
 import picocli.CommandLine.Option;
 
@@ -150,7 +151,7 @@ final class Setup {
     }
 
     static int usage(PrintWriter err, UsageException e) {
-        err.println("protolyte: " + e.getMessage());
+        err.println("protolyte: " + Printable.text(e.getMessage()));
         return 2;
     }
 }

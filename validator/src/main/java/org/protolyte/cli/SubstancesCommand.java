@@ -10,6 +10,7 @@ import java.util.concurrent.Callable;
 
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.DissociationStep;
+import org.protolyte.report.Printable;
 import org.protolyte.substance.Composition;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
@@ -48,47 +49,52 @@ public final class SubstancesCommand implements Callable<Integer> {
                 || SubstanceLibrary.normalise(s.name()).contains(key)
                 || s.synonyms().stream().anyMatch(x -> SubstanceLibrary.normalise(x).contains(key))).toList();
         if (hits.isEmpty()) {
-            spec.commandLine().getErr().println("protolyte: no substance matches '" + query + "'");
+            spec.commandLine().getErr().println("protolyte: no substance matches '" + Printable.text(query) + "'");
             return 2;
         }
         for (Substance s : hits) {
-            out.printf(Locale.ROOT, "%s%s%n", s.name(), s.origin().equals("shipped library") ? "" : "  [" + s.origin() + "]");
-            s.formula().ifPresent(f -> out.printf(Locale.ROOT, "  formula %s, %.3f g/mol%s%n", f, s.molarMass().orElse(Double.NaN),
+            line(out, "%s%s", s.name(), s.origin().equals("shipped library") ? "" : "  [" + s.origin() + "]");
+            s.formula().ifPresent(f -> line(out, "  formula %s, %.3f g/mol%s", f, s.molarMass().orElse(Double.NaN),
                     f.hydrationWater() > 0 ? ", " + plain(f.hydrationWater()) + " H2O of hydration" : ""));
             if (!s.synonyms().isEmpty()) {
-                out.println("  also: " + String.join("; ", s.synonyms()));
+                line(out, "%s", "  also: " + String.join("; ", s.synonyms()));
             }
             Composition c = s.composition();
-            c.ions().forEach((ion, n) -> out.printf(Locale.ROOT, "  ion %s × %s%n", ion, n));
-            c.solutes().forEach((solute, n) -> out.printf(Locale.ROOT, "  neutral solute %s × %s%n", solute, n));
+            c.ions().forEach((ion, n) -> line(out, "  ion %s × %s", ion, n));
+            c.solutes().forEach((solute, n) -> line(out, "  neutral solute %s × %s", solute, n));
             for (Composition.SystemPart part : c.systems()) {
-                out.printf(Locale.ROOT, "  %s × %s as %s%n", part.system(), part.count(), part.form());
+                line(out, "  %s × %s as %s", part.system(), part.count(), part.form());
                 AcidBaseSystem system = library.system(part.system()).orElseThrow();
                 for (int k = 0; k < system.steps().size(); k++) {
                     DissociationStep st = system.steps().get(k);
-                    out.printf(Locale.ROOT, "    %s ⇌ %s: pKa %s ± %s, ΔH° %s kJ/mol, ΔCp° %s J/(K·mol), %s%n",
+                    line(out, "    %s ⇌ %s: pKa %s ± %s, ΔH° %s kJ/mol, ΔCp° %s J/(K·mol), %s",
                             system.forms().get(k).name(), system.forms().get(k + 1).name(), asWritten(st.pKa25()),
                             asWritten(st.uncertainty()), asWritten(st.deltaH() / 1000), asWritten(st.deltaCp()),
                             st.validity());
                     List<String> sources = library.stepSources(part.system());
                     if (k < sources.size()) {
-                        out.println("      source: " + sources.get(k));
+                        line(out, "%s", "      source: " + sources.get(k));
                     }
                 }
             }
-            s.handling().hazards().forEach(h -> out.printf(Locale.ROOT, "  hazard %s, %s (%s)%n", h.classification(),
+            s.handling().hazards().forEach(h -> line(out, "  hazard %s, %s (%s)", h.classification(),
                     h.statement(), h.source()));
-            s.handling().lightSensitivity().ifPresent(l -> out.println("  light: " + l.text() + " (" + l.source() + ")"));
-            s.handling().solubility().ifPresent(sol -> out.printf(Locale.ROOT, "  solubility in water: %s at %s °C (%s)%n",
+            s.handling().lightSensitivity().ifPresent(l -> line(out, "%s", "  light: " + l.text() + " (" + l.source() + ")"));
+            s.handling().solubility().ifPresent(sol -> line(out, "  solubility in water: %s at %s °C (%s)",
                     sol.gramsPerLitre().isPresent()
                             ? plain(sol.gramsPerLitre().getAsDouble()) + " g/L" + sol.term().map(t -> ", " + t).orElse("")
                             : sol.term().orElseThrow(),
                     plain(sol.celsius()), sol.source()));
-            s.handling().hygroscopy().ifPresent(h -> out.println("  " + h.behaviour()
+            s.handling().hygroscopy().ifPresent(h -> line(out, "%s", "  " + h.behaviour()
                     + (h.text().isEmpty() ? "" : ": " + h.text()) + " (" + h.source() + ")"));
         }
         out.flush();
         return 0;
+    }
+
+    /** One line of the listing: the library's text escaped, so that no entry can forge or repaint a line. */
+    private static void line(PrintWriter out, String format, Object... args) {
+        out.println(Printable.text(String.format(Locale.ROOT, format, args)));
     }
 
     /** A library constant as its source gives it (no rounding: a reviewer compares it with the table). */

@@ -48,6 +48,21 @@ public final class FormulationReader {
         return new Parse(doc).formulation();
     }
 
+    /**
+     * Why a name is refused: a control character (a NUL, a newline, an escape) would be dropped or folded when the
+     * name is matched, so another text than the one written would be looked up. Empty when the name is printable.
+     */
+    public static Optional<String> controlCharacter(String name) {
+        for (int i = 0; i < name.length(); i++) {
+            char c = name.charAt(i);
+            if (Character.isISOControl(c)) {
+                return Optional.of(String.format(java.util.Locale.ROOT,
+                        "a substance name must not hold a control character (U+%04X at character %d)", (int) c, i + 1));
+            }
+        }
+        return Optional.empty();
+    }
+
     /** One document's parse, collecting problems. */
     private static final class Parse {
         private final SourceDocument doc;
@@ -156,6 +171,7 @@ public final class FormulationReader {
         private Formulation.Line line(JsonNode n, int i) {
             String p = "/components/" + i;
             String substance = n.get("substance").asString();
+            controlCharacter(substance).ifPresent(why -> problems.add(doc.problem(p + "/substance", why)));
             boolean hasAmount = n.has("amount");
             boolean hasAdjust = n.has("adjustTo");
             if (hasAmount == hasAdjust) {

@@ -56,6 +56,10 @@ public final class JsonReader {
                     "file is larger than " + (maxBytes >= 1024 * 1024 ? maxBytes / (1024 * 1024) + " MiB"
                             : maxBytes / 1024 + " KiB")));
         }
+        notUtf8(content).ifPresent(encoding -> {
+            throw new DocumentException(new Problem("", Optional.of(new Location(1, 1)), "the file is " + encoding
+                    + ", not UTF-8: JSON exchanged between systems is UTF-8 (RFC 8259, section 8.1); save it as UTF-8"));
+        });
         Map<String, Location> locations = new HashMap<>();
         JsonNode root;
         try (JsonParser p = mapper.createParser(content)) {
@@ -73,9 +77,33 @@ public final class JsonReader {
             }
             root = mapper.readTree(content);
         } catch (JacksonException e) {
-            throw new DocumentException(new Problem("", locationOf(e), "not valid JSON: " + e.getOriginalMessage()));
+            throw new DocumentException(new Problem("", locationOf(e), invalid(e.getOriginalMessage())));
         }
         return new SourceDocument(source, root, locations);
+    }
+
+    /**
+     * The encoding of a file that is plainly UTF-16 or UTF-32, by its byte-order mark or by the zero bytes that
+     * ASCII text has in those encodings (the detection of RFC 4627, section 3); the parser would accept it.
+     */
+    static Optional<String> notUtf8(byte[] b) {
+        int n = b.length;
+        if (n >= 4 && b[0] == 0 && b[1] == 0 && (b[2] == 0 ? b[3] != 0 : (b[2] & 0xff) == 0xfe && (b[3] & 0xff) == 0xff)) {
+            return Optional.of("UTF-32 (big-endian)");
+        }
+        if (n >= 4 && b[2] == 0 && b[3] == 0 && (b[0] != 0 && b[1] == 0 || (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe)) {
+            return Optional.of("UTF-32 (little-endian)");
+        }
+        // two ASCII characters in 16-bit units: 00 xx 00 yy or xx 00 yy 00 (one where the file is that short)
+        boolean bigEndian = n >= 2 && b[0] == 0 && b[1] != 0 && (n < 4 || b[2] == 0 && b[3] != 0);
+        boolean littleEndian = n >= 2 && b[0] != 0 && b[1] == 0 && (n < 4 || b[2] != 0 && b[3] == 0);
+        if (n >= 2 && (b[0] & 0xff) == 0xfe && (b[1] & 0xff) == 0xff || bigEndian) {
+            return Optional.of("UTF-16 (big-endian)");
+        }
+        if (n >= 2 && (b[0] & 0xff) == 0xff && (b[1] & 0xff) == 0xfe || littleEndian) {
+            return Optional.of("UTF-16 (little-endian)");
+        }
+        return Optional.empty();
     }
 
     /** One pass over the tokens: where each value begins; numbers must be finite; one root value only. */
@@ -128,16 +156,39 @@ public final class JsonReader {
         return "refused: " + m;
     }
 
-    /** NaN and Infinity are not JSON; Jackson's own message would name one of its settings instead. */
-    private static String invalid(String message) {
+    private static final java.util.regex.Pattern PARSER_SETTING = java.util.regex.Pattern.compile("ALLOW_[A-Z_]+");
+
+    /**
+     * A syntax error in words. Where JSON forbids what some parsers allow, Jackson's own message names the parser
+     * setting that would allow it, which means nothing to the author of the document: say what is not JSON.
+     */
+    static String invalid(String message) {
         String m = message == null ? "" : message;
-        if (m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
-            int a = m.indexOf('\'');
-            int b = a < 0 ? -1 : m.indexOf('\'', a + 1);
-            String token = b > a ? m.substring(a, b + 1) : "the value";
-            return "not valid JSON: " + token + " is not a JSON number";
+        java.util.regex.Matcher setting = PARSER_SETTING.matcher(m);
+        if (!setting.find()) {
+            return "not valid JSON: " + m;
         }
-        return "not valid JSON: " + m;
+        String what = switch (setting.group()) {
+            case "ALLOW_NON_NUMERIC_NUMBERS" -> {
+                int a = m.indexOf('\'');
+                int b = a < 0 ? -1 : m.indexOf('\'', a + 1);
+                yield (b > a ? m.substring(a, b + 1) : "the value") + " is not a JSON number";
+            }
+            case "ALLOW_LEADING_PLUS_SIGN_FOR_NUMBERS" -> "a number must not start with a plus sign";
+            case "ALLOW_HEXADECIMAL_NUMBERS" -> "a hexadecimal number (0x...) is not a JSON number; write it in decimal";
+            case "ALLOW_LEADING_ZEROS_FOR_NUMBERS" -> "a number must not start with a zero followed by digits";
+            case "ALLOW_LEADING_DECIMAL_POINT_FOR_NUMBERS" -> "a number must not start with a decimal point; write 0.5";
+            case "ALLOW_TRAILING_DECIMAL_POINT_FOR_NUMBERS" -> "a decimal point must be followed by a digit";
+            case "ALLOW_SINGLE_QUOTES" -> "strings and names are written in double quotes";
+            case "ALLOW_UNQUOTED_PROPERTY_NAMES", "ALLOW_UNQUOTED_FIELD_NAMES" -> "a property name must be in double quotes";
+            case "ALLOW_JAVA_COMMENTS", "ALLOW_YAML_COMMENTS" -> "JSON has no comments";
+            case "ALLOW_UNESCAPED_CONTROL_CHARS" -> "a control character inside a string must be escaped, e.g. \\n";
+            case "ALLOW_BACKSLASH_ESCAPING_ANY_CHARACTER" -> "a backslash escape that JSON does not define";
+            case "ALLOW_TRAILING_COMMA" -> "a comma before a closing bracket or brace";
+            case "ALLOW_MISSING_VALUES" -> "a missing value between commas";
+            default -> "a character that JSON does not allow here";
+        };
+        return "not valid JSON: " + what;
     }
 
     private static Optional<Location> locationOf(JacksonException e) {

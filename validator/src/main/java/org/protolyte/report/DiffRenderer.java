@@ -17,25 +17,27 @@ public final class DiffRenderer {
         b.append("Protolyte ").append(toolVersion()).append(" — revision comparison").append(NL);
         b.append("  old: ").append(label(d.before())).append(NL);
         b.append("  new: ").append(label(d.after())).append(NL);
-        d.basis().ifPresent(x -> b.append(NL).append(x).append(NL));
+        d.basis().ifPresent(x -> b.append(NL).append(Printable.text(x)).append(NL));
         b.append(NL).append("components (mmol per L of solution or kg of water):").append(d.components().isEmpty() ? " unchanged" : "").append(NL);
         for (RevisionDiff.ComponentChange c : d.components()) {
             switch (c.kind()) {
-                case ADDED -> b.append(String.format(Locale.ROOT, "  + %s: %s (%.4g mmol)%n", c.substance(),
-                        c.now().orElse(""), c.mmolAfter()));
-                case REMOVED -> b.append(String.format(Locale.ROOT, "  - %s: %s (%.4g mmol)%n", c.substance(),
-                        c.was().orElse(""), c.mmolBefore()));
+                case ADDED -> b.append(String.format(Locale.ROOT, "  + %s: %s (%.4g mmol)%n", Printable.text(c.substance()),
+                        Printable.text(c.now().orElse("")), c.mmolAfter()));
+                case REMOVED -> b.append(String.format(Locale.ROOT, "  - %s: %s (%.4g mmol)%n", Printable.text(c.substance()),
+                        Printable.text(c.was().orElse("")), c.mmolBefore()));
                 case CHANGED -> b.append(String.format(Locale.ROOT, "  ~ %s: %s → %s (%.4g → %.4g mmol, %+.1f %%)%n",
-                        c.substance(), c.was().orElse(""), c.now().orElse(""), c.mmolBefore(), c.mmolAfter(),
+                        Printable.text(c.substance()), Printable.text(c.was().orElse("")),
+                        Printable.text(c.now().orElse("")), c.mmolBefore(), c.mmolAfter(),
                         (c.mmolAfter() / c.mmolBefore() - 1) * 100));
                 default -> throw new IllegalStateException();
             }
         }
         b.append(NL).append("predicted values:").append(d.values().isEmpty() ? " unchanged" : "").append(NL);
         for (RevisionDiff.ValueChange v : d.values()) {
-            b.append(String.format(Locale.ROOT, "  %-24s %-16s %10s → %-10s (%s)%s%n", v.where(), v.quantity(),
+            b.append(String.format(Locale.ROOT, "  %-24s %-16s %10s → %-10s (%s)%s%n", Printable.text(v.where()),
+                    Printable.text(v.quantity()),
                     num(v.before()), num(v.after()), Double.isNaN(v.delta()) ? "—" : String.format(Locale.ROOT, "%+.3g",
-                            v.delta()), v.unit().isEmpty() ? "" : " " + v.unit()));
+                            v.delta()), v.unit().isEmpty() ? "" : " " + Printable.text(v.unit())));
         }
         b.append(NL).append(String.format(Locale.ROOT, "species that moved (share of their component, more than %.0f "
                 + "percentage points):", RevisionDiff.SPECIES_MOVED * 100)).append(d.species().isEmpty() ? " none" : "")
@@ -48,7 +50,8 @@ public final class DiffRenderer {
         for (RevisionDiff.FindingChange f : d.findings()) {
             String sev = f.before().map(s -> s.code()).orElse("—") + " → " + f.after().map(s -> s.code()).orElse("cleared");
             b.append(String.format(Locale.ROOT, "  %s %s [%s] %s%n      %s%n", f.kind() == RevisionDiff.Kind.ADDED ? "+"
-                    : f.kind() == RevisionDiff.Kind.REMOVED ? "-" : "~", f.rule(), f.subject(), sev, f.message()));
+                    : f.kind() == RevisionDiff.Kind.REMOVED ? "-" : "~", Printable.text(f.rule()), Printable.text(f.subject()), sev,
+                    Printable.text(f.message())));
         }
         b.append(NL).append(RunReport.CAUTION).append(NL);
         return b.toString();
@@ -117,7 +120,7 @@ public final class DiffRenderer {
 
     private static String label(DocumentReport r) {
         String rev = r.analysis().flatMap(a -> a.recipe().formulation().revision()).map(x -> " revision " + x).orElse("");
-        return r.source() + r.id().map(x -> " [" + x + rev + "]").orElse("") + " " + r.status().code();
+        return Printable.text(r.source() + r.id().map(x -> " [" + x + rev + "]").orElse("")) + " " + r.status().code();
     }
 
     private static String toolVersion() {

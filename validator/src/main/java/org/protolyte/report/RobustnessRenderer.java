@@ -18,8 +18,8 @@ public final class RobustnessRenderer {
     public String text(String source, Recipe recipe, Robustness.Result r) {
         StringBuilder b = new StringBuilder();
         Robustness.Settings s = r.settings();
-        b.append("Protolyte ").append(org.protolyte.Protolyte.version()).append(" — robustness of ").append(source)
-                .append(" [").append(recipe.formulation().id()).append("]").append(NL);
+        b.append("Protolyte ").append(org.protolyte.Protolyte.version()).append(" — robustness of ").append(Printable.text(source))
+                .append(" [").append(Printable.text(recipe.formulation().id())).append("]").append(NL);
         b.append(String.format(Locale.ROOT, "  %d batches simulated (%d solved), seed %d; weighing ±%.3g %% uniform by "
                         + "default, meter reading σ %.3g pH%n", s.samples(), r.samplesSolved(), s.seed(),
                 s.defaultTolerance() * 100, s.meterStandardUncertainty()));
@@ -32,7 +32,7 @@ public final class RobustnessRenderer {
                 "pH batch mean [2.5–97.5 %]", "β mmol/L/pH [2.5–97.5]", "mOsm/kg [2.5–97.5]", "P(outside)",
                 "systematic pH [2.5–97.5]", "worst corners"));
         for (Robustness.ConditionRobustness c : r.conditions()) {
-            b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-18s %-10s %-22s %.3f … %.3f%n", c.condition(),
+            b.append(String.format(Locale.ROOT, "  %-12s %-26s %-22s %-18s %-10s %-22s %.3f … %.3f%n", Printable.text(c.condition()),
                     String.format(Locale.ROOT, "%.3f [%.3f–%.3f]", c.pH().mean(), c.pH().p025(), c.pH().p975()),
                     String.format(Locale.ROOT, "%.3g [%.3g–%.3g]", c.bufferCapacity().mean(), c.bufferCapacity().p025(),
                             c.bufferCapacity().p975()),
@@ -49,8 +49,8 @@ public final class RobustnessRenderer {
             StringBuilder line = new StringBuilder();
             c.sensitivities().entrySet().stream().sorted((x, y) -> Double.compare(Math.abs(y.getValue()), Math.abs(x.getValue())))
                     .limit(4).forEach(e -> line.append(line.length() == 0 ? "" : ", ")
-                            .append(String.format(Locale.ROOT, "%s %+.4f", e.getKey(), e.getValue())));
-            b.append("    ").append(c.condition()).append(": ").append(line.length() == 0 ? "—" : line).append(NL);
+                            .append(String.format(Locale.ROOT, "%s %+.4f", Printable.text(e.getKey()), e.getValue())));
+            b.append("    ").append(Printable.text(c.condition())).append(": ").append(line.length() == 0 ? "—" : line).append(NL);
         }
         b.append("  Batch-to-batch figures come from the tolerances; the systematic column is the uncertainty of the "
                 + "published constants, the same for every batch, and is not in P(outside).").append(NL);

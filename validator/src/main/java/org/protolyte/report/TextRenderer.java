@@ -53,7 +53,7 @@ public final class TextRenderer {
     public String footer(List<Skipped> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
         StringBuilder b = new StringBuilder();
         for (Skipped skipped : skippedFiles) {
-            b.append(NL).append("skipped ").append(skipped.source()).append(": ").append(skipped.reason());
+            b.append(NL).append("skipped ").append(p(skipped.source())).append(": ").append(p(skipped.reason()));
         }
         if (!skippedFiles.isEmpty()) {
             b.append(NL);
@@ -69,33 +69,33 @@ public final class TextRenderer {
     }
 
     private void document(StringBuilder b, DocumentReport r) {
-        b.append("== ").append(r.source());
-        r.id().ifPresent(id -> b.append("  [").append(id).append("]"));
+        b.append("== ").append(p(r.source()));
+        r.id().ifPresent(id -> b.append("  [").append(p(id)).append("]"));
         b.append("  ").append(r.status().code().toUpperCase(Locale.ROOT)).append(NL);
         r.batch().ifPresent(x -> batch(b, x));
         r.analysis().ifPresent(a -> analysis(b, a));
         if (!r.findings().isEmpty()) {
             b.append("  findings:").append(NL);
             for (Finding f : r.findings()) {
-                b.append("    ").append(f.severity().code()).append(" ").append(f.rule());
-                f.pointer().ifPresent(p -> b.append("  ").append(p.isEmpty() ? "(document)" : p));
+                b.append("    ").append(f.severity().code()).append(" ").append(p(f.rule()));
+                f.pointer().ifPresent(x -> b.append("  ").append(x.isEmpty() ? "(document)" : p(x)));
                 f.location().ifPresent(l -> b.append(" (line ").append(l.line()).append(", column ")
                         .append(l.column()).append(")"));
-                b.append(NL).append("      ").append(f.message()).append(NL);
-                f.waivedBy().ifPresent(w -> b.append("      WAIVED by ").append(w.approver())
+                b.append(NL).append("      ").append(p(f.message())).append(NL);
+                f.waivedBy().ifPresent(w -> b.append("      WAIVED by ").append(p(w.approver()))
                         .append(w.authorGranted() ? " (granted in the document by its author)" : "")
-                        .append(" until ").append(w.expires()).append(": ").append(w.reason()).append(NL));
+                        .append(" until ").append(w.expires()).append(": ").append(p(w.reason())).append(NL));
                 f.definition().filter(d -> f.severity() != org.protolyte.rules.Severity.NOTE)
                         .flatMap(org.protolyte.rules.Rule::remedy)
-                        .ifPresent(rem -> b.append("      what to do: ").append(rem).append(NL));
+                        .ifPresent(rem -> b.append("      what to do: ").append(p(rem)).append(NL));
             }
         }
         if (!r.diagnostics().isEmpty()) {
             b.append("  diagnostics:").append(NL);
             for (Diagnostic d : r.diagnostics()) {
-                b.append("    ").append(d.severity().name().toLowerCase(Locale.ROOT)).append(" ").append(d.code());
-                d.condition().ifPresent(c -> b.append(" [").append(c).append("]"));
-                b.append(NL).append("      ").append(d.message()).append(NL);
+                b.append("    ").append(d.severity().name().toLowerCase(Locale.ROOT)).append(" ").append(p(d.code()));
+                d.condition().ifPresent(c -> b.append(" [").append(p(c)).append("]"));
+                b.append(NL).append("      ").append(p(d.message())).append(NL);
             }
         }
     }
@@ -103,21 +103,21 @@ public final class TextRenderer {
     /** A batch record: master and size, each addition against the master, each measurement against prediction. */
     private static void batch(StringBuilder b, BatchAnalysis x) {
         var m = x.record().master();
-        b.append(String.format(Locale.ROOT, "  batch %s of %s%s, %s × the master's basis%n", x.record().batch(), m.id(),
-                m.revision().map(r -> " revision " + r).orElse(""), Numbers.significant(x.scale(), 4).toPlainString()));
+        b.append(String.format(Locale.ROOT, "  batch %s of %s%s, %s × the master's basis%n", p(x.record().batch()), p(m.id()),
+                m.revision().map(r -> " revision " + p(r)).orElse(""), Numbers.significant(x.scale(), 4).toPlainString()));
         b.append(String.format(Locale.ROOT, "  %-5s %-44s %-14s %12s %12s %8s%n", "step", "addition", "recorded",
                 "mmol", "master mmol", "Δ"));
         for (BatchAnalysis.AdditionCheck c : x.additions()) {
             String step = c.addition().map(a -> String.valueOf(a.step())).orElse("—");
-            String name = c.used().or(() -> c.expected()).map(s -> s.name()).orElse("?")
+            String name = c.used().or(() -> c.expected()).map(s -> p(s.name())).orElse("?")
                     + switch (c.match()) {
                         case MISSING -> " (missing)";
                         case EXTRA -> " (not in the master)";
-                        case OTHER_FORM -> " (master: " + c.expected().orElseThrow().name() + ")";
+                        case OTHER_FORM -> " (master: " + p(c.expected().orElseThrow().name()) + ")";
                         case TITRANT -> " (q.s.)";
                         default -> "";
                     };
-            String recorded = c.addition().map(a -> a.amount().toString()).orElse("—");
+            String recorded = c.addition().map(a -> p(a.amount().toString())).orElse("—");
             String expected = Double.isFinite(c.expectedMoles()) ? Numbers.significant(c.expectedMoles() * 1000, 5)
                     .toPlainString() : "—";
             String dev = Double.isFinite(c.deviation()) ? String.format(Locale.ROOT, "%+.1f %%", 100 * c.deviation()) : "";
@@ -127,7 +127,7 @@ public final class TextRenderer {
         if (!x.observations().isEmpty()) {
             b.append("  measured, and predicted from the additions as recorded:").append(NL);
             for (BatchAnalysis.Observation o : x.observations()) {
-                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", o.label(), o.kind().text(o.measured()),
+                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", p(o.label()), o.kind().text(o.measured()),
                         o.kind().text(o.predicted())));
             }
         }
@@ -135,9 +135,9 @@ public final class TextRenderer {
 
     private void analysis(StringBuilder b, FormulationAnalysis a) {
         Formulation f = a.recipe().formulation();
-        f.title().ifPresent(t -> b.append("  ").append(t));
-        f.revision().ifPresent(rev -> b.append(" (revision ").append(rev).append(")"));
-        f.intendedUse().ifPresent(u -> b.append(" — ").append(u));
+        f.title().ifPresent(t -> b.append("  ").append(p(t)));
+        f.revision().ifPresent(rev -> b.append(" (revision ").append(p(rev)).append(")"));
+        f.intendedUse().ifPresent(u -> b.append(" — ").append(p(u)));
         if (f.title().isPresent() || f.revision().isPresent() || f.intendedUse().isPresent()) {
             b.append(NL);
         }
@@ -148,7 +148,7 @@ public final class TextRenderer {
             if (!t.used() || t.unreachable().isPresent()) {
                 continue;
             }
-            b.append(String.format(Locale.ROOT, "  q.s. %s: %s mmol %s", t.ingredient().substance().name(),
+            b.append(String.format(Locale.ROOT, "  q.s. %s: %s mmol %s", p(t.ingredient().substance().name()),
                     Numbers.significant(t.moles() * 1000, 4).toPlainString(), basis));
             t.stockMillilitres().ifPresent(ml -> b.append(String.format(Locale.ROOT, " = %s mL of stock",
                     Numbers.significant(ml, 4).toPlainString())));
@@ -169,14 +169,14 @@ public final class TextRenderer {
         a.working().ifPresent(w -> {
             b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s (pH change is from ionic "
                     + "strength and dilution):%n", Numbers.significant(w.dilution().factor(), 4).toPlainString(),
-                    w.dilution().diluent()));
+                    p(w.dilution().diluent())));
             conditionTable(b, w.conditions(), systems);
             solids(b, w.conditions());
         });
         for (var d : a.drifts()) {
-            String cause = d.co2Change().map(x -> ", mostly the change of " + x).orElseGet(() -> d.system()
-                    .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", x, d.dpKadT())).orElse(""));
-            b.append(String.format(Locale.ROOT, "  drift %s → %s: %+.2f pH%s%n", d.from(), d.to(), d.change(), cause));
+            String cause = d.co2Change().map(x -> ", mostly the change of " + p(x)).orElseGet(() -> d.system()
+                    .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", p(x), d.dpKadT())).orElse(""));
+            b.append(String.format(Locale.ROOT, "  drift %s → %s: %+.2f pH%s%n", p(d.from()), p(d.to()), d.change(), cause));
         }
         for (ConditionResult c : a.conditions()) {
             List<String> extra = new ArrayList<>();
@@ -190,7 +190,7 @@ public final class TextRenderer {
                         c.co2ForTarget().getAsDouble() / 1000));
             }
             if (!extra.isEmpty()) {
-                b.append("  ").append(c.condition().name()).append(": ").append(String.join("; ", extra)).append(NL);
+                b.append("  ").append(p(c.condition().name())).append(": ").append(String.join("; ", extra)).append(NL);
             }
         }
         a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
@@ -204,7 +204,12 @@ public final class TextRenderer {
             b.append("  ± is the standard uncertainty from the published pKa and pKw values, not batch-to-batch "
                     + "variation; where a titrant is dosed to a pH, the meter removes it at that condition").append(NL);
         }
-        b.append("  assumed: ").append(String.join("; ", a.assumptions())).append(NL);
+        b.append("  assumed: ").append(p(String.join("; ", a.assumptions()))).append(NL);
+    }
+
+    /** Text from the document, a library or a file name, escaped for the terminal. */
+    private static String p(String s) {
+        return Printable.text(s);
     }
 
     private static String load(java.util.OptionalDouble mmol, String what) {
@@ -220,8 +225,8 @@ public final class TextRenderer {
         Map<String, List<String>> bySystem = new LinkedHashMap<>();
         for (SpeciesAmount sp : s.species()) {
             if (systems.isSystem(sp.component()) && sp.fractionOfComponent() >= 0.05) {
-                bySystem.computeIfAbsent(systems.of(sp.component()), k -> new ArrayList<>())
-                        .add(String.format(Locale.ROOT, "%s %.0f %%", sp.species().name(),
+                bySystem.computeIfAbsent(p(systems.of(sp.component())), k -> new ArrayList<>())
+                        .add(String.format(Locale.ROOT, "%s %.0f %%", p(sp.species().name()),
                                 sp.fractionOfComponent() * 100));
             }
         }
@@ -233,7 +238,7 @@ public final class TextRenderer {
         for (SpeciesAmount sp : s.species()) {      // a metal or polyol that complexes bind: its free share
             Component c = sp.component();
             if (!systems.isSystem(c) && bound.contains(c) && !sp.species().isComplex()) {
-                parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", c.name(), 100 * sp.molality() / totals.get(c)));
+                parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", p(c.name()), 100 * sp.molality() / totals.get(c)));
             }
         }
         return String.join("; ", parts);
@@ -244,8 +249,8 @@ public final class TextRenderer {
         Map<String, List<String>> rows = new LinkedHashMap<>();
         for (ConditionResult c : conditions) {
             for (SolidPhase.Saturation x : c.saturation()) {
-                rows.computeIfAbsent(x.phase().name() + " (" + x.phase().formula() + ")", k -> new ArrayList<>())
-                        .add(String.format(Locale.ROOT, "%s %+.2f%s", c.condition().name(), x.index(),
+                rows.computeIfAbsent(p(x.phase().name() + " (" + x.phase().formula() + ")"), k -> new ArrayList<>())
+                        .add(String.format(Locale.ROOT, "%s %+.2f%s", p(c.condition().name()), x.index(),
                                 x.inRange() ? "" : "†"));
             }
         }
@@ -266,7 +271,7 @@ public final class TextRenderer {
         b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s %9s%n", "condition", "T (°C)", "pH",
                 "β (mmol/L/pH)", "I (mol/kg)", "mOsm/kg"));
         for (ConditionResult c : conditions) {
-            String name = c.condition().name() + (c.condition().implicit() ? "*" : "");
+            String name = p(c.condition().name()) + (c.condition().implicit() ? "*" : "");
             if (c.determinate()) {
                 EquilibriumState s = c.state().orElseThrow();
                 String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))

@@ -72,6 +72,14 @@ class FormulationBadInputTest {
     }
 
     @Test
+    void aControlCharacterInASubstanceNameIsRefusedNotDropped() {
+        // JSON text "\u0000": the NUL reaches the name; matching would fold it away and find tromethamine
+        Problem p = problemAt(oneComponent("{\"substance\": \"trometh\\u0000amine\", \"amount\": \"6 g\"}"),
+                "/components/0/substance");
+        assertTrue(p.message().contains("control character") && p.message().contains("U+0000"), p.message());
+    }
+
+    @Test
     void zeroAmountIsRefusedWithItsPointer() {
         Problem p = problemAt(oneComponent("{\"substance\": \"sodium chloride\", \"amount\": \"0 g\"}"),
                 "/components/0/amount");

@@ -108,4 +108,36 @@ class JsonReaderBadInputTest {
         assertFalse(p.message().contains("ALLOW_") || p.message().contains("enable"), p.message());
         assertEquals(2, p.location().orElseThrow().line());
     }
+
+    // RFC 8259, section 8.1: JSON exchanged between systems is UTF-8; the parser alone would read these
+    @ParameterizedTest
+    @ValueSource(strings = {"UTF-16LE", "UTF-16BE", "UTF-16", "UTF-32LE", "UTF-32BE"})
+    void utf16AndUtf32AreRefusedNamingTheEncoding(String charset) {
+        byte[] bytes = "{\"document\": \"formulation\"}".getBytes(java.nio.charset.Charset.forName(charset));
+        DocumentException e = assertThrows(DocumentException.class, () -> reader.read("t.json", bytes));
+        String m = e.problems().get(0).message();
+        assertTrue(m.contains(charset.substring(0, 6)) && m.contains("not UTF-8") && m.contains("RFC 8259"), m);
+    }
+
+    @Test
+    void aNulBeforeUtf8TextIsNotCalledUtf16() {
+        byte[] bytes = "\u0000\n  {\"a\": 1}".getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        DocumentException e = assertThrows(DocumentException.class, () -> reader.read("t.json", bytes));
+        assertFalse(e.problems().get(0).message().contains("UTF-16"), e.problems()::toString);
+    }
+
+    @Test
+    void utf8IsRead() {
+        assertDoesNotThrow(() -> reader.read("t.json", "{\"title\": \"µ °C\"}".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"{\"a\": +7.8}", "{\"a\": 0x1}", "{'a': 1}", "{\"a\": 1,}", "{\"a\": .5}", "{a: 1}",
+        "{\"a\": 01}", "{\"a\": NaN}"})
+    void aSyntaxErrorIsSaidInWordsWithItsPlaceNotAsAParserSetting(String json) {
+        Problem p = onlyProblem(json);
+        assertTrue(p.message().startsWith("not valid JSON: "), p.message());
+        assertFalse(p.message().contains("ALLOW_") || p.message().contains("Feature"), p.message());
+        assertTrue(p.location().isPresent(), p::toString);
+    }
 }
