@@ -10,6 +10,12 @@ import java.util.Optional;
 /** "Did you mean": the nearest names by edit distance (Levenshtein), ignoring case. */
 public final class Suggestions {
 
+    /**
+     * The longest name that gets suggestions. No name of the trade is longer, and the edit distance costs the product
+     * of the two lengths: a megabyte-long name would take minutes against every candidate.
+     */
+    public static final int LONGEST_NAME = 100;
+
     private Suggestions() {
     }
 
@@ -18,8 +24,14 @@ public final class Suggestions {
         return n.isEmpty() ? Optional.empty() : Optional.of(n.get(0));
     }
 
-    /** Up to {@code limit} candidates within a distance of a third of the name's length (at least 2). */
+    /**
+     * Up to {@code limit} candidates within a distance of a third of the name's length (at least 2); none for a name
+     * longer than {@link #LONGEST_NAME}.
+     */
     public static List<String> nearest(String name, Collection<String> candidates, int limit) {
+        if (name.length() > LONGEST_NAME) {
+            return List.of();
+        }
         String key = name.toLowerCase(Locale.ROOT);
         int threshold = Math.max(2, key.length() / 3);
         List<String> close = new ArrayList<>();
