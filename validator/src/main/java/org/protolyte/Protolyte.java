@@ -11,6 +11,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.Set;
 import java.util.ArrayDeque;
 import java.util.Deque;
 import java.util.concurrent.ExecutionException;
@@ -18,6 +19,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.Consumer;
+import java.util.stream.Collectors;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -457,8 +459,9 @@ public final class Protolyte {
     /** Adds the substance names that do not resolve, so that one pass reports everything a reviewer must fix. */
     private List<Problem> withNameProblems(SourceDocument doc, List<Problem> problems) {
         List<Problem> all = new ArrayList<>(problems);
+        Set<String> places = problems.stream().map(Problem::pointer).collect(Collectors.toSet());
         for (Problem p : resolver.unresolvedNames(doc)) {
-            if (all.stream().noneMatch(q -> q.pointer().equals(p.pointer()))) {
+            if (places.add(p.pointer())) {
                 all.add(p);
             }
         }

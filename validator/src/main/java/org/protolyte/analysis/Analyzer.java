@@ -180,14 +180,27 @@ public final class Analyzer {
         }
     }
 
-    /** pH change between every pair of conditions, in document order, with its main cause. */
+    /**
+     * pH change between the pairs of conditions that matter, in document order, with its main cause: every pair that
+     * holds a reference condition (the first, one named "preparation", or the first at the pH target's temperature).
+     * At most three lines per condition, where every pair would give a report quadratic in the conditions.
+     */
     private static List<Drift> drifts(Recipe recipe, List<ConditionResult> results) {
         List<Drift> out = new ArrayList<>();
+        Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
+        int atTarget = -1;
+        for (int i = 0; i < results.size() && target.isPresent() && atTarget < 0; i++) {
+            if (Formulation.sameTemperature(results.get(i).condition().kelvin(), target.get().kelvin())) {
+                atTarget = i;
+            }
+        }
         for (int i = 0; i < results.size(); i++) {
             for (int j = i + 1; j < results.size(); j++) {
                 ConditionResult a = results.get(i);
                 ConditionResult b = results.get(j);
-                if (!a.determinate() || !b.determinate()) {
+                boolean reference = i == 0 || i == atTarget || j == atTarget
+                        || a.condition().name().equals("preparation") || b.condition().name().equals("preparation");
+                if (!reference || !a.determinate() || !b.determinate()) {
                     continue;
                 }
                 double ta = a.condition().kelvin();

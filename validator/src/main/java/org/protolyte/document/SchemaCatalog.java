@@ -5,10 +5,13 @@ import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 import com.networknt.schema.Error;
@@ -30,6 +33,12 @@ public final class SchemaCatalog {
 
     public static final String ID_PREFIX = "https://protolyte.org/schemas/";
     private static final String CLASSPATH_PREFIX = "classpath:schemas/";
+
+    /**
+     * The most problems one validation lists. Enough to fix a document by; without a bound, a file of 200,000 unknown
+     * keys would cost a message and a line of the report each.
+     */
+    public static final int MOST_PROBLEMS_LISTED = 100;
 
     private final SchemaRegistry registry;
     private final Map<String, Schema> schemas = new ConcurrentHashMap<>();
@@ -73,42 +82,68 @@ public final class SchemaCatalog {
         return validate(doc, "", doc.root(), schemaFile);
     }
 
-    /** Validates the part of {@code doc} at {@code at} (its node {@code node}); places are named in {@code doc}. */
+    /**
+     * Validates the part of {@code doc} at {@code at} (its node {@code node}); places are named in {@code doc}. The
+     * first {@value #MOST_PROBLEMS_LISTED} problems in document order are listed, the rest counted by place.
+     */
     public List<Problem> validate(SourceDocument doc, String at, JsonNode node, String schemaFile) {
-        List<Error> errors = schema(schemaFile).validate(node);
+        record Placed(Error error, String pointer, Optional<Location> location) {
+        }
+        List<Placed> placed = new ArrayList<>();
+        for (Error e : schema(schemaFile).validate(node)) {
+            String pointer = at + pointer(e.getInstanceLocation()) + (isUnknownProperty(e) ? "/" + escape(e.getProperty()) : "");
+            placed.add(new Placed(e, pointer, doc.locate(pointer)));
+        }
+        placed.sort(Comparator.comparing((Placed p) -> p.location().map(Location::line).orElse(0))
+                .thenComparing(p -> p.location().map(Location::column).orElse(0)));
         List<Problem> out = new ArrayList<>();
-        for (Error e : errors) {
-            String pointer = at + pointer(e.getInstanceLocation());
-            String keyword = e.getKeyword() == null ? "" : e.getKeyword();
-            String message;
-            if ((keyword.equals("additionalProperties") || keyword.equals("unevaluatedProperties"))
-                    && e.getProperty() != null) {
-                pointer = pointer + "/" + escape(e.getProperty());
-                message = unknownProperty(e, schemaFile);
-            } else if (keyword.equals("required") && e.getProperty() != null) {
-                message = "required property '" + e.getProperty() + "' is missing";
-            } else if (keyword.equals("dependentRequired") && args(e) >= 2) {
-                message = "'" + e.getArguments()[0] + "' is required when '" + e.getArguments()[1] + "' is given";
-            } else if (keyword.equals("const") && args(e) >= 1) {
-                message = "must be " + e.getArguments()[0];
-            } else if (keyword.equals("enum") && args(e) >= 1) {
-                message = "must be one of " + e.getArguments()[0];
-            } else if (keyword.equals("type") && args(e) >= 2) {
-                message = "is " + article(String.valueOf(e.getArguments()[0])) + ", expected "
-                        + String.valueOf(e.getArguments()[1]).replace("[", "").replace("]", "").replace(", ", " or ");
-            } else if (keyword.equals("pattern") && e.getSchemaLocation().toString().contains("/quantity/")) {
-                message = "'" + e.getInstanceNode().asString() + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"";
-            } else {
-                message = stripPath(e.getMessage());
-            }
-            Problem p = doc.problem(pointer, message);
-            if (out.stream().noneMatch(q -> q.pointer().equals(p.pointer()) && q.message().equals(p.message()))) {
-                out.add(p);
+        Set<List<String>> seen = new HashSet<>(); // one problem per place and message
+        Set<String> listed = new HashSet<>();
+        Set<String> unlisted = new HashSet<>();
+        Optional<Placed> firstUnlisted = Optional.empty();
+        Map<String, List<String>> allowed = new HashMap<>(); // by schema location
+        for (Placed p : placed) {
+            if (out.size() < MOST_PROBLEMS_LISTED) {
+                String message = message(p.error(), schemaFile, allowed);
+                if (seen.add(List.of(p.pointer(), message))) {
+                    out.add(new Problem(p.pointer(), p.location(), message));
+                    listed.add(p.pointer());
+                }
+            } else if (!listed.contains(p.pointer()) && unlisted.add(p.pointer()) && firstUnlisted.isEmpty()) {
+                firstUnlisted = Optional.of(p);
             }
         }
-        out.sort(Comparator.comparing((Problem p) -> p.location().map(Location::line).orElse(0))
-                .thenComparing(p -> p.location().map(Location::column).orElse(0)));
+        firstUnlisted.ifPresent(p -> out.add(new Problem(p.pointer(), p.location(), "… and problems at "
+                + unlisted.size() + " more places from here on, not listed (a report lists the first "
+                + MOST_PROBLEMS_LISTED + " problems of a document)")));
         return out;
+    }
+
+    private static boolean isUnknownProperty(Error e) {
+        return ("additionalProperties".equals(e.getKeyword()) || "unevaluatedProperties".equals(e.getKeyword()))
+                && e.getProperty() != null;
+    }
+
+    private String message(Error e, String schemaFile, Map<String, List<String>> allowed) {
+        String keyword = e.getKeyword() == null ? "" : e.getKeyword();
+        if (isUnknownProperty(e)) {
+            return unknownProperty(e, allowed.computeIfAbsent(e.getSchemaLocation().toString(),
+                    l -> allowedProperties(e, schemaFile)));
+        } else if (keyword.equals("required") && e.getProperty() != null) {
+            return "required property '" + e.getProperty() + "' is missing";
+        } else if (keyword.equals("dependentRequired") && args(e) >= 2) {
+            return "'" + e.getArguments()[0] + "' is required when '" + e.getArguments()[1] + "' is given";
+        } else if (keyword.equals("const") && args(e) >= 1) {
+            return "must be " + e.getArguments()[0];
+        } else if (keyword.equals("enum") && args(e) >= 1) {
+            return "must be one of " + e.getArguments()[0];
+        } else if (keyword.equals("type") && args(e) >= 2) {
+            return "is " + article(String.valueOf(e.getArguments()[0])) + ", expected "
+                    + String.valueOf(e.getArguments()[1]).replace("[", "").replace("]", "").replace(", ", " or ");
+        } else if (keyword.equals("pattern") && e.getSchemaLocation().toString().contains("/quantity/")) {
+            return "'" + e.getInstanceNode().asString() + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"";
+        }
+        return stripPath(e.getMessage());
     }
 
     private static int args(Error e) {
@@ -119,9 +154,8 @@ public final class SchemaCatalog {
         return ("aeiou".indexOf(type.isEmpty() ? 'x' : type.charAt(0)) >= 0 ? "an " : "a ") + type;
     }
 
-    private String unknownProperty(Error e, String schemaFile) {
+    private static String unknownProperty(Error e, List<String> known) {
         String name = e.getProperty();
-        List<String> known = allowedProperties(e, schemaFile);
         Optional<String> nearest = Suggestions.nearest(name, known);
         String base = "unknown property '" + name + "'";
         if (nearest.isPresent()) {

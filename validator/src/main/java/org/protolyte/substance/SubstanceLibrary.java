@@ -91,7 +91,10 @@ public final class SubstanceLibrary {
                     + String.join(", ", forms), forms);
         }
         List<String> near = nearestNames(name);
-        String hint = near.isEmpty() ? "; add it to a user library (--substances FILE)"
+        String unsought = key.length() > Suggestions.LONGEST_NAME
+                ? " (no nearest names are sought for a name of more than " + Suggestions.LONGEST_NAME + " characters)"
+                : "";
+        String hint = near.isEmpty() ? "; add it to a user library (--substances FILE)" + unsought
                 : "; nearest library names: " + String.join(", ", near);
         throw new LookupException("unknown substance '" + name + "'" + hint, near);
     }

@@ -1,13 +1,7 @@
 package org.protolyte.units;
 
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
-
 /** A number with its unit, as written in a document. Conversion to base happens once, at the boundary. */
 public record Quantity(double value, Unit unit) {
-
-    private static final Pattern TEXT =
-            Pattern.compile("\\s*([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*(\\S.*?)\\s*");
 
     public Quantity {
         if (!Double.isFinite(value)) {
@@ -24,19 +18,79 @@ public record Quantity(double value, Unit unit) {
         return unit.toBase(value);
     }
 
-    /** Reads {@code "<number> <unit>"}, e.g. {@code "80 g"} or {@code "22 Cel"}. */
+    /**
+     * Reads {@code "<number> <unit>"}, e.g. {@code "80 g"} or {@code "22 Cel"}: optional white space, a decimal number
+     * ({@code [-+]?(digits[.digits]|.digits)}, an optional exponent), optional white space, the unit, optional white
+     * space. One pass over the text, so the time is linear in its length whatever it holds.
+     */
     public static Quantity parse(String text) {
-        Matcher m = TEXT.matcher(text);
-        if (!m.matches()) {
-            throw new UnitException("'" + text + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"");
+        int end = text.length();
+        while (end > 0 && isSpace(text.charAt(end - 1))) {
+            end--;
         }
-        double v = Double.parseDouble(m.group(1));
-        return of(v, m.group(2));
+        int start = 0;
+        while (start < end && isSpace(text.charAt(start))) {
+            start++;
+        }
+        int i = start;
+        if (i < end && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
+            i++;
+        }
+        int mantissa = digits(text, i, end);
+        i += mantissa;
+        if (i < end && text.charAt(i) == '.') {
+            int fraction = digits(text, i + 1, end);
+            if (mantissa + fraction > 0) {
+                i += 1 + fraction;
+                mantissa += fraction;
+            }
+        }
+        if (mantissa > 0 && i < end && (text.charAt(i) == 'e' || text.charAt(i) == 'E')) {
+            int j = i + 1;
+            if (j < end && (text.charAt(j) == '+' || text.charAt(j) == '-')) {
+                j++;
+            }
+            int exponent = digits(text, j, end);
+            if (exponent > 0) {
+                i = j + exponent;
+            }
+        }
+        int unit = i;
+        while (unit < end && isSpace(text.charAt(unit))) {
+            unit++;
+        }
+        if (mantissa == 0 || unit == end) {
+            throw new UnitException("'" + shown(text) + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"");
+        }
+        return of(Double.parseDouble(text.substring(start, i)), text.substring(unit, end));
+    }
+
+    /** The number of ASCII digits from {@code from}, up to {@code end}. */
+    private static int digits(String text, int from, int end) {
+        int i = from;
+        while (i < end && text.charAt(i) >= '0' && text.charAt(i) <= '9') {
+            i++;
+        }
+        return i - from;
+    }
+
+    /** White space as Java's regular expressions read {@code \s} (and the schema's quantity pattern with them). */
+    private static boolean isSpace(char c) {
+        return c == ' ' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r';
+    }
+
+    /** The text as a message quotes it: a long one is cut, so that one bad value cannot flood the report. */
+    private static String shown(String text) {
+        if (text.length() <= 60) {
+            return text;
+        }
+        int cut = Character.isHighSurrogate(text.charAt(39)) ? 39 : 40;
+        return text.substring(0, cut) + "… (" + text.length() + " characters)";
     }
 
     public static Quantity of(double value, String code) {
         Unit u = Unit.ofCode(code).orElseThrow(() -> new UnitException(
-                "unknown unit '" + code + "'; accepted: " + Unit.codesOf(java.util.List.of(Unit.values()))));
+                "unknown unit '" + shown(code) + "'; accepted: " + Unit.codesOf(java.util.List.of(Unit.values()))));
         return new Quantity(value, u);
     }
 

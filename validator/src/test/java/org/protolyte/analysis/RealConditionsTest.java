@@ -172,4 +172,20 @@ class RealConditionsTest {
         FormulationAnalysis second = analyse(String.format(Locale.ROOT, body, String.valueOf(proposed)));
         assertEquals(7.5, pH(second, "use"), 0.01);
     }
+
+    /** A drift line for every pair made 1,000 conditions a 33 MB report: only pairs with a reference condition. */
+    @Test
+    void driftLinesGrowLinearlyWithTheConditions() {
+        StringBuilder c = new StringBuilder("\"conditions\": [{\"name\": \"c0\", \"temperature\": \"20 Cel\"}");
+        for (int i = 1; i < 40; i++) {
+            c.append(", {\"name\": \"c").append(i).append("\", \"temperature\": \"").append(4 + i).append(" Cel\"}");
+        }
+        c.append("], \"targets\": {\"pH\": {\"value\": 8.0, \"tolerance\": 0.5, \"temperature\": \"30 Cel\"}}");
+        FormulationAnalysis a = analyse(TRIS + ", " + c);
+        // from c0 to the 39 others, and from c26 (30 °C, the target's) to the 38 conditions that are neither
+        assertEquals(39 + 38, a.drifts().size());
+        assertTrue(a.drifts().stream().anyMatch(d -> d.from().equals("c26") && d.to().equals("c39")));
+        assertTrue(a.drifts().stream().anyMatch(d -> d.from().equals("c1") && d.to().equals("c26")));
+        assertTrue(a.drifts().stream().noneMatch(d -> d.from().equals("c1") && d.to().equals("c2")));
+    }
 }

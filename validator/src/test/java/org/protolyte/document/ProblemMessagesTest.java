@@ -66,4 +66,24 @@ class ProblemMessagesTest {
         List<Integer> lines = findings().stream().map(f -> f.location().orElseThrow().line()).toList();
         assertEquals(lines.stream().sorted().toList(), lines);
     }
+
+    /** 200,000 unknown keys hung the check: a message each, and a search for duplicates quadratic in their number. */
+    @Test
+    void manyUnknownKeysListTheFirstHundredAndCountTheRest() {
+        StringBuilder keys = new StringBuilder();
+        for (int i = 0; i < 200_000; i++) {
+            keys.append(", \"k").append(i).append("\": 0");
+        }
+        String doc = DOC.substring(0, DOC.length() - 1) + keys + "}";
+        List<Finding> found = org.junit.jupiter.api.Assertions.assertTimeoutPreemptively(java.time.Duration.ofSeconds(60),
+                () -> PROTOLYTE.check("t.json", doc.getBytes(StandardCharsets.UTF_8)).findings());
+        assertTrue(found.size() <= SchemaCatalog.MOST_PROBLEMS_LISTED + 3, found.size() + " findings");
+        assertEquals("unknown property 'k0'; did you mean 'id'?", found.stream()
+                .filter(f -> f.pointer().orElse("").equals("/k0")).findFirst().orElseThrow().message());
+        Finding rest = found.stream().filter(f -> f.message().startsWith("… and problems at ")).findFirst()
+                .orElseThrow(() -> new AssertionError("no count of the unlisted problems"));
+        // the document's own problems (formatVersion, targets, intendedUse, amount) come first: 96 keys are listed
+        assertEquals("… and problems at 199904 more places from here on, not listed (a report lists the first 100"
+                + " problems of a document)", rest.message());
+    }
 }

@@ -2,8 +2,10 @@ package org.protolyte.substance;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.time.Duration;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -48,6 +50,17 @@ class SubstanceLookupTest {
         LookupException e = assertThrows(LookupException.class, () -> library.lookup("potasium chloride"));
         assertEquals("potassium chloride", e.candidates().get(0));
         assertTrue(e.candidates().size() <= 5, e.candidates().toString());
+    }
+
+    /** A 1 MiB name took 34 s: the edit distance is quadratic, so names past the bound get no suggestions. */
+    @Test
+    void aMegabyteNameIsRefusedAtOnceWithoutSuggestions() {
+        String name = "tromethamin" + "e".repeat(1 << 20);
+        LookupException e = assertTimeoutPreemptively(Duration.ofSeconds(10),
+                () -> assertThrows(LookupException.class, () -> library.lookup(name)));
+        assertTrue(e.candidates().isEmpty(), e.candidates().toString());
+        assertTrue(e.getMessage().contains("no nearest names are sought for a name of more than 100 characters"),
+                e.getMessage().substring(e.getMessage().length() - 200));
     }
 
     @Test

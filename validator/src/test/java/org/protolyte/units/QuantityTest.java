@@ -2,11 +2,14 @@ package org.protolyte.units;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
+
+import java.time.Duration;
 
 /** Each accepted unit converts to its base by the definition of the unit (UCUM, and the lab spellings listed in README). */
 class QuantityTest {
@@ -49,5 +52,50 @@ class QuantityTest {
         UnitException e = assertThrows(UnitException.class,
                 () -> Quantity.parse("25 Cel").require("an amount", Dimension.MASS));
         assertTrue(e.getMessage().contains("'mg'"));
+    }
+
+    @ParameterizedTest(name = "\"{0}\" = {1} {2}")
+    @CsvSource({"'1. g', 1, g", "'.5 g', 0.5, g", "'-2.5e-3 mol/L', -0.0025, mol/L", "'+4E2 mg', 400, mg",
+        "'  5 g\t', 5, g", "'5g', 5, g", "'5e3g', 5000, g"})
+    void numberAndUnitSplitWhereThePatternSplitsThem(String text, double value, String unit) {
+        Quantity q = Quantity.parse(text);
+        assertEquals(value, q.value(), 1e-15);
+        assertEquals(unit, q.unit().code());
+    }
+
+    @Test
+    void anEWithoutDigitsAfterItBelongsToTheUnit() {
+        UnitException e = assertThrows(UnitException.class, () -> Quantity.parse("1eg"));
+        assertTrue(e.getMessage().contains("unknown unit 'eg'"), e.getMessage());
+    }
+
+    @ParameterizedTest
+    @CsvSource({"''", "'   '", "'.'", "'. g'", "'-g'", "'e5 g'", "'1e5'", "'g 5'"})
+    void textWithoutNumberAndUnitIsRefused(String text) {
+        UnitException e = assertThrows(UnitException.class, () -> Quantity.parse(text));
+        assertTrue(e.getMessage().contains("is not of the form") || e.getMessage().contains("unknown unit"),
+                e.getMessage());
+    }
+
+    /** "1 g" + 200,000 spaces + "x" took minutes with a backtracking pattern; a megabyte must take milliseconds. */
+    @Test
+    void aMegabyteOfSpacesInsideTheTextIsRefusedInLinearTime() {
+        String text = "1 g" + " ".repeat(1 << 20) + "x";
+        UnitException e = assertTimeoutPreemptively(Duration.ofSeconds(10),
+                () -> assertThrows(UnitException.class, () -> Quantity.parse(text)));
+        assertTrue(e.getMessage().contains("unknown unit 'g   "), e.getMessage());
+        assertTrue(e.getMessage().length() < 1_000, "the message quotes the text cut short");
+    }
+
+    @Test
+    void aMegabyteOfLeadingSpacesOrDigitsIsAnsweredInLinearTime() {
+        String spaces = " ".repeat(1 << 20) + "1 gx";
+        String digits = "1" + "0".repeat(1 << 20) + " g";
+        assertTimeoutPreemptively(Duration.ofSeconds(10), () -> {
+            assertTrue(assertThrows(UnitException.class, () -> Quantity.parse(spaces)).getMessage()
+                    .contains("unknown unit 'gx'"));
+            assertTrue(assertThrows(UnitException.class, () -> Quantity.parse(digits)).getMessage()
+                    .contains("not finite"));
+        });
     }
 }
