@@ -182,9 +182,13 @@ public final class Analyzer {
 
     /**
      * pH change between the pairs of conditions that matter, in document order, with its main cause: every pair that
-     * holds a reference condition (the first, one named "preparation", or the first at the pH target's temperature).
-     * At most three lines per condition, where every pair would give a report quadratic in the conditions.
+     * holds a reference condition (the first, one named "preparation" or "use", or the first at the pH target's
+     * temperature). At most four lines per condition, where every pair would give a report quadratic in the conditions.
      */
+    private static boolean isReference(Formulation.Condition c) {
+        return c.name().equals("preparation") || c.name().equals("use");
+    }
+
     private static List<Drift> drifts(Recipe recipe, List<ConditionResult> results) {
         List<Drift> out = new ArrayList<>();
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
@@ -199,7 +203,7 @@ public final class Analyzer {
                 ConditionResult a = results.get(i);
                 ConditionResult b = results.get(j);
                 boolean reference = i == 0 || i == atTarget || j == atTarget
-                        || a.condition().name().equals("preparation") || b.condition().name().equals("preparation");
+                        || isReference(a.condition()) || isReference(b.condition());
                 if (!reference || !a.determinate() || !b.determinate()) {
                     continue;
                 }

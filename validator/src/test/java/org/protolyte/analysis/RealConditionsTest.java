@@ -188,4 +188,12 @@ class RealConditionsTest {
         assertTrue(a.drifts().stream().anyMatch(d -> d.from().equals("c1") && d.to().equals("c26")));
         assertTrue(a.drifts().stream().noneMatch(d -> d.from().equals("c1") && d.to().equals("c2")));
     }
+
+    @Test
+    void storageToUseIsADriftOfItsOwn() {
+        // cold storage warmed for use: the drift a user looks for, although neither condition is the first
+        FormulationAnalysis a = analyse(TRIS + ", \"conditions\": [{\"name\": \"preparation\", \"temperature\": \"22 Cel\"}, "
+                + "{\"name\": \"storage\", \"temperature\": \"5 Cel\"}, {\"name\": \"use\", \"temperature\": \"37 Cel\"}]");
+        assertTrue(a.drifts().stream().anyMatch(d -> d.from().equals("storage") && d.to().equals("use")));
+    }
 }
