@@ -43,17 +43,19 @@ public final class ExplainCommand implements Callable<Integer> {
         List<Rule> rules = book.rules(all);
         for (Rule r : rules) {
             if (r.id().equals(ruleId)) {
-                out.println(r.id() + " (" + r.severity().code() + ", check kind " + r.check() + ", pack " + r.pack() + ")");
-                out.println("  " + r.summary());
+                // rule packs are data a site writes: printed escaped, so a pack cannot forge a line
+                out.println(Printable.text(r.id() + " (" + r.severity().code() + ", check kind " + r.check() + ", pack "
+                        + r.pack() + ")"));
+                out.println("  " + Printable.text(r.summary()));
                 out.println();
-                out.println("Why: " + r.explanation());
-                r.remedy().ifPresent(x -> out.println("What to do: " + x));
-                r.safety().ifPresent(x -> out.println("Safety: " + x));
+                out.println("Why: " + Printable.text(r.explanation()));
+                r.remedy().ifPresent(x -> out.println("What to do: " + Printable.text(x)));
+                r.safety().ifPresent(x -> out.println("Safety: " + Printable.text(x)));
                 if (!r.parameters().isEmpty()) {
-                    out.println("Parameters: " + r.parameters());
+                    out.println("Parameters: " + Printable.text(r.parameters().toString()));
                 }
                 out.println("References:");
-                r.references().forEach(x -> out.println("  - " + x));
+                r.references().forEach(x -> out.println("  - " + Printable.text(x)));
                 out.flush();
                 return 0;
             }

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.protolyte.report.Printable;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.Rule;
 import org.protolyte.rules.RuleBook;
@@ -48,10 +49,11 @@ public final class RulesCommand implements Callable<Integer> {
         var selected = intendedUse == null && setup.rules.isEmpty()
                 ? book.packs().values().stream().filter(RulePack::shipped).map(RulePack::name).toList()
                 : checker.selection(Optional.ofNullable(intendedUse));
-        out.println("packs: " + String.join(", ", book.withAncestors(selected).stream()
-                .map(p -> p.name() + " " + p.version()).toList()));
+        // rule packs are data a site writes: printed escaped, so a pack cannot forge a line
+        out.println("packs: " + Printable.text(String.join(", ", book.withAncestors(selected).stream()
+                .map(p -> p.name() + " " + p.version()).toList())));
         for (Rule r : book.rules(selected)) {
-            out.printf("  %-8s %-40s %s%s%n", r.severity().code(), r.id(), r.summary(),
+            out.printf("  %-8s %-40s %s%s%n", r.severity().code(), Printable.text(r.id()), Printable.text(r.summary()),
                     r.enabled() ? "" : " (disabled)");
         }
         out.println("check kinds: " + String.join(", ", book.kinds().all().keySet()));

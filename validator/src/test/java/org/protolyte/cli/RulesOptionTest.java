@@ -293,6 +293,21 @@ class RulesOptionTest {
     }
 
     @Test
+    void aPacksTextCannotForgeALineOfRulesOrExplain() throws IOException {
+        String forged = "\\n== forged.json  [LB-FAKE]  PASS\\u001b[2J";
+        Path p = write("forging.json", pack("forging", "    { \"id\": \"site-forge\", \"check\": \"revision-stated\", "
+                + "\"severity\": \"note\", \"summary\": \"s" + forged + "\", \"explanation\": \"e" + forged + "\", "
+                + "\"remedy\": \"r" + forged + "\", \"references\": [\"ref" + forged + "\"] }"));
+        for (MainCommandLineTest.Result r : List.of(run("rules", "--rules", p.toString()),
+                run("explain", "--rules", p.toString(), "site-forge"))) {
+            assertEquals(0, r.exitCode(), r::all);
+            assertFalse(Pattern.compile("(?m)^== forged").matcher(r.out()).find(), r::out);
+            assertFalse(r.out().contains("\u001b"), r::out);
+            assertTrue(r.out().contains("s\\n== forged.json"), r::out);
+        }
+    }
+
+    @Test
     void rulesMarksADisabledRule() throws IOException {
         Path p = write("no-revisions.json", pack("no-revisions", "    { \"id\": \"revision-stated\", \"enabled\": false }"));
         MainCommandLineTest.Result r = run("rules", "--rules", p.toString());
