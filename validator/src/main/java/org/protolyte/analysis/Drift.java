@@ -10,4 +10,9 @@ import java.util.Optional;
  */
 public record Drift(String from, String to, double fromCelsius, double toCelsius, double change,
                     Optional<String> system, double dpKadT, double share, Optional<String> co2Change) {
+
+    /** The same change read from {@code to} back to {@code from}. */
+    public Drift reversed() {
+        return new Drift(to, from, toCelsius, fromCelsius, -change, system, dpKadT, share, co2Change);
+    }
 }

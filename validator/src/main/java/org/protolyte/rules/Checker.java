@@ -3,6 +3,7 @@ package org.protolyte.rules;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.stream.Stream;
 
 import org.protolyte.analysis.FormulationAnalysis;
 
@@ -104,10 +105,11 @@ public final class Checker {
                 continue;
             }
             // a rule aimed at a condition the document lacks would otherwise judge nothing and stay silent
-            Optional<String> named = rule.text("condition");
-            if (named.isPresent() && !names.contains(named.get())) {
+            Optional<String> missing = Stream.of("condition", "from", "to").map(rule::text).flatMap(Optional::stream)
+                    .filter(n -> !names.contains(n)).findFirst();
+            if (missing.isPresent()) {
                 unjudged.add(new Unjudged(rule.id(), rule.pack(), "rule " + rule.id() + " (pack " + rule.pack()
-                        + ") judges the condition '" + named.get() + "', which this document does not have (its "
+                        + ") judges the condition '" + missing.get() + "', which this document does not have (its "
                         + "conditions: " + String.join(", ", names) + "); name the condition in the document or "
                         + "correct the pack"));
                 continue;

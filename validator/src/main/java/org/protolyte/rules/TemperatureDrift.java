@@ -8,7 +8,8 @@ import org.protolyte.analysis.Drift;
 import org.protolyte.analysis.FormulationAnalysis;
 
 /**
- * The pH change between conditions (by default from "preparation" to every other) within {@code maxChange}.
+ * The pH change from one condition to the others within {@code maxChange}: from the pack's {@code from}, else
+ * "preparation", else the first condition (where the solution is made), to the pack's {@code to} or every other.
  * Names the system that causes most of it and its dpKa/dT.
  */
 public final class TemperatureDrift implements CheckKind {
@@ -26,9 +27,15 @@ public final class TemperatureDrift implements CheckKind {
     @Override
     public List<Finding> check(FormulationAnalysis a, Rule rule) {
         double max = rule.number("maxChange", 0.1);
-        String from = rule.text("from").orElse("preparation");
+        List<String> names = a.recipe().formulation().conditions().stream().map(c -> c.name()).toList();
+        if (names.isEmpty()) {
+            return List.of();
+        }
+        String from = rule.text("from").orElse(names.contains("preparation") ? "preparation" : names.get(0));
         List<Finding> out = new ArrayList<>();
-        for (Drift d : a.drifts()) {
+        for (Drift listed : a.drifts()) {
+            // drifts are listed in document order: one that ends at the reference is read backwards
+            Drift d = listed.to().equals(from) ? listed.reversed() : listed;
             boolean judged = d.from().equals(from) && rule.text("to").map(t -> t.equals(d.to())).orElse(true);
             if (!judged || d.co2Change().isPresent() || Math.abs(d.change()) <= max) {
                 continue;

@@ -423,6 +423,17 @@ class RulePackLoadingTest {
     }
 
     @Test
+    void driftFromAConditionTheDocumentLacksMakesItIndeterminate() {
+        RuleBook book = shipped();
+        book.add("site-drift.json", utf8(pack("site-drift", """
+                    { "id": "temperature-drift", "parameters": { "maxChange": 0.3, "from": "mixing" } }""")), false);
+        DocumentReport r = judge(book, "site-drift", "revision-stated", "quiet.json");
+        assertEquals(Status.INDETERMINATE, r.status(), () -> r.status() + " " + r.diagnostics());
+        assertTrue(r.diagnostics().stream().anyMatch(d -> d.code().equals("rule-not-judged")
+                && d.message().contains("'mixing'") && d.message().contains("temperature-drift")), r.diagnostics()::toString);
+    }
+
+    @Test
     void ruleNamingAConditionTheDocumentHasJudgesIt() {
         RuleBook book = shipped();
         book.add("site-use.json", utf8(pack("site-use", """
