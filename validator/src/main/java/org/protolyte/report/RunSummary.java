@@ -31,7 +31,7 @@ public final class RunSummary {
         this.asOf = asOf;
         this.toolVersion = toolVersion;
         this.generatedAt = generatedAt;
-        this.libraryFiles = Map.copyOf(libraryFiles);
+        this.libraryFiles = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(libraryFiles));   // in the order given
         for (Status s : Status.values()) {
             counts.put(s, 0L);
         }

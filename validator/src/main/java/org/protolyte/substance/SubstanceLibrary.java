@@ -48,17 +48,22 @@ public final class SubstanceLibrary {
                      Map<String, SaltSolubility> solubilities) {
         this.solubilities = List.copyOf(solubilities.values());
         this.phases = List.copyOf(phases.values());
-        this.phaseSources = Map.copyOf(phaseSources);
+        this.phaseSources = inOrder(phaseSources);
         this.complexes = List.copyOf(complexes.values());
-        this.complexSources = Map.copyOf(complexSources);
-        this.systems = Map.copyOf(systems);
-        this.stepSources = Map.copyOf(stepSources);
-        this.ions = Map.copyOf(ions);
-        this.solutes = Map.copyOf(solutes);
+        this.complexSources = inOrder(complexSources);
+        this.systems = inOrder(systems);
+        this.stepSources = inOrder(stepSources);
+        this.ions = inOrder(ions);
+        this.solutes = inOrder(solutes);
         this.substances = new LinkedHashMap<>(substances);
-        this.index = Map.copyOf(index);
-        this.ambiguous = Map.copyOf(ambiguous);
+        this.index = inOrder(index);
+        this.ambiguous = inOrder(ambiguous);
         this.files = new LinkedHashMap<>(files);
+    }
+
+    /** A read-only copy in the library's order: {@code Map.copyOf} iterates in an order that changes from run to run. */
+    private static <K, V> Map<K, V> inOrder(Map<K, V> m) {
+        return java.util.Collections.unmodifiableMap(new LinkedHashMap<>(m));
     }
 
     /** The files this library was built from, in order, with the SHA-256 of each file's bytes. */

@@ -57,4 +57,16 @@ class ReproducibleReportTest {
         assertTrue(json.contains("\"source\" : \"rules/general.json\""));
         assertTrue(json.matches("(?s).*\"rulePacks\" : \\[ \\{.*\"sha256\" : \"[0-9a-f]{64}\".*"));
     }
+
+    /** Provenance lists the library files in the order they were given, whatever a hash map would do. */
+    @Test
+    void theLibraryFilesAreListedInTheOrderGiven() {
+        java.util.Map<String, String> files = new java.util.LinkedHashMap<>();
+        for (String f : List.of("shipped library", "site/z.json", "site/a.json", "m.json", "b.json", "y.json",
+                "c.json", "x.json")) {
+            files.put(f, "0".repeat(64));
+        }
+        RunSummary summary = new RunSummary("test", java.time.Instant.EPOCH, files);
+        assertEquals(List.copyOf(files.keySet()), List.copyOf(summary.libraryFiles().keySet()));
+    }
 }

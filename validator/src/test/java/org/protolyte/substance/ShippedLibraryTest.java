@@ -28,6 +28,18 @@ class ShippedLibraryTest {
         }
     }
 
+    /**
+     * The library keeps the order of its file: the systems (which the analysis, the uncertainty budget and the
+     * robustness draws walk in turn) come out as written, in every run, not in a hash order that changes between runs.
+     */
+    @Test
+    void theSystemsComeInTheOrderOfTheFile() throws Exception {
+        List<String> written = new java.util.ArrayList<>();
+        raw().get("systems").forEach(n -> written.add(n.get("name").asString()));
+        assertTrue(written.size() > 10, "the shipped library has more than ten systems");
+        assertEquals(written, LIBRARY.systems().stream().map(AcidBaseSystem::name).toList());
+    }
+
     /** Every declared molar mass (pharmacopoeial monograph values) matches its formula with IUPAC atomic weights. */
     @Test
     void everyDeclaredMolarMassMatchesItsFormula() throws Exception {
