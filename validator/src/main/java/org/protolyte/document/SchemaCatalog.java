@@ -21,6 +21,8 @@ import com.networknt.schema.SchemaRegistry;
 import com.networknt.schema.SpecificationVersion;
 import com.networknt.schema.path.NodePath;
 
+import org.protolyte.text.Excerpt;
+
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
@@ -141,7 +143,7 @@ public final class SchemaCatalog {
             return "is " + article(String.valueOf(e.getArguments()[0])) + ", expected "
                     + String.valueOf(e.getArguments()[1]).replace("[", "").replace("]", "").replace(", ", " or ");
         } else if (keyword.equals("pattern") && e.getSchemaLocation().toString().contains("/quantity/")) {
-            return "'" + e.getInstanceNode().asString() + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"";
+            return "'" + Excerpt.of(e.getInstanceNode().asString()) + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"";
         }
         return stripPath(e.getMessage());
     }

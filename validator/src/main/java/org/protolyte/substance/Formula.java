@@ -4,6 +4,8 @@ import java.util.Collections;
 import java.util.Map;
 import java.util.TreeMap;
 
+import org.protolyte.text.Excerpt;
+
 /**
  * A chemical formula such as {@code Na2HPO4·7H2O}, {@code C4H11NO3·HCl} or {@code Ca(CH3COO)2}: element
  * counts, the water of hydration and the molar mass from {@link AtomicWeights}. Parts of an adduct are
@@ -24,7 +26,7 @@ public final class Formula {
 
     public static Formula parse(String text) {
         if (text.length() > MAX_LENGTH) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "' is longer than " + MAX_LENGTH
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "' is longer than " + MAX_LENGTH
                     + " characters");
         }
         java.util.List<String> parts = new java.util.ArrayList<>();
@@ -39,21 +41,21 @@ public final class Formula {
         double water = 0;
         for (String part : parts) {
             if (part.isEmpty()) {
-                throw new IllegalArgumentException("formula '" + shown(text) + "' has an empty part");
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "' has an empty part");
             }
             java.util.regex.Matcher count = LEADING_COUNT.matcher(part);
             int digits = count.lookingAt() ? count.end() : 0;
             double multiplier = digits == 0 ? 1 : Double.parseDouble(part.substring(0, digits));
             if (multiplier > MAX_ATOMS) {
-                throw new IllegalArgumentException("formula '" + shown(text) + "': the count "
-                        + shown(part.substring(0, digits)) + " is above " + MAX_ATOMS);
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': the count "
+                        + Excerpt.of(part.substring(0, digits)) + " is above " + MAX_ATOMS);
             }
             if (multiplier == 0) {
-                throw new IllegalArgumentException("formula '" + shown(text) + "': a count of zero");
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': a count of zero");
             }
             String body = part.substring(digits);
             if (body.isEmpty()) {
-                throw new IllegalArgumentException("formula '" + shown(text) + "': a count with nothing after it");
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': a count with nothing after it");
             }
             if (body.equals("H2O")) {
                 water += multiplier;
@@ -61,12 +63,12 @@ public final class Formula {
             Map<String, Long> counts = new TreeMap<>();
             int end = parseGroup(text, body, 0, counts, 0);
             if (end != body.length()) {
-                throw new IllegalArgumentException("formula '" + shown(text) + "': unexpected '" + body.charAt(end) + "'");
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': unexpected '" + body.charAt(end) + "'");
             }
             counts.forEach((el, n) -> total.merge(el, n * multiplier, Double::sum));
         }
         if (total.values().stream().anyMatch(n -> n > MAX_ATOMS)) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "' has more than " + MAX_ATOMS
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "' has more than " + MAX_ATOMS
                     + " atoms of one element per formula unit");
         }
         return new Formula(text.strip(), total, water);
@@ -88,7 +90,7 @@ public final class Formula {
      */
     private static int parseGroup(String text, String s, int pos, Map<String, Long> into, int depth) {
         if (depth > MAX_DEPTH) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "': parentheses nested deeper than "
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': parentheses nested deeper than "
                     + MAX_DEPTH + " levels");
         }
         int i = pos;
@@ -98,10 +100,10 @@ public final class Formula {
             if (c == '(') {
                 i = parseGroup(text, s, i + 1, group, depth + 1);
                 if (i >= s.length() || s.charAt(i) != ')') {
-                    throw new IllegalArgumentException("formula '" + shown(text) + "': unbalanced '('");
+                    throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': unbalanced '('");
                 }
                 if (group.isEmpty()) {
-                    throw new IllegalArgumentException("formula '" + shown(text) + "': empty parentheses");
+                    throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': empty parentheses");
                 }
                 i++;
             } else if (Character.isUpperCase(c)) {
@@ -111,13 +113,13 @@ public final class Formula {
                 }
                 String symbol = s.substring(i, j);
                 if (AtomicWeights.of(symbol).isEmpty()) {
-                    throw new IllegalArgumentException("formula '" + shown(text) + "': unknown element '"
-                            + shown(symbol) + "'");
+                    throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': unknown element '"
+                            + Excerpt.of(symbol) + "'");
                 }
                 group.put(symbol, 1L);
                 i = j;
             } else {
-                throw new IllegalArgumentException("formula '" + shown(text) + "': unexpected '" + c + "'");
+                throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': unexpected '" + c + "'");
             }
             int j = i;
             while (j < s.length() && Character.isDigit(s.charAt(j))) {
@@ -134,12 +136,12 @@ public final class Formula {
 
     private static long count(String text, String digits) {
         if (digits.length() > 10 || Long.parseLong(digits) > MAX_ATOMS) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "': the count " + shown(digits)
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': the count " + Excerpt.of(digits)
                     + " is above " + MAX_ATOMS);
         }
         long n = Long.parseLong(digits);
         if (n == 0) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "': a count of zero");
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "': a count of zero");
         }
         return n;
     }
@@ -153,16 +155,12 @@ public final class Formula {
             product = Long.MAX_VALUE;
         }
         if (product > MAX_ATOMS) {
-            throw new IllegalArgumentException("formula '" + shown(text) + "' has more than " + MAX_ATOMS
+            throw new IllegalArgumentException("formula '" + Excerpt.of(text) + "' has more than " + MAX_ATOMS
                     + " atoms of one element per formula unit");
         }
         return product;
     }
 
-    /** A formula as quoted in a message: long ones are cut, so a hostile one cannot flood the report. */
-    private static String shown(String text) {
-        return text.length() <= 80 ? text : text.substring(0, 80) + "… (" + text.length() + " characters)";
-    }
 
     public String text() {
         return text;

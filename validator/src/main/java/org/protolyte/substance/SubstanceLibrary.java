@@ -17,6 +17,7 @@ import org.protolyte.chemistry.SaltSolubility;
 import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.Species;
 import org.protolyte.document.Suggestions;
+import org.protolyte.text.Excerpt;
 
 /**
  * The substances a recipe may name, with the acid–base systems, strong ions and neutral solutes they
@@ -92,7 +93,7 @@ public final class SubstanceLibrary {
         }
         List<String> forms = ambiguous.get(key);
         if (forms != null) {
-            throw new LookupException("'" + name + "' names several forms; name the one that is weighed: "
+            throw new LookupException("'" + Excerpt.of(name) + "' names several forms; name the one that is weighed: "
                     + String.join(", ", forms), forms);
         }
         List<String> near = nearestNames(name);
@@ -101,7 +102,7 @@ public final class SubstanceLibrary {
                 : "";
         String hint = near.isEmpty() ? "; add it to a user library (--substances FILE)" + unsought
                 : "; nearest library names: " + String.join(", ", near);
-        throw new LookupException("unknown substance '" + name + "'" + hint, near);
+        throw new LookupException("unknown substance '" + Excerpt.of(name) + "'" + hint, near);
     }
 
     /** Canonical names whose name or synonym is closest to the query, or contains it. */

@@ -1,5 +1,7 @@
 package org.protolyte.units;
 
+import org.protolyte.text.Excerpt;
+
 /** A number with its unit, as written in a document. Conversion to base happens once, at the boundary. */
 public record Quantity(double value, Unit unit) {
 
@@ -60,7 +62,7 @@ public record Quantity(double value, Unit unit) {
             unit++;
         }
         if (mantissa == 0 || unit == end) {
-            throw new UnitException("'" + shown(text) + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"");
+            throw new UnitException("'" + Excerpt.of(text) + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"");
         }
         return of(Double.parseDouble(text.substring(start, i)), text.substring(unit, end));
     }
@@ -79,18 +81,9 @@ public record Quantity(double value, Unit unit) {
         return c == ' ' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r';
     }
 
-    /** The text as a message quotes it: a long one is cut, so that one bad value cannot flood the report. */
-    private static String shown(String text) {
-        if (text.length() <= 60) {
-            return text;
-        }
-        int cut = Character.isHighSurrogate(text.charAt(39)) ? 39 : 40;
-        return text.substring(0, cut) + "… (" + text.length() + " characters)";
-    }
-
     public static Quantity of(double value, String code) {
         Unit u = Unit.ofCode(code).orElseThrow(() -> new UnitException(
-                "unknown unit '" + shown(code) + "'; accepted: " + Unit.codesOf(java.util.List.of(Unit.values()))));
+                "unknown unit '" + Excerpt.of(code) + "'; accepted: " + Unit.codesOf(java.util.List.of(Unit.values()))));
         return new Quantity(value, u);
     }
 

@@ -627,6 +627,8 @@ class HostileCorpusTest {
     private static final Map<String, Function<Path, String>> GENERATORS = Map.ofEntries(
             Map.entry("unit-200k-spaces", w -> tris(w, "/components/0/amount", jsonString("1 g" + " ".repeat(200_000) + "x"))),
             Map.entry("unit-200k-digits", w -> tris(w, "/components/0/amount", jsonString("1" + "0".repeat(200_000) + " g"))),
+            Map.entry("unit-100k-digits-two-line-ends", w -> tris(w, "/components/0/amount", jsonString("1".repeat(100_000) + "\\n\\n"))),
+            Map.entry("temperature-100k-digits-two-line-ends", w -> tris(w, "/conditions/0/temperature", jsonString("1".repeat(100_000) + "\\n\\n"))),
             Map.entry("unit-200k-leading-spaces", w -> tris(w, "/components/0/amount", jsonString(" ".repeat(200_000) + "1 gx"))),
             Map.entry("temperature-200k-spaces", w -> tris(w, "/conditions/0/temperature", jsonString("22" + " ".repeat(200_000) + "Celx"))),
             Map.entry("name-4mib", w -> tris(w, "/components/0/substance", jsonString("tromethamin" + "e".repeat(4 << 20)))),
