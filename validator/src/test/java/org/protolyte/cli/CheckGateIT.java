@@ -9,10 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
-import java.util.concurrent.TimeUnit;
 
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -29,49 +26,27 @@ import tools.jackson.databind.json.JsonMapper;
  */
 class CheckGateIT {
 
-    private static final Path ROOT = Path.of(System.getProperty("protolyte.projectRoot", ".."));
-    private static final Path SAMPLES = ROOT.resolve("sample-formulations");
+    private static final Path SAMPLES = PackagedJar.ROOT.resolve("sample-formulations");
     private static final String FAILING = "parenteral-citrate-buffer-off-target.json";
     private static final List<String> FORMULATIONS = List.of("broken.json", "laboratory-acetate-buffer-molal.json",
             FAILING);
     private static final String NOT_A_DOCUMENT = "site-substances.json";
 
-    record Run(int exitCode, String out, String err) {
-    }
-
     @TempDir
     static Path work;
-    private static Run sarifRun;
-    private static Run jsonRun;
+    private static PackagedJar.Run sarifRun;
+    private static PackagedJar.Run jsonRun;
 
     @BeforeAll
     static void runTheJarOverAMixedFolder() throws IOException, InterruptedException {
-        Path jar = Path.of(System.getProperty("protolyte.jar", ROOT.resolve("validator/target/protolyte.jar").toString()));
-        Assumptions.assumeTrue(Files.isRegularFile(jar), "no packaged jar at " + jar + "; run mvn verify");
+        PackagedJar jar = PackagedJar.find();
         Path mixed = Files.createDirectory(work.resolve("mixed"));
         Files.copy(SAMPLES.resolve("laboratory-acetate-buffer-molal.json"), mixed.resolve(FORMULATIONS.get(1)));
         Files.copy(SAMPLES.resolve(FAILING), mixed.resolve(FAILING));
         Files.copy(TestDocs.resource("malformed.json"), mixed.resolve("broken.json"));
         Files.copy(SAMPLES.resolve("site-library").resolve(NOT_A_DOCUMENT), mixed.resolve(NOT_A_DOCUMENT));
-        sarifRun = protolyte(jar, "check", "--format", "sarif", "-o", "out.sarif", "mixed");
-        jsonRun = protolyte(jar, "check", "--format", "json", "-o", "out.json", "mixed");
-    }
-
-    /** {@code java -jar protolyte.jar ARGS} with the running JVM's java, in the work folder. */
-    private static Run protolyte(Path jar, String... args) throws IOException, InterruptedException {
-        boolean windows = System.getProperty("os.name", "").toLowerCase(Locale.ROOT).startsWith("windows");
-        Path java = Path.of(System.getProperty("java.home"), "bin", windows ? "java.exe" : "java");
-        List<String> command = new ArrayList<>(List.of(java.toString(), "-jar", jar.toAbsolutePath().toString()));
-        command.addAll(List.of(args));
-        Path out = Files.createTempFile(work, "stdout", ".txt");
-        Path err = Files.createTempFile(work, "stderr", ".txt");
-        Process p = new ProcessBuilder(command).directory(work.toFile())
-                .redirectOutput(out.toFile()).redirectError(err.toFile()).start();
-        if (!p.waitFor(120, TimeUnit.SECONDS)) {
-            p.destroyForcibly();
-            throw new AssertionError("protolyte did not finish: " + command);
-        }
-        return new Run(p.exitValue(), Files.readString(out), Files.readString(err));
+        sarifRun = jar.run(work, 120, List.of(), "check", "--format", "sarif", "-o", "out.sarif", "mixed");
+        jsonRun = jar.run(work, 120, List.of(), "check", "--format", "json", "-o", "out.json", "mixed");
     }
 
     private static JsonNode read(String name) throws IOException {
