@@ -29,6 +29,11 @@ public final class SubstancesCommand implements Callable<Integer> {
     @Parameters(arity = "0..1", paramLabel = "QUERY")
     String query;
 
+    @CommandLine.Option(names = "--provenance", description = "List every constant and handling entry with its "
+            + "source and whether it was read in a publication or recalled (its source says 'from memory'); QUERY then "
+            + "selects by the name of the system, complex, phase or substance.")
+    boolean provenance;
+
     @Mixin
     Setup setup;
 
@@ -45,6 +50,9 @@ public final class SubstancesCommand implements Callable<Integer> {
             return Setup.usage(spec.commandLine().getErr(), e);
         }
         String key = query == null ? "" : SubstanceLibrary.normalise(query);
+        if (provenance) {
+            return provenance(out, library, key);
+        }
         List<Substance> hits = library.substances().stream().filter(s -> key.isEmpty()
                 || SubstanceLibrary.normalise(s.name()).contains(key)
                 || s.synonyms().stream().anyMatch(x -> SubstanceLibrary.normalise(x).contains(key))).toList();
@@ -90,6 +98,105 @@ public final class SubstancesCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    /** A value's standing: read in the publication its source names, or recalled and to be checked against it. */
+    private static String standing(String source) {
+        return source.isBlank() ? "no source" : source.contains("from memory") ? "recalled" : "read";
+    }
+
+    private static boolean selected(String key, String name) {
+        return key.isEmpty() || SubstanceLibrary.normalise(name).contains(key);
+    }
+
+    /**
+     * {@code substances --provenance}: each dissociation step, complex, solid phase, solubility table and handling
+     * entry with its source and standing, each section headed by how many of its values are recalled.
+     */
+    private int provenance(PrintWriter out, SubstanceLibrary library, String key) {
+        List<String> lines = new java.util.ArrayList<>();
+        int[] count = new int[3];      // entries in the section, of them not read, entries in all sections
+        line(out, "%s", "Provenance of the library's values: 'read' where the source names the publication the value "
+                + "was read in, 'recalled' where the source says 'from memory', wholly or in part (check it against "
+                + "the paper before relying on it).");
+        for (AcidBaseSystem system : library.systems()) {
+            if (!selected(key, system.name())) {
+                continue;
+            }
+            List<String> sources = library.stepSources(system.name());
+            for (int k = 0; k < system.steps().size(); k++) {
+                DissociationStep st = system.steps().get(k);
+                String source = k < sources.size() ? sources.get(k) : "";
+                entry(lines, count, source, String.format(Locale.ROOT, "%s step %d, %s ⇌ %s: pKa %s ± %s, ΔH° %s kJ/mol, "
+                        + "ΔCp° %s J/(K·mol)", system.name(), k + 1, system.forms().get(k).name(),
+                        system.forms().get(k + 1).name(), asWritten(st.pKa25()), asWritten(st.uncertainty()),
+                        asWritten(st.deltaH() / 1000), asWritten(st.deltaCp())));
+            }
+        }
+        section(out, "dissociation steps", lines, count);
+        for (var complex : library.complexes()) {
+            if (selected(key, complex.name())) {
+                entry(lines, count, library.complexSource(complex.name()), String.format(Locale.ROOT,
+                        "%s: log K %s ± %s at 25 °C", complex.name(), asWritten(complex.formation().log10K25()),
+                        asWritten(complex.formation().uncertainty())));
+            }
+        }
+        section(out, "complexes", lines, count);
+        for (var phase : library.phases()) {
+            if (selected(key, phase.name())) {
+                entry(lines, count, library.phaseSource(phase.name()), String.format(Locale.ROOT,
+                        "%s: log Ksp %s ± %s at 25 °C", phase.name(), asWritten(phase.solubility().log10K25()),
+                        asWritten(phase.solubility().uncertainty())));
+            }
+        }
+        section(out, "solid phases", lines, count);
+        for (var table : library.solubilities()) {
+            if (selected(key, table.name())) {
+                entry(lines, count, table.source(), String.format(Locale.ROOT, "%s: solubility at %d temperatures, "
+                        + "%s to %s °C", table.name(), table.celsius().length, plain(table.celsius()[0]),
+                        plain(table.celsius()[table.celsius().length - 1])));
+            }
+        }
+        section(out, "solubility tables", lines, count);
+        for (Substance s : library.substances()) {
+            if (!selected(key, s.name())) {
+                continue;
+            }
+            s.handling().hazards().forEach(h -> entry(lines, count, h.source(), s.name() + ": hazard "
+                    + h.classification()));
+            s.handling().lightSensitivity().ifPresent(l -> entry(lines, count, l.source(), s.name() + ": light"));
+            s.handling().solubility().ifPresent(l -> entry(lines, count, l.source(), s.name() + ": solubility"));
+            s.handling().hygroscopy().ifPresent(h -> entry(lines, count, h.source(), s.name() + ": " + h.behaviour()));
+        }
+        section(out, "handling entries", lines, count);
+        out.flush();
+        if (count[2] == 0) {
+            spec.commandLine().getErr().println("protolyte: no system, complex, phase or substance matches '"
+                    + Printable.text(query) + "'");
+            return 2;
+        }
+        return 0;
+    }
+
+    private static void entry(List<String> lines, int[] count, String source, String what) {
+        String standing = standing(source);
+        count[0]++;
+        count[1] += standing.equals("read") ? 0 : 1;
+        lines.add("  " + what + "  [" + standing + "]");
+        lines.add("      " + (source.isBlank() ? "(none given)" : source));
+    }
+
+    /** Prints a section, if it has entries: its count of values not read, then its lines; then starts the next. */
+    private static void section(PrintWriter out, String name, List<String> lines, int[] count) {
+        if (count[0] > 0) {
+            line(out, "%s", "");
+            line(out, "%s: %d of %d not read", name, count[1], count[0]);
+            lines.forEach(l -> line(out, "%s", l));
+        }
+        lines.clear();
+        count[2] += count[0];
+        count[0] = 0;
+        count[1] = 0;
     }
 
     /** One line of the listing: the library's text escaped, so that no entry can forge or repaint a line. */

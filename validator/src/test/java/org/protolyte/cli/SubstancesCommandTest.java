@@ -44,4 +44,45 @@ class SubstancesCommandTest {
         String[] r = run("substances");
         assertTrue(r[1].contains("sucrose") && r[1].contains("Tris hydrochloride") && r[1].contains("boric acid"));
     }
+
+    /** A reviewer sees which values were read and which recalled, with the source of each. */
+    @Test
+    void provenanceTellsReadFromRecalledWithTheSource() {
+        String[] r = run("substances", "--provenance", "phosphate");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].contains("phosphate step 1, H3PO4 ⇌ H2PO4-: pKa 2.148") && r[1].contains("[read]\n      Bates"),
+                r[1]);
+        assertTrue(r[1].contains("phosphate step 3, HPO4-2 ⇌ PO4-3") && r[1].contains("[recalled]\n      from memory"),
+                r[1]);
+    }
+
+    /** The heading's count is the number of steps whose source says "from memory", counted here from the file. */
+    @Test
+    void provenanceCountsTheRecalledStepsOfTheWholeLibrary() throws Exception {
+        tools.jackson.databind.JsonNode library;
+        try (var in = org.protolyte.substance.LibraryLoader.class.getResourceAsStream(
+                org.protolyte.substance.LibraryLoader.SHIPPED)) {
+            library = tools.jackson.databind.json.JsonMapper.builder().build().readTree(in);
+        }
+        int steps = 0;
+        int recalled = 0;
+        for (var system : library.path("systems")) {
+            for (var step : system.path("steps")) {
+                steps++;
+                recalled += step.path("source").asString().contains("from memory") ? 1 : 0;
+            }
+        }
+        String[] r = run("substances", "--provenance");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(steps > 100 && recalled > 0, steps + " steps, " + recalled + " recalled");
+        assertTrue(r[1].contains("dissociation steps: " + recalled + " of " + steps + " not read"), r[1]);
+        assertTrue(r[1].contains("\ncomplexes: ") && r[1].contains("\nhandling entries: "), r[1]);
+    }
+
+    @Test
+    void provenanceOfNothingIsAUsageError() {
+        String[] r = run("substances", "--provenance", "unobtainium");
+        assertEquals("2", r[0]);
+        assertTrue(r[2].contains("no system, complex, phase or substance matches 'unobtainium'"), r[2]);
+    }
 }
