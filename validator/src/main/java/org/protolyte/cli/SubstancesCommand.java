@@ -53,9 +53,8 @@ public final class SubstancesCommand implements Callable<Integer> {
         if (provenance) {
             return provenance(out, library, key);
         }
-        List<Substance> hits = library.substances().stream().filter(s -> key.isEmpty()
-                || SubstanceLibrary.normalise(s.name()).contains(key)
-                || s.synonyms().stream().anyMatch(x -> SubstanceLibrary.normalise(x).contains(key))).toList();
+        List<Substance> hits = library.substances().stream().filter(x -> rank(x, key) < NO_MATCH)
+                .sorted(java.util.Comparator.comparingInt(x -> rank(x, key))).toList();   // stable: library order within a rank
         if (hits.isEmpty()) {
             spec.commandLine().getErr().println("protolyte: no substance matches '" + Printable.text(query) + "'");
             return 2;
@@ -98,6 +97,40 @@ public final class SubstancesCommand implements Callable<Integer> {
         }
         out.flush();
         return 0;
+    }
+
+    private static final int NO_MATCH = 4;
+
+    /**
+     * How well a substance answers a query, best first: its name or a synonym is the query; begins with it as whole
+     * words ("Tris hydrochloride"); its name contains it ("trisodium citrate"); a synonym does.
+     */
+    private static int rank(Substance s, String key) {
+        if (key.isEmpty()) {
+            return 0;
+        }
+        List<String> names = new java.util.ArrayList<>(List.of(s.name()));
+        names.addAll(s.synonyms());
+        if (names.stream().anyMatch(n -> SubstanceLibrary.normalise(n).equals(key))) {
+            return 0;
+        } else if (names.stream().anyMatch(n -> beginsWithWords(n, key))) {
+            return 1;
+        } else if (SubstanceLibrary.normalise(s.name()).contains(key)) {
+            return 2;
+        }
+        return names.stream().anyMatch(n -> SubstanceLibrary.normalise(n).contains(key)) ? 3 : NO_MATCH;
+    }
+
+    /** Whether the first words of {@code name}, run together as {@link SubstanceLibrary#normalise} does, are the key. */
+    private static boolean beginsWithWords(String name, String key) {
+        StringBuilder words = new StringBuilder();
+        for (String w : name.split("[^\\p{L}\\p{N}]+")) {
+            words.append(SubstanceLibrary.normalise(w));
+            if (words.length() >= key.length()) {
+                return words.toString().equals(key);
+            }
+        }
+        return false;
     }
 
     /** A value's standing: read in the publication its source names, or recalled and to be checked against it. */

@@ -85,4 +85,14 @@ class SubstancesCommandTest {
         assertEquals("2", r[0]);
         assertTrue(r[2].contains("no system, complex, phase or substance matches 'unobtainium'"), r[2]);
     }
+
+    /** An exact name comes before names that merely contain the query (issue 15: "Tris" is not trisodium citrate). */
+    @Test
+    void anExactNameIsListedFirst() {
+        String[] r = run("substances", "Tris");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].startsWith("Tris\n"), r[1].substring(0, Math.min(200, r[1].length())));
+        assertTrue(r[1].indexOf("\nTris hydrochloride\n") < r[1].indexOf("\ntrisodium citrate"), "a name that starts "
+                + "with the query comes before one that only contains it");
+    }
 }
