@@ -72,9 +72,9 @@ public final class BatchAnalyzer {
         List<Caveat> caveats = new ArrayList<>();
         Plan plan = plan(r, master, made, false);
         Predicted[] recorded = predict(r, master, made, plan, 1);
-        Optional<String> noQs = plan.titrantStep != Integer.MAX_VALUE && plan.observations.size() > plan.measured.size()
-                ? recorded[recorded.length - 1].unpredicted() : Optional.empty();
-        if (noQs.isPresent() && plan.goal.isPresent()) {
+        // a goal means a q.s.: the titrant volume is the plan's last observation
+        Optional<String> noQs = plan.goal.isPresent() ? recorded[recorded.length - 1].unpredicted() : Optional.empty();
+        if (noQs.isPresent()) {
             // the reading the q.s. aimed at is still a result: judge it against the pH the recorded additions give
             plan = plan(r, master, made, true);
             recorded = predict(r, master, made, plan, 1);
@@ -147,8 +147,9 @@ public final class BatchAnalyzer {
 
     /**
      * Moles of the named form in a weighed mass. As is, with an assay on the dried substance:
-     * n = m (1 − w) A / M_anhydrous, w the recorded water (a hydrate's nominal water where none is recorded); with an
-     * assay as is: n = m A / M; weighed at 100 %: n = m / M; weighed as anhydrous: n = m / M_anhydrous.
+     * n = m (1 − w) A / M_anhydrous, w the recorded water (a hydrate's nominal water where none is recorded, which with
+     * no assay either is n = m / M); with an assay as is: n = m A / M; weighed at 100 %: n = m / M; weighed as
+     * anhydrous: n = m / M_anhydrous.
      */
     static double corrected(BatchRecord.Addition a, Substance s) {
         double m = a.amount().base();
@@ -158,9 +159,6 @@ public final class BatchAnalyzer {
             case PURE -> m / molar;
             case ANHYDROUS -> m / anhydrous;
             case AS_IS -> {
-                if (a.assay().isEmpty() && a.water().isEmpty()) {
-                    yield m / molar;
-                }
                 double assay = a.assay().orElse(1);
                 if (a.assayAsIs()) {
                     yield m * assay / molar;
@@ -411,11 +409,8 @@ public final class BatchAnalyzer {
      * master's titrant line at the true strength (recorded × factor), in volume of that stock.
      */
     private Predicted titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
-        Optional<Made> stocked = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst();
-        if (stocked.isEmpty()) {
-            return Predicted.none("no titrant from a stock is recorded");
-        }
-        Made titrant = stocked.get();
+        // called for a q.s. only, which every scenario keeps (a stocked titrant is neither weighed nor left out)
+        Made titrant = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElseThrow();
         int goalStep = plan.goal.map(BatchRecord.Measurement::step).orElse(Integer.MAX_VALUE);
         List<Made> before = made.stream().filter(x -> !x.titrant() && x.recorded().step() <= goalStep).toList();
         double goalPH;

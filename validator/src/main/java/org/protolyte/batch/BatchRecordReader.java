@@ -86,8 +86,6 @@ public final class BatchRecordReader {
                 problems.add(doc.problem("/batchSize", "the master is on a " + (master.basis().finalVolume()
                         ? "finalVolume" : "waterMass") + " basis, so the batch size must be a "
                         + (master.basis().finalVolume() ? "volume" : "water mass")));
-            } else if (!(size.base() > 0)) {
-                problems.add(doc.problem("/batchSize", "the batch size must be greater than zero"));
             } else {
                 batchSize = volume ? size.base() : size.base() / 1000;     // litres, or kg of water
             }
@@ -202,20 +200,13 @@ public final class BatchRecordReader {
         if (n.has("stock")) {
             Quantity c = quantity(doc, n.get("stock").get("concentration"), p + "/stock/concentration", problems,
                     Dimension.AMOUNT_CONCENTRATION);
-            if (c != null && !(c.base() > 0)) {
-                problems.add(doc.problem(p + "/stock/concentration", "a stock concentration must be greater than "
-                        + "zero, not " + c));
-            } else if (c != null) {
+            if (c != null) {        // greater than zero, as every amount concentration (Plausible)
                 molarity = OptionalDouble.of(c.base());
             }
         }
         if (amount != null && amount.dimension() == Dimension.VOLUME && molarity.isEmpty()) {
             problems.add(doc.problem(p + "/amount", "a volume needs the stock it was taken from (\"stock\": "
                     + "{\"concentration\": ...})"));
-            return null;
-        }
-        if (amount != null && !(amount.value() > 0)) {
-            problems.add(doc.problem(p + "/amount", "an addition must be greater than zero, not " + amount));
             return null;
         }
         OptionalDouble assay = fraction(doc, n, "assay", ASSAY, p, problems);
