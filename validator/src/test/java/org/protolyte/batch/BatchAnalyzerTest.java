@@ -65,6 +65,18 @@ class BatchAnalyzerTest {
                 + " \"amount\": \"26.8 g\", \"assay\": \"99.5 %\", \"waterContent\": \"47.0 %\"}";
     }
 
+    /**
+     * The same batch as an invented master of its own: the titrant line first, no conditions (so the engine's implicit
+     * one), 1 L.
+     */
+    private static final String TITRANT_FIRST = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\":"
+            + " \"TST-QS\", \"revision\": \"A\", \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": ["
+            + "{\"substance\": \"sodium hydroxide\", \"stock\": {\"concentration\": \"1 mol/L\"},"
+            + " \"adjustTo\": {\"pH\": 7.2, \"temperature\": \"20 Cel\"}},"
+            + " {\"substance\": \"sodium chloride\", \"amount\": \"7.0 g\"},"
+            + " {\"substance\": \"sodium dihydrogen phosphate dihydrate\", \"amount\": \"2.34 g\"},"
+            + " {\"substance\": \"disodium hydrogen phosphate heptahydrate\", \"amount\": \"2.68 g\"}]}";
+
     private static String sample(String name) {
         try {
             return Files.readString(Path.of(System.getProperty("protolyte.projectRoot", ".."), "sample-formulations",
@@ -160,6 +172,31 @@ class BatchAnalyzerTest {
         assertEquals(0.60 / ACETIC_ACID * 2, acid.expectedMoles(), 0.60 / ACETIC_ACID * 2 * 1e-4);
         assertEquals(0, acid.deviation(), 1e-12);
         assertEquals(2, b.additions().size());
+    }
+
+    /** A half-litre master made as 2 L: four times each amount. */
+    @Test
+    void theScaleIsTheBatchOverTheMastersBasis() {
+        String half = ACETATE.replace("\"1 L\"", "\"500 mL\"").replace("0.82 g", "0.41 g").replace("0.60 g", "0.30 g");
+        BatchAnalysis b = analyse(record(half, "2 L", weighed(1, "sodium acetate anhydrous", "1.64 g") + ", "
+                + weighed(2, "acetic acid", "1.20 g")));
+        assertEquals(4, b.scale(), 1e-12);
+        assertEquals(0.41 / SODIUM_ACETATE * 4, b.additions().get(0).expectedMoles(), 0.41 / SODIUM_ACETATE * 4 * 1e-4);
+        assertEquals(0, b.additions().get(1).deviation(), 1e-9);
+    }
+
+    /** The titrant line takes only the titrant, wherever it stands in the master. */
+    @Test
+    void aTitrantLineFirstInTheMasterTakesOnlyTheTitrant() {
+        BatchAnalysis b = analyse(record(TITRANT_FIRST, "10 L", PBS_SALTS + ", " + naoh(5, "73.5 mL", "1 mol/L"),
+                ph(5, 7.20, 20)));
+        assertEquals(List.of(BatchAnalysis.Match.TITRANT, BatchAnalysis.Match.SAME, BatchAnalysis.Match.SAME,
+                BatchAnalysis.Match.SAME), b.additions().stream().map(BatchAnalysis.AdditionCheck::match).toList());
+        assertEquals(0.0735, b.additions().get(0).actualMoles(), 1e-9);
+        assertEquals(7.0 / SODIUM_CHLORIDE * 10, b.additions().get(1).expectedMoles(), 7.0 / SODIUM_CHLORIDE * 10 * 1e-4);
+        // the batch as made is shown at the conditions the master states, and this one states none (its implicit
+        // default is not a condition of the master's to show the batch at)
+        assertEquals(List.of(), b.asMade().orElseThrow().conditions());
     }
 
     @Test
@@ -387,6 +424,15 @@ class BatchAnalyzerTest {
         assertEquals(v, both.predicted(), v * 1e-6);
     }
 
+    /** A weighing made at the step of the titrant and its reading is in the solution the q.s. is computed for. */
+    @Test
+    void aWeighingAtTheStepOfTheReadingCountsForTheQs() {
+        double v = observation(pbs(naoh(5, "73.5 mL", "1 mol/L"), ph(5, 7.20, 20)), "/additions/3/amount").predicted();
+        BatchAnalysis late = analyse(record(PBS, "10 L", PBS_SALTS.replace("\"step\": 3", "\"step\": 5") + ", "
+                + naoh(5, "73.5 mL", "1 mol/L"), ph(5, 7.20, 20)));
+        assertEquals(v, observation(late, "/additions/3/amount").predicted(), v * 1e-6);
+    }
+
     /** Without a reading after the titrant, the q.s. aims at the master's own adjustTo: pH 7.2 at 20 °C. */
     @Test
     void withoutAReadingAfterTheTitrantTheQsAimsAtTheMastersPh() {
@@ -397,6 +443,14 @@ class BatchAnalyzerTest {
         BatchAnalysis toTarget = analyse(record(PBS.replace("\"adjustTo\": { \"pH\": 7.2,", "\"adjustTo\": {"), "10 L",
                 PBS_SALTS + ", " + naoh(5, "73.5 mL", "1 mol/L"), osmolality(6, 283)));
         assertEquals(v, observation(toTarget, "/additions/3/amount").predicted(), v * 1e-6);
+        // and with neither, there is nothing to aim at: the volume is not predicted, and says why
+        String aimless = PBS.replace("\"adjustTo\": { \"pH\": 7.2,", "\"adjustTo\": {")
+                .replaceAll("\"targets\":\\s*\\{[^{}]*\\{[^{}]*\\}\\s*\\},", "");
+        BatchAnalysis.Observation none = observation(analyse(record(aimless, "10 L", PBS_SALTS + ", "
+                + naoh(5, "73.5 mL", "1 mol/L"), osmolality(6, 283))), "/additions/3/amount");
+        assertTrue(Double.isNaN(none.predicted()));
+        assertEquals(Optional.of("no pH was read after the titrant and the master states no pH to adjust to"),
+                none.unpredicted());
     }
 
     /**
@@ -417,6 +471,12 @@ class BatchAnalyzerTest {
             assertEquals(v / f, c.predicted()[1], v / f * 1e-6, cause);
             assertEquals(recorded.predicted()[0], c.predicted()[0], 1e-9, cause);
         }
+        // the batch as a stock of twice the strength would have made it: its osmolality is the further measurement
+        BatchAnalysis.Candidate twice = candidate(b, "the sodium hydroxide stock at 2.00 mol/L, not the 1.00 mol/L "
+                + "recorded");
+        BatchAnalysis strong = pbs(naoh(5, "49.0 mL", "2 mol/L"), ph(4, 6.68, 20), ph(5, 7.20, 20));
+        assertEquals(further(strong.candidates().get(0), "osmolality of the batch"), further(twice,
+                "osmolality of the batch"), 1e-9);
         assertTrue(b.candidates().stream().noneMatch(c -> c.cause().startsWith("sodium hydroxide weighed")),
                 "a titrant's amount is the meter's");
     }

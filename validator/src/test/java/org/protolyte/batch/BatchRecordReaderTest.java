@@ -134,6 +134,7 @@ class BatchRecordReaderTest {
     void aBatchSizeOfNothingIsRefused(String size) {
         Problem p = refused(record(embedded(MASTER), "\"" + size + "\"", ADDITION, ""));
         assertEquals("/batchSize", p.pointer());
+        assertTrue(p.message().contains("must be greater than zero"), p::message);
     }
 
     @Test
