@@ -232,6 +232,11 @@ class BatchAnalyzerTest {
         assertEquals("sodium chloride", extra.used().orElseThrow().name());
         assertEquals(0.50 / SODIUM_CHLORIDE, extra.actualMoles(), 0.50 / SODIUM_CHLORIDE * 1e-4);
         assertTrue(Double.isNaN(extra.deviation()));
+        // a line that has other forms is missing, not replaced, where only an unrelated substance is left
+        BatchAnalysis unrelated = analyse(record(ACETATE, "2 L", weighed(1, "sodium chloride", "0.50 g") + ", "
+                + weighed(2, "acetic acid", "1.20 g")));
+        assertEquals(List.of(BatchAnalysis.Match.MISSING, BatchAnalysis.Match.SAME, BatchAnalysis.Match.EXTRA),
+                unrelated.additions().stream().map(BatchAnalysis.AdditionCheck::match).toList());
     }
 
     @Test
@@ -415,6 +420,7 @@ class BatchAnalyzerTest {
         double v = observation(pbs(naoh(5, "73.5 mL", "1 mol/L"), ph(5, 7.20, 20)), "/additions/3/amount").predicted();
         BatchAnalysis.Observation half = observation(pbs(naoh(5, "147 mL", "0.5 mol/L"), ph(5, 7.20, 20)),
                 "/additions/3/amount");
+        assertEquals(147, half.measured(), 1e-9);
         assertEquals(2 * v, half.predicted(), 2 * v * 1e-6);
         assertEquals("mL of sodium hydroxide 0.500 mol/L", half.label());
         BatchAnalysis split = analyse(record(PBS, "10 L", PBS_SALTS + ", " + naoh(5, "50 mL", "1 mol/L") + ", "
@@ -462,6 +468,8 @@ class BatchAnalyzerTest {
         BatchAnalysis b = pbs(naoh(5, "49.0 mL", "1 mol/L"), ph(4, 6.68, 20), ph(5, 7.20, 20));
         BatchAnalysis.Candidate recorded = b.candidates().get(0);
         assertEquals("as recorded", recorded.cause());
+        assertEquals(List.of("osmolality of the batch"), recorded.further().stream().map(BatchAnalysis.Further::label)
+                .toList(), "the pH before the titrant was read");
         double v = recorded.predicted()[1];
         assertEquals(observation(b, "/additions/3/amount").predicted(), v, 1e-9);
         for (double f : new double[] {10, 2, 0.5, 0.1}) {
@@ -479,6 +487,21 @@ class BatchAnalyzerTest {
                 "osmolality of the batch"), 1e-9);
         assertTrue(b.candidates().stream().noneMatch(c -> c.cause().startsWith("sodium hydroxide weighed")),
                 "a titrant's amount is the meter's");
+    }
+
+    /**
+     * A stock at a tenth of a 0.01 mol/L strength would need the 73.5 mmol of NaOH in 73.5 L, more than the 10 L batch:
+     * that mistake cannot be predicted, and says so.
+     */
+    @Test
+    void aMistakenStrengthWhoseVolumeExceedsTheBatchIsNotPredicted() {
+        BatchAnalysis b = pbs(naoh(5, "4900 mL", "0.01 mol/L"), ph(4, 6.68, 20), ph(5, 7.20, 20));
+        BatchAnalysis.Candidate weak = candidate(b, "the sodium hydroxide stock at 0.00100 mol/L, not the 0.0100 mol/L "
+                + "recorded");
+        assertTrue(Double.isNaN(weak.predicted()[1]), () -> Arrays.toString(weak.predicted()));
+        assertTrue(weak.unpredicted().orElseThrow().contains("more than the 10000.0 mL"), weak.unpredicted()::get);
+        assertFalse(Double.isNaN(candidate(b, "the sodium hydroxide stock at 0.0200 mol/L, not the 0.0100 mol/L "
+                + "recorded").predicted()[1]));
     }
 
     /** Without a reading before the titrant, the pH it would have shown is the further measurement. */
@@ -531,6 +554,18 @@ class BatchAnalyzerTest {
         assertEquals(7.1 + shift, warm.min(), 1e-9);
         assertEquals(7.3 + shift, warm.max(), 1e-9);
         assertEquals(Optional.empty(), warm.unjudged());
+    }
+
+    /** Beyond the temperatures the constants hold for, the target cannot be moved: the reading is not judged. */
+    @Test
+    void aReadingWhereTheDriftCannotBePredictedIsNotJudgedAndSaysWhy() {
+        BatchAnalysis b = pbs(naoh(5, "73.5 mL", "1 mol/L"), ph(5, 7.20, 20), ph(6, 7.0, 99));
+        BatchAnalysis.SpecifiedPh hot = b.specifiedPh().get(1);
+        assertEquals("/measurements/1", hot.pointer());
+        assertTrue(Double.isNaN(hot.shift()) && Double.isNaN(hot.min()) && Double.isNaN(hot.max()));
+        String why = hot.unjudged().orElseThrow();
+        assertTrue(why.startsWith("the pH target (at 20.0 °C) cannot be moved to the reading's temperature: "), why);
+        assertTrue(why.endsWith(observation(b, "/measurements/1").unpredicted().orElseThrow()), why);
     }
 
     @Test

@@ -295,6 +295,16 @@ class BatchRecordReaderTest {
         assertTrue(p.location().isPresent(), "the place in the record's own text");
     }
 
+    /** An embedded master keeps the places of its text in the record, so its own findings point into the record. */
+    @Test
+    void anEmbeddedMasterKeepsItsPlacesInTheRecord() {
+        String json = record(embedded(MASTER), "\"2 L\"", ADDITION, "");
+        BatchRecord r = read(json);
+        assertEquals(doc(json).locate("/master/formulation/components/0/amount"),
+                r.master().document().locate("/components/0/amount"));
+        assertTrue(r.master().document().locate("/components/0/amount").isPresent());
+    }
+
     @Test
     void aRecordGivenAsBytesCannotNameAMasterByPath() {
         Problem p = refused(record("{\"path\": \"master.json\"}", "\"2 L\"", ADDITION, ""));
