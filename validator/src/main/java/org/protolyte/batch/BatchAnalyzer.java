@@ -57,10 +57,15 @@ public final class BatchAnalyzer {
         this.analyzer = analyzer;
     }
 
-    /** An addition as the chemistry sees it: the form, the moles in the batch, and a titrant's stock. */
+    /** An addition as the chemistry sees it: the form, the moles in the batch, and a titrant's stock (NaN: none). */
     record Made(BatchRecord.Addition recorded, Substance substance, double moles, boolean titrant, double molarity) {
         Made with(Substance other, double newMoles) {
             return new Made(recorded, other, newMoles, titrant, molarity);
+        }
+
+        /** A titrant taken from a stated stock: the q.s., whose volume is what is compared. */
+        boolean stocked() {
+            return titrant && molarity > 0;
         }
     }
 
@@ -70,13 +75,13 @@ public final class BatchAnalyzer {
         List<Made> made = made(r, master);
         List<BatchAnalysis.AdditionCheck> checks = compare(master, made, scale);
         List<Caveat> caveats = new ArrayList<>();
-        Plan plan = plan(r, master, made, false);
+        Plan plan = plan(r, made, false);
         Predicted[] recorded = predict(r, master, made, plan, 1);
-        Optional<String> noQs = plan.titrantStep != Integer.MAX_VALUE && plan.observations.size() > plan.measured.size()
-                ? recorded[recorded.length - 1].unpredicted() : Optional.empty();
-        if (noQs.isPresent() && plan.goal.isPresent()) {
+        // a goal means a q.s.: the titrant volume is the plan's last observation
+        Optional<String> noQs = plan.goal.isPresent() ? recorded[recorded.length - 1].unpredicted() : Optional.empty();
+        if (noQs.isPresent()) {
             // the reading the q.s. aimed at is still a result: judge it against the pH the recorded additions give
-            plan = plan(r, master, made, true);
+            plan = plan(r, made, true);
             recorded = predict(r, master, made, plan, 1);
             caveats.add(Caveat.warning("batch-titrant-not-compared", "the titrant volume is not compared: "
                     + noQs.get() + "; the pH read at step " + plan.goal.get().step() + " (" + plan.goal.get().pointer()
@@ -147,8 +152,9 @@ public final class BatchAnalyzer {
 
     /**
      * Moles of the named form in a weighed mass. As is, with an assay on the dried substance:
-     * n = m (1 − w) A / M_anhydrous, w the recorded water (a hydrate's nominal water where none is recorded); with an
-     * assay as is: n = m A / M; weighed at 100 %: n = m / M; weighed as anhydrous: n = m / M_anhydrous.
+     * n = m (1 − w) A / M_anhydrous, w the recorded water (a hydrate's nominal water where none is recorded, which with
+     * no assay either is n = m / M); with an assay as is: n = m A / M; weighed at 100 %: n = m / M; weighed as
+     * anhydrous: n = m / M_anhydrous.
      */
     static double corrected(BatchRecord.Addition a, Substance s) {
         double m = a.amount().base();
@@ -158,9 +164,6 @@ public final class BatchAnalyzer {
             case PURE -> m / molar;
             case ANHYDROUS -> m / anhydrous;
             case AS_IS -> {
-                if (a.assay().isEmpty() && a.water().isEmpty()) {
-                    yield m / molar;
-                }
                 double assay = a.assay().orElse(1);
                 if (a.assayAsIs()) {
                     yield m * assay / molar;
@@ -220,11 +223,11 @@ public final class BatchAnalyzer {
      * {@code forward}: the q.s. cannot be predicted, so the pH it aimed at is compared as an ordinary reading (from the
      * recorded titrant amount) and the titrant volume is not.
      */
-    private Plan plan(BatchRecord r, Recipe master, List<Made> made, boolean forward) {
+    private Plan plan(BatchRecord r, List<Made> made, boolean forward) {
         // a titrant counts as the q.s. only where it was taken from a stated stock (its volume is what is compared)
-        int titrantStep = made.stream().filter(x -> x.titrant() && x.molarity() > 0).mapToInt(x -> x.recorded().step())
+        int titrantStep = made.stream().filter(Made::stocked).mapToInt(x -> x.recorded().step())
                 .min().orElse(Integer.MAX_VALUE);
-        boolean qs = !master.titrants().isEmpty() && titrantStep != Integer.MAX_VALUE;
+        boolean qs = titrantStep != Integer.MAX_VALUE;     // a stocked titrant is one of the master's titrants
         Optional<BatchRecord.Measurement> goal = qs ? r.measurements().stream()
                 .filter(m -> m.kind() == BatchRecord.Measurement.Kind.PH && m.step() >= titrantStep)
                 .min(java.util.Comparator.comparingInt(BatchRecord.Measurement::step)) : Optional.empty();
@@ -244,9 +247,8 @@ public final class BatchAnalyzer {
             measured.add(m);
         }
         if (qs && !forward) {
-            Made first = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().orElseThrow();
-            double ml = made.stream().filter(x -> x.titrant() && x.molarity() > 0
-                            && x.substance().name().equals(first.substance().name()))
+            Made first = made.stream().filter(Made::stocked).findFirst().orElseThrow();
+            double ml = made.stream().filter(x -> x.stocked() && x.substance().name().equals(first.substance().name()))
                     .mapToDouble(x -> x.moles() / x.molarity() * 1000).sum();
             obs.add(new BatchAnalysis.Observation(BatchAnalysis.Observation.Kind.TITRANT,
                     "mL of " + first.substance().name() + " " + molarityText(first.molarity()), ml, Double.NaN,
@@ -287,7 +289,7 @@ public final class BatchAnalyzer {
             without.remove(i);
             out.add(new Scenario(x.substance().name() + " left out" + at, without, 1));
         }
-        made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst().ifPresent(t -> {
+        made.stream().filter(Made::stocked).findFirst().ifPresent(t -> {
             for (double f : new double[] {10, 2, 0.5, 0.1}) {
                 out.add(new Scenario(String.format(Locale.ROOT, "the %s stock at %s, not the %s recorded",
                         t.substance().name(), molarityText(t.molarity() * f), molarityText(t.molarity())), made, f));
@@ -411,11 +413,8 @@ public final class BatchAnalyzer {
      * master's titrant line at the true strength (recorded × factor), in volume of that stock.
      */
     private Predicted titrantVolume(BatchRecord r, Recipe master, List<Made> made, Plan plan, double factor) {
-        Optional<Made> stocked = made.stream().filter(x -> x.titrant() && x.molarity() > 0).findFirst();
-        if (stocked.isEmpty()) {
-            return Predicted.none("no titrant from a stock is recorded");
-        }
-        Made titrant = stocked.get();
+        // called for a q.s. only, which every scenario keeps (a stocked titrant is neither weighed nor left out)
+        Made titrant = made.stream().filter(Made::stocked).findFirst().orElseThrow();
         int goalStep = plan.goal.map(BatchRecord.Measurement::step).orElse(Integer.MAX_VALUE);
         List<Made> before = made.stream().filter(x -> !x.titrant() && x.recorded().step() <= goalStep).toList();
         double goalPH;

@@ -43,6 +43,14 @@ public final class BatchRecordReader {
     static final double MAX_PH = 16;
     /** mOsm/kg: saturated sodium chloride is about 10,000; no medium comes near it (common practice). */
     static final double MAX_OSMOLALITY = 10000;
+    /**
+     * Certificate values, as fractions: an assay above 50 % and up to 102 % (pharmacopoeial assays on the dried
+     * substance run to 100.5–102.0 %, e.g. 98.0–102.0 %), a water content or loss on drying below 90 % (common practice).
+     */
+    static final Plausible ASSAY = new Plausible(0.5, false, 1.02, true, "%", 100,
+            "a certificate's assay lies above 50 % and, on the dried substance, up to 102 % (common practice)");
+    static final Plausible WATER = new Plausible(0, true, 0.9, false, "%", 100,
+            "water content or loss on drying is below 90 % of any material weighed as a solid (common practice)");
 
     private final SchemaCatalog schemas;
     private final FormulationReader formulations;
@@ -78,8 +86,6 @@ public final class BatchRecordReader {
                 problems.add(doc.problem("/batchSize", "the master is on a " + (master.basis().finalVolume()
                         ? "finalVolume" : "waterMass") + " basis, so the batch size must be a "
                         + (master.basis().finalVolume() ? "volume" : "water mass")));
-            } else if (!(size.base() > 0)) {
-                problems.add(doc.problem("/batchSize", "the batch size must be greater than zero"));
             } else {
                 batchSize = volume ? size.base() : size.base() / 1000;     // litres, or kg of water
             }
@@ -194,10 +200,7 @@ public final class BatchRecordReader {
         if (n.has("stock")) {
             Quantity c = quantity(doc, n.get("stock").get("concentration"), p + "/stock/concentration", problems,
                     Dimension.AMOUNT_CONCENTRATION);
-            if (c != null && !(c.base() > 0)) {
-                problems.add(doc.problem(p + "/stock/concentration", "a stock concentration must be greater than "
-                        + "zero, not " + c));
-            } else if (c != null) {
+            if (c != null) {        // greater than zero, as every amount concentration (Plausible)
                 molarity = OptionalDouble.of(c.base());
             }
         }
@@ -206,21 +209,9 @@ public final class BatchRecordReader {
                     + "{\"concentration\": ...})"));
             return null;
         }
-        if (amount != null && !(amount.value() > 0)) {
-            problems.add(doc.problem(p + "/amount", "an addition must be greater than zero, not " + amount));
-            return null;
-        }
-        OptionalDouble assay = fraction(doc, n, "assay", p, problems);
-        OptionalDouble water = n.has("waterContent") ? fraction(doc, n, "waterContent", p, problems)
-                : fraction(doc, n, "lossOnDrying", p, problems);
-        if (assay.isPresent() && !(assay.getAsDouble() > 0.5 && assay.getAsDouble() <= 1.02)) {
-            problems.add(doc.problem(p + "/assay", "an assay of " + assay.getAsDouble() * 100 + " % is not plausible "
-                    + "(50–102 %)"));
-        }
-        if (water.isPresent() && !(water.getAsDouble() >= 0 && water.getAsDouble() < 0.9)) {
-            problems.add(doc.problem(p + "/" + (n.has("waterContent") ? "waterContent" : "lossOnDrying"),
-                    "a water content of " + water.getAsDouble() * 100 + " % is not plausible"));
-        }
+        OptionalDouble assay = fraction(doc, n, "assay", ASSAY, p, problems);
+        OptionalDouble water = fraction(doc, n, n.has("waterContent") ? "waterContent" : "lossOnDrying", WATER, p,
+                problems);
         if (amount == null) {
             return null;
         }
@@ -266,22 +257,30 @@ public final class BatchRecordReader {
                 p);
     }
 
-    private static OptionalDouble fraction(SourceDocument doc, JsonNode n, String field, String p,
+    /** A certificate value, a fraction within its own range (which is narrower or wider than 0–100 %). */
+    private static OptionalDouble fraction(SourceDocument doc, JsonNode n, String field, Plausible range, String p,
                                            List<Problem> problems) {
         if (!n.has(field)) {
             return OptionalDouble.empty();
         }
-        Quantity q = quantity(doc, n.get(field), p + "/" + field, problems, Dimension.FRACTION);
+        Quantity q = quantity(doc, n.get(field), p + "/" + field, problems, Optional.of(range), Dimension.FRACTION);
         return q == null ? OptionalDouble.empty() : OptionalDouble.of(q.base());
     }
 
     private static Quantity quantity(SourceDocument doc, JsonNode n, String pointer, List<Problem> problems,
                                      Dimension... allowed) {
+        return quantity(doc, n, pointer, problems, Optional.empty(), allowed);
+    }
+
+    /** A quantity of an allowed dimension within {@code range}, or else the range of its dimension. */
+    private static Quantity quantity(SourceDocument doc, JsonNode n, String pointer, List<Problem> problems,
+                                     Optional<Plausible> range, Dimension... allowed) {
         try {
             Quantity q = n.isString() ? Quantity.parse(n.asString())
                     : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
             String what = "a " + pointer.substring(pointer.lastIndexOf('/') + 1);
-            Optional<String> outside = Plausible.of(q.require(what, allowed).dimension()).check(what, q);
+            Dimension d = q.require(what, allowed).dimension();
+            Optional<String> outside = range.orElse(Plausible.of(d)).check(what, q);
             if (outside.isPresent()) {
                 problems.add(doc.problem(pointer, outside.get()));
                 return null;
