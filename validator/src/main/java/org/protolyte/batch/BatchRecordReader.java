@@ -138,7 +138,8 @@ public final class BatchRecordReader {
                     + e.getMessage()));
         }
         try {
-            return formulations.read(json.read(target.toString(), bytes));
+            // named as the user reaches it: beside the record as the record was named (the real path is for reading)
+            return formulations.read(json.read(file.orElseThrow().resolveSibling(text).normalize().toString(), bytes));
         } catch (DocumentException e) {
             throw new DocumentException(doc.problem("/master/path", "the master '" + text + "' is not a valid "
                     + "formulation: " + e.problems().get(0)));

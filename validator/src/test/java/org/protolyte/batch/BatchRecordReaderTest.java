@@ -368,6 +368,21 @@ class BatchRecordReaderTest {
         assertEquals("TST-ACE", r.master().id());
     }
 
+    /**
+     * The report names the master as the user reaches it, beside the record as the record was named, not by the real
+     * path the sandbox resolved it to (which is absolute, and through a link another place).
+     */
+    @Test
+    void theMasterIsNamedBesideTheRecordAsTheRecordWasNamed(@TempDir Path dir) throws IOException {
+        Path real = Files.createDirectory(dir.resolve("real"));
+        Files.writeString(real.resolve("record.json"), "{}");
+        Files.writeString(real.resolve("master.json"), MASTER);
+        Path link = Files.createSymbolicLink(dir.resolve("link"), real);
+        BatchRecord r = READER.read(doc(record("{\"path\": \"./master.json\"}", "\"2 L\"", ADDITION, "")),
+                Optional.of(link.resolve("record.json")), Optional.of(link));
+        assertEquals(link.resolve("master.json").toString(), r.master().document().source());
+    }
+
     /** The specification applies from the last addition on, at full volume. */
     @Test
     void aMeasurementIsOfTheFinishedBatchFromTheLastAdditionOnAtFullVolume() {
