@@ -1,0 +1,142 @@
+package org.protolyte.rules;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.analysis.Analyzer;
+import org.protolyte.batch.BatchAnalysis;
+import org.protolyte.batch.BatchAnalysis.Candidate;
+import org.protolyte.batch.BatchAnalysis.Further;
+import org.protolyte.batch.BatchAnalysis.Observation;
+import org.protolyte.batch.BatchAnalyzer;
+import org.protolyte.batch.BatchRecordReader;
+import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.JsonReader;
+
+/**
+ * batch-diagnosis on hand-set observations and candidates: a real record (so pointers resolve) whose measurements,
+ * predictions and usual mistakes the test states, so each case sits just inside or outside a limit.
+ */
+class BatchDiagnosisTest {
+
+    private static final BatchAnalysis RECORD = record();
+
+    private static BatchAnalysis record() {
+        String path = "/rule-examples/batch-diagnosis/quiet.json";
+        try (InputStream in = BatchDiagnosisTest.class.getResourceAsStream(path)) {
+            var doc = new JsonReader().read("batch.json", in.readAllBytes());
+            var r = new BatchRecordReader(Analyses.SCHEMAS).read(doc, Optional.empty(), Optional.empty());
+            return new BatchAnalyzer(Analyses.LIBRARY, new Analyzer(new Equilibrium(Davies.INSTANCE))).analyze(r);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** The record with these observations; the first candidate is the batch as recorded, the others mistakes. */
+    private static BatchAnalysis with(List<Observation> obs, Candidate... candidates) {
+        BatchAnalysis b = RECORD;
+        return new BatchAnalysis(b.record(), b.master(), b.scale(), b.additions(), obs, List.of(candidates),
+                b.specifiedPh(), b.asMade(), b.caveats());
+    }
+
+    private static Observation pH(String pointer, double measured, double predicted, double beta) {
+        return new Observation(Observation.Kind.PH, "pH at step 1", measured, predicted, pointer, Optional.empty(),
+                beta);
+    }
+
+    private static Observation osmolality(double measured, double predicted) {
+        return new Observation(Observation.Kind.OSMOLALITY, "osmolality", measured, predicted, "/measurements/2",
+                Optional.empty());
+    }
+
+    private static Candidate candidate(String cause, double... predicted) {
+        return new Candidate(cause, predicted, List.of(), Optional.empty());
+    }
+
+    private static final Candidate RECORDED = candidate("as recorded", 7.08, 283);
+
+    private static List<Finding> diagnose(BatchAnalysis b, String parameters, Rule... selection) {
+        Rule rule = Analyses.rule("batch-diagnosis", parameters);
+        return new BatchDiagnosis().check(b, rule, List.of(selection));
+    }
+
+    @Test
+    void anUnbufferedReadingThatIsOnlyANoteCallsForNoDiagnosis() {
+        // β 0.4 mmol/kg per pH, below the default 1 of batch-ph-agrees: that rule reports the 1.18 difference as a note
+        BatchAnalysis b = with(List.of(pH("/measurements/0", 5.90, 7.08, 0.4), osmolality(283, 283)), RECORDED,
+                candidate("sodium chloride left out", 7.10, 20));
+        assertEquals(List.of(), diagnose(b, "{}"));
+        Rule agrees = Analyses.rule("batch-ph-agrees", "{}");
+        assertEquals(Severity.NOTE, new BatchMeasurementAgrees.Ph().check(b, agrees).get(0).severity());
+    }
+
+    @Test
+    void aReadingJustAboveTheUnbufferedThresholdIsDiagnosed() {
+        // at β = 1.0 the reading is compared, with the limit widened to 0.2 / β = 0.2 (trace load, common practice)
+        Candidate fits = candidate("sodium chloride left out", 6.90, 283);
+        BatchAnalysis off = with(List.of(pH("/measurements/0", 6.85, 7.08, 1.0), osmolality(283, 283)), RECORDED, fits);
+        List<Finding> f = diagnose(off, "{}");
+        assertEquals(1, f.size());
+        assertEquals("/measurements/0", f.get(0).pointer().orElseThrow());
+        assertTrue(f.get(0).message().contains("consistent with, best fit first: 1. sodium chloride left out"),
+                f.get(0).message());
+        // 0.15 from the prediction: beyond the rule's own 0.1 but within what a trace load moves at β 1.0
+        BatchAnalysis within = with(List.of(pH("/measurements/0", 6.93, 7.08, 1.0), osmolality(283, 283)), RECORDED,
+                fits);
+        assertEquals(List.of(), diagnose(within, "{}"));
+    }
+
+    @Test
+    void theThresholdIsThatOfTheSelectedPhRule() {
+        BatchAnalysis b = with(List.of(pH("/measurements/0", 5.90, 7.08, 0.4), osmolality(283, 283)), RECORDED,
+                candidate("sodium chloride left out", 5.95, 283));
+        Rule site = Analyses.rule("batch-ph-agrees", "{\"unbufferedBelow\": 0.3, \"traceLoad\": 0.01}");
+        List<Finding> f = diagnose(b, "{}", site);
+        assertEquals(1, f.size(), "at β 0.4, above the site's 0.3, the reading is compared");
+        assertTrue(f.get(0).message().contains("consistent with, best fit first: 1. sodium chloride left out"),
+                f.get(0).message());
+        Rule disabled = new Rule(site.id(), site.check(), site.parameters(), site.severity(), false, site.summary(),
+                site.explanation(), site.remedy(), site.safety(), site.references(), site.pack());
+        assertEquals(List.of(), diagnose(b, "{}", disabled), "a disabled rule sets nothing: the default 1 applies");
+    }
+
+    @Test
+    void anUnbufferedReadingDoesNotRuleOutTheMistakeTheOtherMeasurementsShow() {
+        // the osmolality is 10 % low; the candidate gives it and, like the record, about 7 for the unbuffered saline
+        BatchAnalysis b = with(List.of(pH("/measurements/0", 5.90, 7.08, 0.4), osmolality(255, 283)), RECORDED,
+                candidate("sodium chloride at a tenth of its amount", 7.09, 256));
+        List<Finding> f = diagnose(b, "{}");
+        assertEquals(1, f.size());
+        assertEquals("/measurements/2", f.get(0).pointer().orElseThrow(), "the finding sits at the reading that misses");
+        assertTrue(f.get(0).message().contains("; consistent with sodium chloride at a tenth of its amount (gives "
+                + "7.09 and 256 mOsm/kg)"), f.get(0).message());
+    }
+
+    @Test
+    void aFurtherMeasurementIsNamedOnlyWhereItsPredictionsDifferByMoreThanItsLimit() {
+        List<Observation> one = List.of(osmolality(255, 283));
+        Candidate a = new Candidate("a", new double[] {256}, List.of(new Further(Observation.Kind.PH, "pH at the end",
+                OptionalDouble.of(7.00))), Optional.empty());
+        Candidate b = new Candidate("b", new double[] {254}, List.of(new Further(Observation.Kind.PH, "pH at the end",
+                OptionalDouble.of(7.25))), Optional.empty());
+        Candidate near = new Candidate("b", new double[] {254}, List.of(new Further(Observation.Kind.PH,
+                "pH at the end", OptionalDouble.of(7.09))), Optional.empty());
+        Candidate recorded = candidate("as recorded", 283);
+        String apart = diagnose(with(one, recorded, a, b), "{}").get(0).message();
+        assertTrue(apart.endsWith("consistent with each of (one observation cannot rank them): a (gives 256 mOsm/kg); "
+                + "b (gives 254 mOsm/kg); the pH at the end would tell them apart (7.00, 7.25, in the order above)"),
+                apart);
+        // 0.09 apart, within the 0.1 a pH reading is good for
+        String not = diagnose(with(one, recorded, a, near), "{}").get(0).message();
+        assertTrue(not.endsWith("; no further measurement in reach tells them apart"), not);
+    }
+}
