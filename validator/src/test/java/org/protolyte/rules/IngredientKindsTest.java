@@ -1,0 +1,175 @@
+package org.protolyte.rules;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.protolyte.rules.Analyses.analyse;
+import static org.protolyte.rules.Analyses.component;
+import static org.protolyte.rules.Analyses.formulation;
+import static org.protolyte.rules.Analyses.run;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.analysis.FormulationAnalysis;
+
+/**
+ * The kinds that judge what the recipe holds rather than a computed figure: form-stated, light-sensitive,
+ * frozen-buffer and concentration-limit, each on a small formulation written for the case.
+ */
+class IngredientKindsTest {
+
+    private static FormulationAnalysis of(String... components) {
+        return analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]", components));
+    }
+
+    private static List<String> where(List<Finding> f) {
+        return f.stream().map(x -> x.pointer().orElseThrow()).toList();
+    }
+
+    // ---- form-stated ----
+
+    @Test
+    void aBareFormulaWithHydratesInTheLibraryIsNamedWithTheOtherForms() {
+        List<Finding> f = run(new FormStated(), of(component("sodium chloride", "100 mmol/L"),
+                component("Na2HPO4", "10 mmol/L")), "{}");
+        assertEquals(List.of("/components/1/substance"), where(f));
+        String m = f.get(0).message();
+        // 141.96 g/mol: Ph. Eur. monograph (from memory)
+        assertTrue(m.startsWith("'Na2HPO4' was read as disodium hydrogen phosphate anhydrous (141.96 g/mol); the "
+                + "library also holds "), m);
+        for (String hydrate : List.of("dihydrate", "heptahydrate", "dodecahydrate")) {
+            assertTrue(m.contains("disodium hydrogen phosphate " + hydrate), m);
+        }
+        assertTrue(!m.contains("holds disodium hydrogen phosphate anhydrous"), m);
+    }
+
+    @Test
+    void aNameThatStatesTheFormIsQuiet() {
+        for (String written : List.of("disodium hydrogen phosphate anhydrous", "anhydrous disodium hydrogen phosphate",
+                "sodium phosphate monobasic dihydrate", "NaH2PO4·2H2O")) {
+            assertEquals(List.of(), run(new FormStated(), of(component(written, "10 mmol/L")), "{}"), written);
+        }
+    }
+
+    @Test
+    void aSynonymOfASubstanceWithOneFormIsQuiet() {
+        assertEquals(List.of(), run(new FormStated(), of(component("NaCl", "10 mmol/L"), component("KH2PO4",
+                "10 mmol/L")), "{}"));
+    }
+
+    // ---- light-sensitive ----
+
+    @Test
+    void aLightSensitiveComponentIsNamedWithItsSource() {
+        List<Finding> f = run(new LightSensitive(), of(component("sodium chloride", "100 mmol/L"),
+                component("folic acid", "0.001 g/L")), "{}");
+        assertEquals(List.of("/components/1/substance"), where(f));
+        assertTrue(f.get(0).message().startsWith("folic acid: decomposes in light"), f.get(0).message());
+        assertTrue(f.get(0).message().endsWith(" (USP monograph Folic Acid, packaging and storage: well-closed, "
+                + "light-resistant containers; assay in low-actinic glassware)"), f.get(0).message());
+    }
+
+    @Test
+    void hepesIsNamedOnlyWithAPhotosensitiser() {
+        // HEPES forms hydrogen peroxide under light with riboflavin (Lepe-Zuniga, Zigler and Gery 1987)
+        assertEquals(List.of(), run(new LightSensitive(), of(component("HEPES", "10 mmol/L"),
+                component("sodium chloride", "100 mmol/L")), "{}"));
+        // folic acid is light-sensitive but no photosensitiser
+        assertEquals(List.of("/components/1/substance"), where(run(new LightSensitive(), of(component("HEPES",
+                "10 mmol/L"), component("folic acid", "0.001 g/L")), "{}")));
+        List<Finding> f = run(new LightSensitive(), of(component("HEPES", "10 mmol/L"),
+                component("riboflavin", "0.0004 g/L")), "{}");
+        assertEquals(List.of("/components/0/substance", "/components/1/substance"), where(f));
+        assertTrue(f.get(0).message().startsWith("HEPES: "), f.get(0).message());
+        assertTrue(f.get(0).message().contains("; the recipe holds the photosensitiser riboflavin ("),
+                f.get(0).message());
+        assertTrue(!f.get(1).message().contains("the recipe holds"), f.get(1).message());
+    }
+
+    @Test
+    void nothingLightSensitiveIsQuiet() {
+        assertEquals(List.of(), run(new LightSensitive(), of(component("sodium chloride", "100 mmol/L")), "{}"));
+    }
+
+    // ---- frozen-buffer ----
+
+    private static final String SODIUM_PHOSPHATE = "{\"system\": \"phosphate\", \"counterion\": \"Na+\"}";
+
+    private static FormulationAnalysis at(String celsius, String... components) {
+        return analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}, "
+                + "{\"name\": \"freezer\", \"temperature\": \"" + celsius + " Cel\"}]", components));
+    }
+
+    @Test
+    void aSodiumPhosphateBufferBelowItsFreezingPointIsNamed() {
+        List<Finding> f = run(new FrozenBuffer(), at("-20", component("sodium dihydrogen phosphate dihydrate",
+                "10 mmol/L"), component("disodium hydrogen phosphate heptahydrate", "10 mmol/L")), SODIUM_PHOSPHATE);
+        assertEquals(List.of("/conditions/1"), where(f));
+        String m = f.get(0).message();
+        assertTrue(m.startsWith("freezer: "), m);
+        assertTrue(m.contains("below the estimated freezing point"), m);
+        assertTrue(m.endsWith(". As ice forms, the Na+ salt of phosphate crystallises out and the unfrozen liquid's "
+                + "pH shifts"), m);
+    }
+
+    @Test
+    void theSystemAndTheCounterionMustBothBeThereAndFrozen() {
+        assertEquals(List.of(), run(new FrozenBuffer(), at("5", component("sodium dihydrogen phosphate dihydrate",
+                "10 mmol/L")), SODIUM_PHOSPHATE), "not frozen");
+        assertEquals(List.of(), run(new FrozenBuffer(), at("-20", component("potassium dihydrogen phosphate",
+                "10 mmol/L")), SODIUM_PHOSPHATE), "potassium, not sodium");
+        assertEquals(List.of(), run(new FrozenBuffer(), at("-20", component("sodium chloride", "10 mmol/L")),
+                SODIUM_PHOSPHATE), "no phosphate");
+        // the counterion may come from another component than the buffer
+        assertEquals(List.of("/conditions/1"), where(run(new FrozenBuffer(), at("-20",
+                component("potassium dihydrogen phosphate", "10 mmol/L"), component("sodium chloride", "10 mmol/L")),
+                SODIUM_PHOSPHATE)));
+        assertEquals(List.of("/conditions/1"), where(run(new FrozenBuffer(), at("-20",
+                component("sodium chloride", "10 mmol/L"), component("potassium dihydrogen phosphate", "10 mmol/L")),
+                SODIUM_PHOSPHATE)));
+    }
+
+    // ---- concentration-limit ----
+
+    @Test
+    void aConcentrationAtTheLimitIsWithinAndJustAboveIsNot() {
+        String p = "{\"substance\": \"potassium chloride\", \"max\": \"40 mmol/L\"}";
+        assertEquals(List.of(), run(new ConcentrationLimit(), of(component("potassium chloride", "40 mmol/L")), p));
+        List<Finding> f = run(new ConcentrationLimit(), of(component("sodium chloride", "100 mmol/L"),
+                component("potassium chloride", "40.1 mmol/L")), p);
+        assertEquals(List.of("/components/1"), where(f));
+        assertEquals("potassium chloride is 40.1 mmol/L; limit 40 mmol/L", f.get(0).message());
+    }
+
+    @Test
+    void aMassLimitIsJudgedInGramsPerLitre() {
+        // KCl 74.55 g/mol (IUPAC atomic weights, from memory): 40 mmol/L is 2.98 g/L, 41 mmol/L 3.06 g/L
+        String p = "{\"substance\": \"KCl\", \"max\": \"3 g/L\"}";
+        assertEquals(List.of(), run(new ConcentrationLimit(), of(component("potassium chloride", "40 mmol/L")), p));
+        assertEquals(List.of("potassium chloride is 3.06 g/L; limit 3 g/L"), run(new ConcentrationLimit(),
+                of(component("potassium chloride", "41 mmol/L")), p).stream().map(Finding::message).toList());
+    }
+
+    @Test
+    void aSystemsTotalCountsEveryComponentThatCarriesIt() {
+        String p = "{\"system\": \"phosphate\", \"max\": \"40 mmol/L\"}";
+        FormulationAnalysis two = of(component("sodium chloride", "100 mmol/L"),
+                component("sodium dihydrogen phosphate dihydrate", "20 mmol/L"),
+                component("disodium hydrogen phosphate heptahydrate", "20.5 mmol/L"));
+        List<Finding> f = run(new ConcentrationLimit(), two, p);
+        assertEquals(List.of("/components/1"), where(f), "at the first component that carries it");
+        assertEquals("total phosphate is 40.5 mmol/L; limit 40 mmol/L", f.get(0).message());
+        assertEquals(List.of(), run(new ConcentrationLimit(), of(component("sodium dihydrogen phosphate dihydrate",
+                "20 mmol/L"), component("disodium hydrogen phosphate heptahydrate", "20 mmol/L")), p));
+    }
+
+    @Test
+    void aSubstanceTheRecipeOrTheLibraryLacksIsNotJudged() {
+        FormulationAnalysis saline = of(component("sodium chloride", "100 mmol/L"));
+        assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"substance\": \"potassium chloride\", "
+                + "\"max\": \"0 mmol/L\"}"));
+        assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"substance\": \"no such salt\", "
+                + "\"max\": \"0 mmol/L\"}"));
+        assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"system\": \"HEPES\", \"max\": \"0 mmol/L\"}"));
+    }
+}
