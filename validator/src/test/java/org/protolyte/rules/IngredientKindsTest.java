@@ -164,6 +164,16 @@ class IngredientKindsTest {
     }
 
     @Test
+    void aSystemCountsAsOftenAsTheFormulaHoldsIt() {
+        // (NH4)2SO4 holds two ammonium and one sulfate per formula unit
+        FormulationAnalysis a = of(component("ammonium sulfate", "10.5 mmol/L"));
+        assertEquals(List.of("total ammonia is 21.0 mmol/L; limit 20.5 mmol/L"), run(new ConcentrationLimit(), a,
+                "{\"system\": \"ammonia\", \"max\": \"20.5 mmol/L\"}").stream().map(Finding::message).toList());
+        assertEquals(List.of(), run(new ConcentrationLimit(), a, "{\"system\": \"sulfate\", \"max\": \"11 mmol/L\"}"));
+        assertEquals(1, run(new ConcentrationLimit(), a, "{\"system\": \"sulfate\", \"max\": \"10 mmol/L\"}").size());
+    }
+
+    @Test
     void aSubstanceTheRecipeOrTheLibraryLacksIsNotJudged() {
         FormulationAnalysis saline = of(component("sodium chloride", "100 mmol/L"));
         assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"substance\": \"potassium chloride\", "

@@ -236,6 +236,55 @@ class TitrantAndSolidKindsTest {
         assertEquals(List.of(), run(new SolubilityLimit(), dibasic("0.05 mol/L", "25", "5"), "{}"));
     }
 
+    private static double held(String message) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("holds ([0-9.]+) g per 100 g water").matcher(message);
+        assertTrue(m.find(), message);
+        return Double.parseDouble(m.group(1));
+    }
+
+    @Test
+    void whatTheSolutionHoldsIsPerHundredGramsOfItsWater() {
+        // 0.35 mol of Na2HPO4 (141.96 g/mol) is 49.7 g; a litre of such a solution holds a little less than 1 kg of
+        // water, so 4.97 to 5.2 g per 100 g
+        double concentrate = held(run(new SolubilityLimit(), dibasic("0.35 mol/L", "25", "5"), "{}").get(0).message());
+        assertTrue(concentrate > 4.97 && concentrate < 5.2, () -> "" + concentrate);
+        // 0.15 mol/L solves (ionic strength 0.45 mol/kg) and is oversaturated at 0 °C (1.7 g per 100 g): 2.13 to 2.2 g
+        String m = run(new SolubilityLimit(), dibasic("0.15 mol/L", "25", "0"), "{}").get(0).message();
+        assertTrue(m.contains("against a solubility of 1.70 g in pure water there"), m);
+        double solved = held(m);
+        assertTrue(solved > 2.13 && solved < 2.2, () -> "" + solved);
+        double times = Double.parseDouble(m.replaceAll(".*the ion product is ([0-9.]+) times.*", "$1"));
+        assertTrue(times > 1 && times < 3, m);
+    }
+
+    @Test
+    void aSaltWhoseIonsComeFromOtherComponentsIsNamedAsSuch() {
+        // NaH2PO4 + Na3PO4 give 2 HPO4-2 and 4 Na+: 0.15 and 0.30 mol/kg, the same ions as 0.15 mol/L Na2HPO4
+        FormulationAnalysis a = analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": "
+                + "\"25 Cel\"}, {\"name\": \"cold\", \"temperature\": \"0 Cel\"}]",
+                component("sodium dihydrogen phosphate dihydrate", "75 mmol/L"),
+                component("trisodium phosphate dodecahydrate", "75 mmol/L")));
+        List<Finding> f = run(new SolubilityLimit(), a, "{}");
+        assertEquals(List.of("/conditions/1"), where(f));
+        assertTrue(f.get(0).message().startsWith("disodium hydrogen phosphate (Na2HPO4) can crystallise at cold (0 °C): "
+                + "its ions come from other components (solubility 1.70 g per 100 g water there); the ion product is "),
+                f.get(0).message());
+    }
+
+    @Test
+    void aConcentrateBeyondTheActivityModelIsReckonedFromWhatWasWeighed() {
+        // 0.35 mol/L is beyond the activity model (ionic strength about 1 mol/kg): Na+ at its total, HPO4-2 as weighed;
+        // without the salt itself weighed there is nothing to reckon with
+        FormulationAnalysis weighed = dibasic("0.35 mol/L", "25", "5");
+        assertTrue(weighed.conditions().stream().noneMatch(ConditionResult::determinate), "a concentrate");
+        assertEquals(1, run(new SolubilityLimit(), weighed, "{}").size());
+        FormulationAnalysis other = analyse(formulation(", \"conditions\": [{\"name\": \"cold\", \"temperature\": "
+                + "\"5 Cel\"}]", component("sodium dihydrogen phosphate dihydrate", "175 mmol/L"),
+                component("trisodium phosphate dodecahydrate", "175 mmol/L")));
+        assertTrue(other.conditions().stream().noneMatch(ConditionResult::determinate), "a concentrate");
+        assertEquals(List.of(), run(new SolubilityLimit(), other, "{}"));
+    }
+
     @Test
     void outsideTheTablesTemperaturesNothingIsSaid() {
         // the table ends at 30 °C
