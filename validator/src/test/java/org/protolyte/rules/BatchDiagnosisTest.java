@@ -139,4 +139,62 @@ class BatchDiagnosisTest {
         String not = diagnose(with(one, recorded, a, near), "{}").get(0).message();
         assertTrue(not.endsWith("; no further measurement in reach tells them apart"), not);
     }
+
+    @Test
+    void aMissAtTheDiagnosisLimitIsNoneAndACandidateAtItFits() {
+        // pH 0.125 from the prediction, limit 0.125: no miss; 0.135: a miss, and a candidate 0.125 off still fits
+        String p = "{\"pH\": 0.125}";
+        Candidate near = candidate("sodium chloride left out", 7.125, 283);
+        assertEquals(List.of(), diagnose(with(List.of(pH("/measurements/1", 7.25, 7.125, 50), osmolality(283, 283)),
+                candidate("as recorded", 7.125, 283), near), p));
+        List<Finding> f = diagnose(with(List.of(pH("/measurements/1", 7.25, 7.0, 50), osmolality(283, 283)),
+                candidate("as recorded", 7.0, 283), near), p);
+        assertTrue(f.get(0).message().contains("best fit first: 1. sodium chloride left out"), f.get(0).message());
+        List<Finding> none = diagnose(with(List.of(pH("/measurements/1", 7.25, 7.0, 50), osmolality(283, 283)),
+                candidate("as recorded", 7.0, 283), candidate("far", 7.124, 283)), p);
+        assertTrue(none.get(0).message().contains("; none of the usual mistakes"), none.get(0).message());
+    }
+
+    @Test
+    void candidatesAreRankedBySquaredDifferenceOverTheLimit() {
+        // a: pH 0.09 below (z 0.9), osmolality exact: 0.81; b: pH 0.05 above (z 0.5), osmolality 2 % above (z 0.67):
+        // 0.69, so b fits best although a is listed first and is the closer in pH
+        List<Observation> obs = List.of(pH("/measurements/1", 7.10, 7.5, 50), osmolality(283, 250));
+        Candidate a = candidate("a", 7.01, 283);
+        Candidate b = candidate("b", 7.15, 283 * 1.02);
+        String m = diagnose(with(obs, candidate("as recorded", 7.5, 250), a, b), "{}").get(0).message();
+        assertTrue(m.contains("; consistent with, best fit first: 1. b (gives 7.15 and 289 mOsm/kg); 2. a (gives 7.01 "
+                + "and 283 mOsm/kg)"), m);
+        assertTrue(m.startsWith("measured pH at step 1 7.10 and osmolality 283 mOsm/kg; the additions as recorded give "
+                + "7.50 and 250 mOsm/kg; "), m);
+    }
+
+    @Test
+    void aMistakeThatCouldNotBePredictedIsNamedAsNotJudged() {
+        List<Observation> obs = List.of(osmolality(255, 283));
+        Candidate fits = candidate("sodium chloride at a tenth", 256);
+        Candidate lost = new Candidate("no titrant", new double[] {Double.NaN}, List.of(), Optional.of("no solution"));
+        Candidate lost2 = new Candidate("twice the titrant", new double[] {Double.NaN}, List.of(),
+                Optional.of("no convergence"));
+        String m = diagnose(with(obs, candidate("as recorded", 283), fits, lost, lost2), "{}").get(0).message();
+        assertTrue(m.endsWith("; consistent with sodium chloride at a tenth (gives 256 mOsm/kg); 2 of the usual "
+                + "mistakes could not be predicted and are not judged: no titrant (no solution); twice the titrant"), m);
+        String all = diagnose(with(obs, candidate("as recorded", 283), fits), "{}").get(0).message();
+        assertTrue(!all.contains("could not be predicted"), all);
+    }
+
+    @Test
+    void aTitrantVolumeMissesBeyondItsPerCentOfThePrediction() {
+        // 5.0 mL against 4.0 is 25 % off: at a limit of 25 % no miss, beyond the default 10 % a miss; a candidate
+        // fits within 10 % of the measured 5.0 mL
+        Observation t5 = new Observation(Observation.Kind.TITRANT, "sodium hydroxide", 5.0, 4.0, "/additions/3/amount",
+                Optional.empty());
+        assertEquals(List.of(), diagnose(with(List.of(t5), candidate("as recorded", 4.0), candidate("x", 5.0)),
+                "{\"titrant\": 25}"));
+        String m = diagnose(with(List.of(t5), candidate("as recorded", 4.0), candidate("stock at 4/5 strength", 5.45),
+                candidate("far", 5.6)), "{}").get(0).message();
+        assertTrue(m.endsWith("; consistent with stock at 4/5 strength (gives 5.45 mL)"), m);
+        assertEquals(List.of(), diagnose(with(List.of(t5), candidate("as recorded", 4.0), candidate("x", 5.0)),
+                "{\"titrant\": 30}"));
+    }
 }
