@@ -270,4 +270,50 @@ class BatchAgreementTest {
         assertEquals(List.of(), new BatchOutOfSpecification().check(specified(), Analyses.rule(
                 "batch-out-of-specification", "{}")), "judged alone, with no selection");
     }
+
+    // ---- batch-amount-tolerance ----
+
+    /** The record's sodium chloride line (step 1), with the moles and match set; {@code lineTolerance} its own. */
+    private static BatchAnalysis amounts(BatchAnalysis.Match match, double expected, double actual,
+                                         Optional<Double> lineTolerance) {
+        BatchAnalysis.AdditionCheck c = RECORD.additions().stream().filter(x -> x.addition().isPresent()
+                && x.addition().get().step() == 1).findFirst().orElseThrow();
+        BatchAnalysis.AdditionCheck set = new BatchAnalysis.AdditionCheck(match, c.line(), c.addition(), c.expected(),
+                c.used(), expected, actual, lineTolerance);
+        BatchAnalysis b = RECORD;
+        return new BatchAnalysis(b.record(), b.master(), b.scale(), List.of(set), b.observations(), b.candidates(),
+                b.specifiedPh(), b.asMade(), b.caveats());
+    }
+
+    private static List<Finding> tolerance(BatchAnalysis b, String parameters) {
+        return new BatchAmountTolerance().check(b, Analyses.rule("batch-amount-tolerance", parameters));
+    }
+
+    @Test
+    void anAmountAtItsToleranceIsWithinAndJustBeyondIsNot() {
+        String p = "{\"tolerance\": 25}";
+        assertEquals(List.of(), tolerance(amounts(BatchAnalysis.Match.SAME, 0.5, 0.625, Optional.empty()), p));
+        assertEquals(List.of(), tolerance(amounts(BatchAnalysis.Match.SAME, 0.5, 0.375, Optional.empty()), p));
+        List<Finding> f = tolerance(amounts(BatchAnalysis.Match.SAME, 0.5, 0.626, Optional.empty()), p);
+        assertEquals(List.of("/additions/0/amount"), f.stream().map(x -> x.pointer().orElseThrow()).toList());
+        assertEquals("sodium chloride at step 1: 70.1 g recorded is 626.0 mmol after the certificate corrections, "
+                + "+25.2 % against the 500.0 mmol the master gives for this batch (tolerance ±25 %)", f.get(0).message());
+        assertEquals(1, tolerance(amounts(BatchAnalysis.Match.OTHER_FORM, 0.5, 0.374, Optional.empty()), p).size());
+        // default 2 %
+        assertEquals(1, tolerance(amounts(BatchAnalysis.Match.SAME, 0.5, 0.52, Optional.empty()), "{}").size());
+    }
+
+    @Test
+    void theMasterLinesOwnToleranceComesFirst() {
+        List<Finding> f = tolerance(amounts(BatchAnalysis.Match.SAME, 0.5, 0.51, Optional.of(0.01)), "{\"tolerance\": 25}");
+        assertTrue(f.get(0).message().endsWith("(tolerance ±1 %)"), f.get(0).message());
+    }
+
+    @Test
+    void onlyAnAdditionOfTheMastersLineIsHeldToItsAmount() {
+        for (BatchAnalysis.Match m : List.of(BatchAnalysis.Match.EXTRA, BatchAnalysis.Match.MISSING,
+                BatchAnalysis.Match.TITRANT)) {
+            assertEquals(List.of(), tolerance(amounts(m, 0.5, 5, Optional.empty()), "{}"), m.toString());
+        }
+    }
 }

@@ -120,6 +120,11 @@ class IngredientKindsTest {
                 "10 mmol/L")), SODIUM_PHOSPHATE), "potassium, not sodium");
         assertEquals(List.of(), run(new FrozenBuffer(), at("-20", component("sodium chloride", "10 mmol/L")),
                 SODIUM_PHOSPHATE), "no phosphate");
+        assertEquals(List.of(), run(new FrozenBuffer(), at("-20", component("sodium chloride", "10 mmol/L"),
+                component("HEPES", "10 mmol/L")), SODIUM_PHOSPHATE), "another system");
+        FormulationAnalysis warm = Analyses.conditions(at("5", component("sodium dihydrogen phosphate dihydrate",
+                "10 mmol/L")), c -> c.withCaveat(org.protolyte.chemistry.Caveat.warning("ionic-strength-high", "x")));
+        assertEquals(List.of(), run(new FrozenBuffer(), warm, SODIUM_PHOSPHATE), "another caveat than freezing");
         // the counterion may come from another component than the buffer
         assertEquals(List.of("/conditions/1"), where(run(new FrozenBuffer(), at("-20",
                 component("potassium dihydrogen phosphate", "10 mmol/L"), component("sodium chloride", "10 mmol/L")),
