@@ -316,4 +316,44 @@ class BatchAgreementTest {
             assertEquals(List.of(), tolerance(amounts(m, 0.5, 5, Optional.empty()), "{}"), m.toString());
         }
     }
+
+    // ---- batch-additions-match ----
+
+    private static List<Finding> additions(BatchAnalysis.AdditionCheck... c) {
+        BatchAnalysis b = RECORD;
+        return new BatchAdditionsMatch().check(new BatchAnalysis(b.record(), b.master(), b.scale(), List.of(c),
+                b.observations(), b.candidates(), b.specifiedPh(), b.asMade(), b.caveats()),
+                Analyses.rule("batch-additions-match", "{}"));
+    }
+
+    private static BatchAnalysis.AdditionCheck step(int step, BatchAnalysis.Match match, boolean added, double expected,
+                                                    double actual) {
+        BatchAnalysis.AdditionCheck c = RECORD.additions().stream().filter(x -> x.addition().isPresent()
+                && x.addition().get().step() == step).findFirst().orElseThrow();
+        return new BatchAnalysis.AdditionCheck(match, c.line(), added ? c.addition() : Optional.empty(), c.expected(),
+                c.used(), expected, actual, c.tolerance());
+    }
+
+    @Test
+    void eachKindOfMismatchIsNamedAtItsPlace() {
+        assertEquals(List.of(), additions(step(1, BatchAnalysis.Match.SAME, true, 1, 2)));
+        assertEquals(List.of("sodium chloride (master line 3) has no addition in the record"),
+                messages(additions(step(1, BatchAnalysis.Match.MISSING, false, 1, 0))));
+        List<Finding> extra = additions(step(1, BatchAnalysis.Match.EXTRA, true, 0, 1));
+        assertEquals("/additions/0/substance", extra.get(0).pointer().orElseThrow());
+        assertEquals("sodium chloride at step 1 is not in master EX-BATCH-DIAGNOSIS-MASTER", extra.get(0).message());
+        assertEquals(List.of("the master's q.s. titrant sodium hydroxide has no recorded addition"),
+                messages(additions(step(5, BatchAnalysis.Match.TITRANT, false, 0, 0))));
+        assertEquals(List.of(), additions(step(5, BatchAnalysis.Match.TITRANT, true, 0, 0)));
+    }
+
+    @Test
+    void anotherFormSaysWhetherTheAmountWasRecalculated() {
+        assertEquals(List.of("step 1 used sodium chloride where the master names sodium chloride; the amount was "
+                + "recalculated to the same moles"), messages(additions(step(1, BatchAnalysis.Match.OTHER_FORM, true,
+                0.5, 0.5024))));
+        assertEquals(List.of("step 1 used sodium chloride where the master names sodium chloride; that is -0.6 % of "
+                + "the moles the master gives"), messages(additions(step(1, BatchAnalysis.Match.OTHER_FORM, true, 0.5,
+                0.497))));
+    }
 }

@@ -8,6 +8,7 @@ import static org.protolyte.rules.Analyses.formulation;
 import static org.protolyte.rules.Analyses.run;
 
 import java.util.List;
+import java.util.Optional;
 
 import org.junit.jupiter.api.Test;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -186,5 +187,62 @@ class IngredientKindsTest {
         assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"substance\": \"no such salt\", "
                 + "\"max\": \"0 mmol/L\"}"));
         assertEquals(List.of(), run(new ConcentrationLimit(), saline, "{\"system\": \"HEPES\", \"max\": \"0 mmol/L\"}"));
+    }
+
+    // ---- hazard-notes, bicarbonate-needs-co2, titrant-reaches-goal ----
+
+    private static final String NAOH_QS = "{\"substance\": \"sodium hydroxide\", \"stock\": {\"concentration\": "
+            + "\"1 mol/L\"}, \"adjustTo\": {\"pH\": 7.0, \"temperature\": \"25 Cel\"}}";
+
+    @Test
+    void aClassifiedComponentCarriesItsClassificationsAndSaysWhenItIsTheTitrant() {
+        // sodium hydroxide: Skin Corr. 1A, H314 (Regulation (EC) No 1272/2008, Annex VI, from memory)
+        List<Finding> f = run(new HazardNotes(), of(component("sodium dihydrogen phosphate dihydrate", "10 mmol/L"),
+                NAOH_QS), "{}");
+        assertEquals(List.of("/components/1/substance"), where(f));
+        assertTrue(f.get(0).message().startsWith("sodium hydroxide used as titrant: Skin Corr. 1A (H314: causes severe "
+                + "skin burns and eye damage; the solid and solutions of 5 % or more); "), f.get(0).message());
+        List<Finding> weighed = run(new HazardNotes(), of(component("sodium hydroxide", "10 mmol/L")), "{}");
+        assertTrue(weighed.get(0).message().startsWith("sodium hydroxide: Skin Corr. 1A"), weighed.get(0).message());
+        assertEquals(List.of(), run(new HazardNotes(), of(component("sodium chloride", "10 mmol/L")), "{}"));
+    }
+
+    @Test
+    void bicarbonateWithoutACo2LevelIsNamedAndWithOneIsQuiet() {
+        List<Finding> f = run(new BicarbonateNeedsCo2(), of(component("sodium chloride", "100 mmol/L"),
+                component("sodium hydrogen carbonate", "24 mmol/L")), "{}");
+        assertEquals(List.of("/components/1"), where(f));
+        assertEquals("sodium hydrogen carbonate buffers with CO2, but no condition states a CO2 level: every pH here is "
+                + "for a closed vessel, free of CO2 as made", f.get(0).message());
+        FormulationAnalysis inAir = analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": "
+                + "\"25 Cel\"}, {\"name\": \"open\", \"temperature\": \"25 Cel\", \"co2\": \"air\"}]",
+                component("sodium hydrogen carbonate", "24 mmol/L")));
+        assertEquals(List.of(), run(new BicarbonateNeedsCo2(), inAir, "{}"));
+        assertEquals(List.of(), run(new BicarbonateNeedsCo2(), of(component("sodium chloride", "100 mmol/L")), "{}"));
+    }
+
+    @Test
+    void aTitrantThatCannotReachItsGoalIsNamedUnlessAnotherDoes() {
+        FormulationAnalysis a = of(component("sodium dihydrogen phosphate dihydrate", "10 mmol/L"), NAOH_QS);
+        org.protolyte.analysis.TitrantResult t = a.titrants().get(0);
+        org.protolyte.analysis.TitrantResult stuck = new org.protolyte.analysis.TitrantResult(t.ingredient(), t.role(),
+                0, false, t.setpointPH(), t.adjustKelvin(), 13.5, t.goalKelvin(), Optional.of(
+                new org.protolyte.analysis.TitrantResult.Unreachable("1 mol/L sodium hydroxide reaches pH 12.9 at most",
+                12.9, 4.5)));
+        org.protolyte.analysis.TitrantResult dosed = new org.protolyte.analysis.TitrantResult(t.ingredient(), t.role(),
+                0.001, true, t.setpointPH(), t.adjustKelvin(), 7.0, t.goalKelvin(), Optional.empty());
+        org.protolyte.analysis.TitrantResult idle = new org.protolyte.analysis.TitrantResult(t.ingredient(), t.role(),
+                0, false, t.setpointPH(), t.adjustKelvin(), 7.0, t.goalKelvin(), Optional.empty());
+        List<Finding> f = run(new TitrantReachesGoal(), titrants(a, stuck), "{}");
+        assertEquals(List.of("/components/1/adjustTo"), where(f));
+        assertEquals("1 mol/L sodium hydroxide reaches pH 12.9 at most", f.get(0).message());
+        assertEquals(List.of(), run(new TitrantReachesGoal(), titrants(a, stuck, dosed), "{}"), "the other titrant does");
+        assertEquals(1, run(new TitrantReachesGoal(), titrants(a, stuck, idle), "{}").size(), "an unused one does not");
+    }
+
+    private static FormulationAnalysis titrants(FormulationAnalysis a, org.protolyte.analysis.TitrantResult... t) {
+        return new FormulationAnalysis(a.recipe(), a.solution(), a.conditions(), List.of(t), a.caveats(),
+                a.assumptions(), a.targetSensitivities(), a.drifts(), a.titratableAcidity(), a.robustness(),
+                a.working());
     }
 }
