@@ -128,7 +128,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
             double x = measured ? o.measured() : predicted[i];
             parts.add(measured ? o.label() + " " + o.kind().text(x) : o.kind().text(x));
         }
-        return String.join(measured ? " and " : " and ", parts);
+        return String.join(" and ", parts);
     }
 
     private static String describe(BatchAnalysis.Candidate c, List<BatchAnalysis.Observation> obs) {
@@ -152,7 +152,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
             }
             BatchAnalysis.Further first = fits.get(0).candidate().further().get(k);
             double spread = (hi - lo) / limit(rule, first.kind(), Math.max(Math.abs(hi), Math.abs(lo)));
-            if (hi > lo && spread > widest) {
+            if (spread > widest) {   // equal or absent predictions give 0, −∞ or NaN: never wider
                 widest = spread;
                 best = k;
             }

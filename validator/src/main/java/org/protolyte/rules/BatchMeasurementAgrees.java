@@ -132,7 +132,7 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
                                 : String.format(Locale.ROOT, "%.0f %%", limit), beyond(o, d, rule)
                                 ? String.format(Locale.ROOT, "; beyond %s, more than the model and the instrument "
                                 + "can explain", unit(rule.number("errorBeyond", 0))) : ""));
-                out.add(beyond(o, d, rule) && f.severity().compareTo(Severity.ERROR) < 0
+                out.add(beyond(o, d, rule)
                         ? new Finding(f.rule(), Severity.ERROR, f.message(), f.pointer(), f.location(), f.definition())
                         : f);
             }

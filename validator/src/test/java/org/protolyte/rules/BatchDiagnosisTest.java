@@ -157,10 +157,10 @@ class BatchDiagnosisTest {
 
     @Test
     void candidatesAreRankedBySquaredDifferenceOverTheLimit() {
-        // a: pH 0.09 below (z 0.9), osmolality exact: 0.81; b: pH 0.05 above (z 0.5), osmolality 2 % above (z 0.67):
-        // 0.69, so b fits best although a is listed first and is the closer in pH
+        // a: pH 0.09 below (z 0.9), osmolality 0.1 % above (z 0.03): 0.81; b: pH 0.05 above (z 0.5), osmolality 2 %
+        // above (z 0.67): 0.69, so b fits best although a is listed first and is the closer in pH
         List<Observation> obs = List.of(pH("/measurements/1", 7.10, 7.5, 50), osmolality(283, 250));
-        Candidate a = candidate("a", 7.01, 283);
+        Candidate a = candidate("a", 7.01, 283 * 1.001);
         Candidate b = candidate("b", 7.15, 283 * 1.02);
         String m = diagnose(with(obs, candidate("as recorded", 7.5, 250), a, b), "{}").get(0).message();
         assertTrue(m.contains("; consistent with, best fit first: 1. b (gives 7.15 and 289 mOsm/kg); 2. a (gives 7.01 "
@@ -196,5 +196,42 @@ class BatchDiagnosisTest {
         assertTrue(m.endsWith("; consistent with stock at 4/5 strength (gives 5.45 mL)"), m);
         assertEquals(List.of(), diagnose(with(List.of(t5), candidate("as recorded", 4.0), candidate("x", 5.0)),
                 "{\"titrant\": 30}"));
+    }
+
+    @Test
+    void judgedAloneTheDefaultsOfBatchPhAgreesApply() {
+        BatchAnalysis b = with(List.of(pH("/measurements/0", 5.90, 7.08, 0.4), osmolality(255, 283)), RECORDED,
+                candidate("sodium chloride at a tenth of its amount", 7.09, 256));
+        Rule rule = Analyses.rule("batch-diagnosis", "{}");
+        assertEquals(new BatchDiagnosis().check(b, rule, List.of()), new BatchDiagnosis().check(b, rule));
+        assertEquals(1, new BatchDiagnosis().check(b, rule).size());
+    }
+
+    private static Candidate further(String cause, double osmolality, double... pH) {
+        List<Further> f = new java.util.ArrayList<>();
+        for (int i = 0; i < pH.length; i++) {
+            f.add(new Further(Observation.Kind.PH, "pH " + (i + 1), OptionalDouble.of(pH[i])));
+        }
+        return new Candidate(cause, new double[] {osmolality}, f, Optional.empty());
+    }
+
+    @Test
+    void ofFurtherMeasurementsThatTellApartEquallyWellTheFirstIsNamed() {
+        List<Observation> one = List.of(osmolality(255, 283));
+        String m = diagnose(with(one, candidate("as recorded", 283), further("a", 256, 7.0, 7.5),
+                further("b", 254, 7.5, 7.0)), "{}").get(0).message();
+        assertTrue(m.endsWith("; the pH 1 would tell them apart (7.00, 7.50, in the order above)"), m);
+    }
+
+    @Test
+    void aSpreadOfExactlyTheLimitDoesNotTellThemApart() {
+        // 7.00 and 7.25 with a pH limit of 0.25: a reading cannot tell values one limit apart
+        List<Observation> one = List.of(osmolality(255, 283));
+        String m = diagnose(with(one, candidate("as recorded", 283), further("a", 256, 7.0), further("b", 254, 7.25)),
+                "{\"pH\": 0.25}").get(0).message();
+        assertTrue(m.endsWith("; no further measurement in reach tells them apart"), m);
+        String wider = diagnose(with(one, candidate("as recorded", 283), further("a", 256, 7.0), further("b", 254,
+                7.26)), "{\"pH\": 0.25}").get(0).message();
+        assertTrue(wider.endsWith("; the pH 1 would tell them apart (7.00, 7.26, in the order above)"), wider);
     }
 }

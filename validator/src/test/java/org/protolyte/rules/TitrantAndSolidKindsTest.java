@@ -107,6 +107,14 @@ class TitrantAndSolidKindsTest {
     }
 
     @Test
+    void exactlyTheNearFullFractionOfAnEquivalentCounts() {
+        // 5 mmol on 10 mmol is exactly 0.5 equivalents, as is 0.5 in binary
+        assertTrue(plausible(qs("phosphate", 0.005, 4.7, 7.2), "{\"nearFullEquivalent\": 0.5}").get(0)
+                .contains("nearly a whole equivalent"));
+        assertEquals(List.of(), plausible(qs("phosphate", 0.0049, 4.7, 7.2), "{\"nearFullEquivalent\": 0.5}"));
+    }
+
+    @Test
     void thePacksLimitsMoveBothThresholds() {
         String p = "{\"maxEquivalents\": 0.5, \"nearFullEquivalent\": 0.3}";
         assertEquals(List.of(), plausible(qs("phosphate", 0.0029, 4.7, 7.2), p));
