@@ -269,6 +269,8 @@ class BatchAgreementTest {
                 "the rule's own range comes first");
         assertEquals(List.of(), new BatchOutOfSpecification().check(specified(), Analyses.rule(
                 "batch-out-of-specification", "{}")), "judged alone, with no selection");
+        assertEquals(1, new BatchOutOfSpecification().check(specified(), Analyses.rule("batch-out-of-specification",
+                "{\"osmolality\": {\"max\": 280}}")).size(), "judged alone, its own range still holds");
     }
 
     // ---- batch-amount-tolerance ----

@@ -170,6 +170,18 @@ class IngredientKindsTest {
     }
 
     @Test
+    void anAmountInAHalfLitreBatchIsJudgedPerLitre() {
+        // 1.5 g of potassium chloride made up to 500 mL is 3.00 g/L
+        FormulationAnalysis half = analyse("{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-HALF\", "
+                + "\"revision\": \"A\", \"basis\": {\"finalVolume\": \"500 mL\"}, \"conditions\": [{\"name\": \"use\", "
+                + "\"temperature\": \"25 Cel\"}], \"components\": [" + component("potassium chloride", "1.5 g") + "]}");
+        assertEquals(List.of("potassium chloride is 3.00 g/L; limit 2.9 g/L"), run(new ConcentrationLimit(), half,
+                "{\"substance\": \"potassium chloride\", \"max\": \"2.9 g/L\"}").stream().map(Finding::message).toList());
+        assertEquals(List.of(), run(new ConcentrationLimit(), half, "{\"substance\": \"potassium chloride\", "
+                + "\"max\": \"3.1 g/L\"}"));
+    }
+
+    @Test
     void aSystemCountsAsOftenAsTheFormulaHoldsIt() {
         // (NH4)2SO4 holds two ammonium and one sulfate per formula unit
         FormulationAnalysis a = of(component("ammonium sulfate", "10.5 mmol/L"));

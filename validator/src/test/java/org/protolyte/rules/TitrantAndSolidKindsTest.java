@@ -80,6 +80,21 @@ class TitrantAndSolidKindsTest {
     }
 
     @Test
+    void aMonoproticSystemGivesUpOneProtonHoweverWideTheRange() {
+        // across pH 1 to 15 Tris gives up all but 2e-7 of its proton: one, not two
+        AcidBaseSystem tris = Analyses.LIBRARY.system("Tris").orElseThrow();
+        assertEquals(1, TitrantPlausible.titratableProtons(tris, 298.15, 1, 15));
+    }
+
+    @Test
+    void theProtonCountDoesNotOverflowFarFromThePKas() {
+        // the weights are scaled by the largest, so 10^(Σ pKa − 3 pH) at pH −150 does not overflow: fully protonated
+        AcidBaseSystem p = Analyses.LIBRARY.system("phosphate").orElseThrow();
+        assertEquals(3.0, TitrantPlausible.meanProtons(p, 298.15, -150), 1e-12);
+        assertEquals(0.0, TitrantPlausible.meanProtons(p, 298.15, 150), 1e-12);
+    }
+
+    @Test
     void moreThanAnEquivalentPerProtonIsTooMuchAndNearlyOneIsAnotherSaltForm() {
         assertEquals(List.of(), plausible(qs("phosphate", 0.0089, 4.7, 7.2), "{}"));
         List<String> near = plausible(qs("phosphate", 0.0091, 4.7, 7.2), "{}");
