@@ -309,6 +309,15 @@ class TitrantAndSolidKindsTest {
     }
 
     @Test
+    void ofTwoConditionsEquallyOversaturatedTheFirstIsNamed() {
+        // two conditions at 5 °C are the same solution: the finding sits at the first
+        FormulationAnalysis a = analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": "
+                + "\"25 Cel\"}, {\"name\": \"cold\", \"temperature\": \"5 Cel\"}, {\"name\": \"fridge\", "
+                + "\"temperature\": \"5 Cel\"}]", component("disodium hydrogen phosphate anhydrous", "0.35 mol/L")));
+        assertEquals(List.of("/conditions/1"), where(run(new SolubilityLimit(), a, "{}")));
+    }
+
+    @Test
     void outsideTheTablesTemperaturesNothingIsSaid() {
         // the table ends at 30 °C
         assertEquals(List.of(), run(new SolubilityLimit(), dibasic("2 mol/L", "40"), "{}"));
