@@ -11,7 +11,9 @@ import org.protolyte.batch.BatchAnalysis;
  * When the batch as recorded misses a measurement, the usual mistakes consistent with every measurement: each
  * candidate's predictions fall within {@code pH} (default 0.1), {@code titrant} and {@code osmolality} (per cent,
  * defaults 10 and 3) of what was measured. Two or more observations rank the candidates by Σ(difference/limit)²; one
- * observation cannot, so they are listed unranked with the further measurement that would tell them apart.
+ * observation cannot, so they are listed unranked with the further measurement that would tell them apart. A
+ * measurement misses as batch-ph-agrees and the other agreement rules judge it: a pH reading where the solution is
+ * unbuffered is a note there, set by traces and CO2, and here it neither calls for a diagnosis nor judges a candidate.
  */
 public final class BatchDiagnosis implements BatchCheckKind {
 
@@ -28,11 +30,32 @@ public final class BatchDiagnosis implements BatchCheckKind {
     private record Fit(BatchAnalysis.Candidate candidate, double score) {
     }
 
+    /** The pH readings' rule sets which of them are compared at all: the first batch-ph-agrees rule selected. */
+    @Override
+    public List<Finding> check(BatchAnalysis b, Rule rule, List<Rule> selection) {
+        Rule pH = selection.stream().filter(r -> r.enabled() && r.check().equals("batch-ph-agrees")).findFirst()
+                .orElse(Rule.of("batch-ph-agrees", "batch-ph-agrees", Severity.WARNING));
+        return check(b, rule, pH);
+    }
+
     @Override
     public List<Finding> check(BatchAnalysis b, Rule rule) {
+        return check(b, rule, Rule.of("batch-ph-agrees", "batch-ph-agrees", Severity.WARNING));
+    }
+
+    /**
+     * A reading disagrees where batch-ph-agrees (or the titrant, osmolality limit here) would say so; an unbuffered pH
+     * reading, a note there, neither calls for a diagnosis nor judges a candidate, since traces and CO2 set it.
+     */
+    private List<Finding> check(BatchAnalysis b, Rule rule, Rule pHRule) {
         List<BatchAnalysis.Observation> obs = b.observations();
-        if (b.candidates().isEmpty() || obs.stream().noneMatch(o -> !Double.isNaN(o.predicted())
-                && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted()))) {
+        java.util.function.Predicate<BatchAnalysis.Observation> compared = o -> !Double.isNaN(o.predicted())
+                && !BatchMeasurementAgrees.unbuffered(o, pHRule);
+        java.util.function.Predicate<BatchAnalysis.Observation> disagrees = o -> compared.test(o)
+                && Math.abs(o.measured() - o.predicted()) > (o.kind() == BatchAnalysis.Observation.Kind.PH
+                ? BatchMeasurementAgrees.pHLimit(o, limit(rule, o.kind(), o.predicted()), pHRule)
+                : limit(rule, o.kind(), o.predicted()));
+        if (b.candidates().isEmpty() || obs.stream().noneMatch(disagrees)) {
             return List.of();
         }
         List<Fit> fits = new ArrayList<>();
@@ -43,6 +66,9 @@ public final class BatchDiagnosis implements BatchCheckKind {
             double score = 0;
             boolean fits_ = true;
             for (int i = 0; i < obs.size(); i++) {
+                if (BatchMeasurementAgrees.unbuffered(obs.get(i), pHRule)) {
+                    continue;
+                }
                 double p = c.predicted()[i];
                 double lim = limit(rule, obs.get(i).kind(), obs.get(i).measured());
                 if (Double.isNaN(p) || Math.abs(p - obs.get(i).measured()) > lim) {
@@ -56,7 +82,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
                 fits.add(new Fit(c, score));
             }
         }
-        long independent = obs.stream().filter(o -> !Double.isNaN(o.predicted())).count();
+        long independent = obs.stream().filter(compared).count();
         StringBuilder m = new StringBuilder("measured ").append(list(obs, true, null))
                 .append("; the additions as recorded give ").append(list(obs, false, b.candidates().get(0).predicted()));
         if (fits.isEmpty()) {
@@ -83,8 +109,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
             m.append(String.format(Locale.ROOT, "; %d of the usual mistakes could not be predicted and are not judged: ",
                     uncomputed.size())).append(String.join("; ", uncomputed));
         }
-        BatchAnalysis.Observation first = obs.stream().filter(o -> !Double.isNaN(o.predicted())
-                && Math.abs(o.measured() - o.predicted()) > limit(rule, o.kind(), o.predicted())).findFirst().orElseThrow();
+        BatchAnalysis.Observation first = obs.stream().filter(disagrees).findFirst().orElseThrow();
         return List.of(rule.finding(b.record().document(), first.pointer(), m.toString()));
     }
 
@@ -103,7 +128,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
             double x = measured ? o.measured() : predicted[i];
             parts.add(measured ? o.label() + " " + o.kind().text(x) : o.kind().text(x));
         }
-        return String.join(measured ? " and " : " and ", parts);
+        return String.join(" and ", parts);
     }
 
     private static String describe(BatchAnalysis.Candidate c, List<BatchAnalysis.Observation> obs) {
@@ -127,7 +152,7 @@ public final class BatchDiagnosis implements BatchCheckKind {
             }
             BatchAnalysis.Further first = fits.get(0).candidate().further().get(k);
             double spread = (hi - lo) / limit(rule, first.kind(), Math.max(Math.abs(hi), Math.abs(lo)));
-            if (hi > lo && spread > widest) {
+            if (spread > widest) {   // equal or absent predictions give 0, −∞ or NaN: never wider
                 widest = spread;
                 best = k;
             }

@@ -53,6 +53,21 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
     }
 
     /**
+     * A pH reading where the predicted β is below {@code unbufferedBelow} of a {@code batch-ph-agrees} rule: traces
+     * and CO2 set it, so it is not compared with the prediction (nor used to judge a mistake, {@link BatchDiagnosis}).
+     */
+    static boolean unbuffered(BatchAnalysis.Observation o, Rule phRule) {
+        return o.kind() == BatchAnalysis.Observation.Kind.PH
+                && o.bufferCapacity() < phRule.number("unbufferedBelow", UNBUFFERED_BELOW);
+    }
+
+    /** The pH difference allowed: {@code limit}, or more where a trace of acid or base moves the pH by load/β. */
+    static double pHLimit(BatchAnalysis.Observation o, double limit, Rule phRule) {
+        return Double.isFinite(o.bufferCapacity())
+                ? Math.max(limit, phRule.number("traceLoad", TRACE_LOAD) / o.bufferCapacity()) : limit;
+    }
+
+    /**
      * A rule may state {@code errorBeyond} (same unit as {@code maxDifference}): a difference beyond it is an error
      * whatever the rule's severity, since neither the model nor the instrument is that far off.
      */
@@ -87,27 +102,24 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
             if (o.kind() != kind || Double.isNaN(o.predicted())) {
                 continue;
             }
-            double limit = rule.number("maxDifference", defaultLimit);
             double d = o.measured() - o.predicted();
-            if (kind == BatchAnalysis.Observation.Kind.PH && Double.isFinite(o.bufferCapacity())) {
-                double beta = o.bufferCapacity();
-                // a trace of acid or base (or CO2 taken up while reading) moves a pH by its amount over β
-                limit = Math.max(limit, rule.number("traceLoad", TRACE_LOAD) / beta);
-                double unbuffered = rule.number("unbufferedBelow", UNBUFFERED_BELOW);
-                if (beta < unbuffered) {
-                    if (Math.abs(d) > rule.number("maxDifference", defaultLimit)) {
-                        out.add(new Finding(rule.id(), Severity.NOTE, String.format(Locale.ROOT,
-                                "%s: measured %s, the additions as recorded give %s (%+.2f), not compared: the "
-                                        + "solution is unbuffered there (β %.2g mmol/kg per pH, below %.2g), so traces "
-                                        + "of acid or base in the materials and dissolved CO2 set the reading, not the "
-                                        + "recorded additions", o.label(), BatchText.value(o.kind(), o.measured()),
-                                BatchText.value(o.kind(), o.predicted()), d, beta, unbuffered),
-                                java.util.Optional.of(o.pointer()), b.record().document().locate(o.pointer()),
-                                java.util.Optional.of(rule)));
-                    }
-                    continue;
+            if (unbuffered(o, rule)) {
+                if (Math.abs(d) > rule.number("maxDifference", defaultLimit)) {
+                    out.add(new Finding(rule.id(), Severity.NOTE, String.format(Locale.ROOT,
+                            "%s: measured %s, the additions as recorded give %s (%+.2f), not compared: the "
+                                    + "solution is unbuffered there (β %.2g mmol/kg per pH, below %.2g), so traces "
+                                    + "of acid or base in the materials and dissolved CO2 set the reading, not the "
+                                    + "recorded additions", o.label(), BatchText.value(o.kind(), o.measured()),
+                            BatchText.value(o.kind(), o.predicted()), d, o.bufferCapacity(),
+                            rule.number("unbufferedBelow", UNBUFFERED_BELOW)),
+                            java.util.Optional.of(o.pointer()), b.record().document().locate(o.pointer()),
+                            java.util.Optional.of(rule)));
                 }
+                continue;
             }
+            double limit = kind == BatchAnalysis.Observation.Kind.PH
+                    ? pHLimit(o, rule.number("maxDifference", defaultLimit), rule)
+                    : rule.number("maxDifference", defaultLimit);
             boolean off = kind == BatchAnalysis.Observation.Kind.PH ? Math.abs(d) > limit
                     : Math.abs(d) > limit / 100 * Math.abs(o.predicted());
             if (off) {
@@ -120,7 +132,7 @@ public abstract class BatchMeasurementAgrees implements BatchCheckKind {
                                 : String.format(Locale.ROOT, "%.0f %%", limit), beyond(o, d, rule)
                                 ? String.format(Locale.ROOT, "; beyond %s, more than the model and the instrument "
                                 + "can explain", unit(rule.number("errorBeyond", 0))) : ""));
-                out.add(beyond(o, d, rule) && f.severity().compareTo(Severity.ERROR) < 0
+                out.add(beyond(o, d, rule)
                         ? new Finding(f.rule(), Severity.ERROR, f.message(), f.pointer(), f.location(), f.definition())
                         : f);
             }

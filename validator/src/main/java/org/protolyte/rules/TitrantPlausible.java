@@ -44,7 +44,7 @@ public final class TitrantPlausible implements CheckKind {
         BufferContribution b = buffer.get();
         Optional<AcidBaseSystem> system = a.recipe().library().system(b.system());
         for (TitrantResult t : a.titrants()) {
-            if (!t.used() || t.unreachable().isPresent() || t.moles() <= 0 || system.isEmpty()
+            if (!t.used() || t.unreachable().isPresent() || system.isEmpty()
                     || !Double.isFinite(t.startPH())) {
                 continue;
             }

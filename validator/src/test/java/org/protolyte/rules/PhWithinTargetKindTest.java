@@ -79,6 +79,25 @@ class PhWithinTargetKindTest {
     }
 
     @Test
+    void theMessageNamesTheLeverAndTheSetpointThatWouldMeetTheTarget() {
+        FormulationAnalysis a = RANGE;
+        org.protolyte.analysis.TitrantResult t = new org.protolyte.analysis.TitrantResult(
+                a.recipe().ingredients().get(0), org.protolyte.analysis.TitrantResult.Role.BASE, 0.001, true,
+                OptionalDouble.of(7.1), 293.15, 7.1, 298.15, java.util.Optional.empty()).withSetpointForTarget(6.85);
+        FormulationAnalysis levers = new FormulationAnalysis(a.recipe(), a.solution(), a.conditions(), List.of(t),
+                a.caveats(), a.assumptions(), List.of(new org.protolyte.analysis.Sensitivity("sodium chloride",
+                "/components/0", -0.0125)), a.drifts(), a.titratableAcidity(), a.robustness(), a.working());
+        String m = at(levers, c -> Analyses.pH(c, 7.5)).get(0).message();
+        assertTrue(m.endsWith("; the pH moves most with sodium chloride (-0.013 per +1 %); adjusting to pH 6.85 at "
+                + "20 °C instead of 7.10 would meet it"), m);
+        FormulationAnalysis flat = new FormulationAnalysis(a.recipe(), a.solution(), a.conditions(), List.of(),
+                a.caveats(), a.assumptions(), List.of(new org.protolyte.analysis.Sensitivity("sodium chloride",
+                "/components/0", 0)), a.drifts(), a.titratableAcidity(), a.robustness(), a.working());
+        String none = at(flat, c -> Analyses.pH(c, 7.5)).get(0).message();
+        assertEquals("pH at 25 °C is 7.50, target 6.80 to 7.00", none);
+    }
+
+    @Test
     void anIndeterminateConditionAtTheTargetIsNotJudged() {
         assertEquals(List.of(), at(RANGE, c -> Analyses.indeterminate(Analyses.pH(c, 9))));
     }
