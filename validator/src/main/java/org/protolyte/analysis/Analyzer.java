@@ -210,6 +210,10 @@ public final class Analyzer {
                 double ta = a.condition().kelvin();
                 double tb = b.condition().kelvin();
                 double mid = (ta + tb) / 2;
+                // a system that carries less of β than water's own H+ and OH- (an unbuffered solution) is not the
+                // cause, however small the share that would otherwise win
+                EquilibriumState sa = a.state().orElseThrow();
+                double water = Thermo.LN10 * (sa.hydrogenMolality() + sa.hydroxideMolality()) / sa.bufferCapacity();
                 Optional<String> cause = Optional.empty();
                 double slope = 0;
                 double share = 0;
@@ -219,7 +223,7 @@ public final class Analyzer {
                     double nearest = bc.nearestPKa();
                     // the step whose pKa is nearest the pH carries the buffering; its slope at the mean temperature
                     DissociationStepSlope d = DissociationStepSlope.of(sys, nearest, ta, mid);
-                    if (bc.share() * Math.abs(d.slope()) > weight) {
+                    if (bc.share() > water && bc.share() * Math.abs(d.slope()) > weight) {
                         weight = bc.share() * Math.abs(d.slope());
                         cause = Optional.of(bc.system());
                         slope = d.slope();
