@@ -651,8 +651,7 @@ public final class Analyzer {
                                         + "at %.0f °C", t.substance().name(), goalPH, max / water * 1000, reach,
                                 goalK - Thermo.KELVIN_OFFSET), reach, startPH)));
             }
-            moles = Math.abs(startPH - goalPH) < 1e-9 ? 0
-                    : new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            moles = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
             Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
             if (overflow.isPresent()) {
                 return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);
