@@ -174,4 +174,39 @@ class AnalysisDetailsTest {
                 + String.format(Locale.ROOT, "%.9f", mmol) + " mmol/L\"}], " + body).conditions().get(0);
         assertEquals(7.4, c.state().orElseThrow().pH(), 0.03);
     }
+
+    /**
+     * The sensitivities are taken at the target's temperature and CO2 state, not at the first condition: closed at
+     * 25 °C sodium hydrogen carbonate is amphiprotic, its pH ½(pKa1 + pKa2) whatever its amount (derived), so +1 %
+     * moves it by almost nothing; open to 5 % CO2 at 37 °C (the first condition) it would move by log10(1.01).
+     */
+    @Test
+    void sensitivitiesAreTakenAtTheTargetsOwnCondition() {
+        List<Sensitivity> s = analyse("\"components\": [{\"substance\": \"sodium hydrogen carbonate\", \"amount\":"
+                + " \"24 mmol/L\"}], \"targets\": {\"pH\": {\"value\": 8.3, \"tolerance\": 0.5, \"temperature\": \"25 Cel\"}},"
+                + " \"conditions\": [{\"name\": \"incubator\", \"temperature\": \"37 Cel\", \"co2\": \"5 %\"},"
+                + " {\"name\": \"bench\", \"temperature\": \"25 Cel\"}]").targetSensitivities();
+        assertEquals(1, s.size(), s::toString);
+        assertTrue(Math.abs(s.get(0).dpHPerPercent()) < 0.001, s::toString);
+    }
+
+    /**
+     * The pH before any titrant is taken where the meter reads it, at part volume: 50 mmol of Tris base in half the
+     * litre is a 100 mmol/L solution, whose pH ½(pKw + pKa + log C) is ½·log10 2 = 0.15 above that of 50 mmol/L
+     * (derived); it is the pH the analysis gives a 100 mmol/L Tris solution.
+     */
+    @Test
+    void theStartingPHOfAnAdjustmentAtPartVolumeIsReadThere() {
+        TitrantResult t = analyse("\"components\": [{\"substance\": \"Tris\", \"amount\": \"50 mmol/L\"},"
+                + " {\"substance\": \"hydrochloric acid\", \"stock\": {\"concentration\": \"1 mol/L\"},"
+                + " \"adjustTo\": {\"pH\": 8.0, \"temperature\": \"25 Cel\", \"atVolume\": 0.5}}],"
+                + " \"conditions\": [{\"name\": \"bench\", \"temperature\": \"25 Cel\"}]").titrants().get(0);
+        String at25 = "\"conditions\": [{\"name\": \"bench\", \"temperature\": \"25 Cel\"}]";
+        double twice = analyse("\"components\": [{\"substance\": \"Tris\", \"amount\": \"100 mmol/L\"}], " + at25)
+                .conditions().get(0).state().orElseThrow().pH();
+        double once = analyse("\"components\": [{\"substance\": \"Tris\", \"amount\": \"50 mmol/L\"}], " + at25)
+                .conditions().get(0).state().orElseThrow().pH();
+        assertEquals(0.15, twice - once, 0.02);
+        assertEquals(twice, t.startPH(), 0.01);
+    }
 }

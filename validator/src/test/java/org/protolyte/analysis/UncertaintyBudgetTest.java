@@ -77,4 +77,17 @@ class UncertaintyBudgetTest {
         assertEquals(2.3e-3, c.bufferCapacityPerLitre(), 0.1e-3);
         assertEquals(0, u.bufferCapacityPerLitre(), 1e-9);
     }
+
+    /**
+     * A condition that is indeterminate (3 mol/L sodium chloride, beyond the Davies equation) has no uncertainty, and
+     * is not told that its uncertainty is missing: its pH is not shown at all.
+     */
+    @Test
+    void anIndeterminateConditionHasNoUncertaintyAndNoNoteOfIt() {
+        ConditionResult c = analyse("{\"substance\": \"sodium chloride\", \"amount\": \"3 mol/L\"},"
+                + " {\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"20 mmol/L\"}",
+                "{\"name\": \"use\", \"temperature\": \"25 Cel\"}");
+        assertTrue(!c.determinate() && c.uncertainty().isEmpty(), c::toString);
+        assertTrue(c.caveats().stream().noneMatch(x -> x.code().equals("uncertainty-not-computed")), c::toString);
+    }
 }
