@@ -104,7 +104,7 @@ public final class Analyzer {
         List<Optional<EquilibriumState>> states = new ArrayList<>();
         for (Formulation.Condition c : recipe.formulation().conditions()) {
             try {
-                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
+                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal());
                 states.add(s.determinate() ? Optional.of(s) : Optional.empty());
                 caveats.addAll(s.caveats().stream().filter(x -> x.severity() == Caveat.Severity.INDETERMINATE).toList());
             } catch (IndeterminateException e) {
@@ -141,7 +141,7 @@ public final class Analyzer {
             Formulation.Condition c = conditions.get(i % n);
             Solution solution = i < n ? concentrate : working.orElseThrow();
             try {
-                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
+                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal());
                 out[0][i] = s.pH();
                 out[1][i] = s.bufferCapacity() * solution.waterKg() / solution.volumeLitres(c.kelvin());
             } catch (IndeterminateException e) {
@@ -210,6 +210,10 @@ public final class Analyzer {
                 double ta = a.condition().kelvin();
                 double tb = b.condition().kelvin();
                 double mid = (ta + tb) / 2;
+                // a system that carries less of β than water's own H+ and OH- (an unbuffered solution) is not the
+                // cause, however small the share that would otherwise win
+                EquilibriumState sa = a.state().orElseThrow();
+                double water = Thermo.LN10 * (sa.hydrogenMolality() + sa.hydroxideMolality()) / sa.bufferCapacity();
                 Optional<String> cause = Optional.empty();
                 double slope = 0;
                 double share = 0;
@@ -219,7 +223,7 @@ public final class Analyzer {
                     double nearest = bc.nearestPKa();
                     // the step whose pKa is nearest the pH carries the buffering; its slope at the mean temperature
                     DissociationStepSlope d = DissociationStepSlope.of(sys, nearest, ta, mid);
-                    if (bc.share() * Math.abs(d.slope()) > weight) {
+                    if (bc.share() > water && bc.share() * Math.abs(d.slope()) > weight) {
                         weight = bc.share() * Math.abs(d.slope());
                         cause = Optional.of(bc.system());
                         slope = d.slope();
@@ -337,7 +341,7 @@ public final class Analyzer {
         }
         double goal = target.get().midpoint();
         // pH falls as CO2 rises; search log10 of the partial pressure between 1 Pa and 50 kPa
-        UnivariateFunction f = lg -> solve(recipe, solution, c.kelvin(), OptionalDouble.of(Math.pow(10, lg)), Map.of())
+        UnivariateFunction f = lg -> solve(recipe, solution, c.kelvin(), OptionalDouble.of(Math.pow(10, lg)))
                 .pH() - goal;
         try {
             if (f.value(0) < 0 || f.value(Math.log10(5e4)) > 0) {
@@ -377,7 +381,7 @@ public final class Analyzer {
             Map<Ingredient, Double> titrants = new HashMap<>(doses);
             try {
                 Solution s = r.solution(titrants);
-                double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal(), Map.of()).pH();
+                double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal()).pH();
                 out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
             } catch (IndeterminateException e) {
                 // caught: a component whose 1 % change cannot be solved has no sensitivity to report
@@ -387,15 +391,9 @@ public final class Analyzer {
         return out;
     }
 
-    /**
-     * The equilibrium of a solution at a temperature, closed or open to a CO2 partial pressure (Pa), with
-     * extra strong ions (mol/kg) where a load is being tried.
-     */
-    EquilibriumState solve(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2,
-                           Map<Component, Double> extra) {
-        Map<Component, Double> totals = new LinkedHashMap<>(solution.totals());
-        extra.forEach((c, m) -> totals.merge(c, m, Double::sum));
-        return prepare(recipe, solution, kelvin, co2, extra.keySet()).solve(totals, Double.NaN);
+    /** The equilibrium of a solution at a temperature, closed or open to a CO2 partial pressure (Pa). */
+    EquilibriumState solve(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2) {
+        return prepare(recipe, solution, kelvin, co2, java.util.Set.of()).solve(solution.totals(), Double.NaN);
     }
 
     /**
@@ -428,7 +426,7 @@ public final class Analyzer {
     private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c) {
         double volume = solution.volumeLitres(c.kelvin());
         try {
-            EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal(), Map.of());
+            EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal());
             double perLitre = solution.waterKg() / volume;
             boolean determinate = s.determinate();
             List<Caveat> caveats = new ArrayList<>(s.caveats());
@@ -527,7 +525,7 @@ public final class Analyzer {
         }
         try {
             double air = FormulationReader.AIR_CO2_FRACTION * FormulationReader.STANDARD_PRESSURE;
-            return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air), Map.of()).pH());
+            return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air)).pH());
         } catch (IndeterminateException e) {
             // caught: a hint in the report only (no rule judges it); where it cannot be solved none is shown
             return OptionalDouble.empty();
@@ -542,7 +540,7 @@ public final class Analyzer {
     private double pH(Recipe recipe, Ingredient titrant, double moles, double kelvin, OptionalDouble co2,
                       double volumeFraction) {
         Solution s = recipe.solution(moles > 0 ? Map.of(titrant, moles) : Map.of(), volumeFraction);
-        return solve(recipe, s, kelvin, co2, Map.of()).pH();
+        return solve(recipe, s, kelvin, co2).pH();
     }
 
     /** The CO2 state of the condition at a temperature (the first one there), closed if none matches. */
@@ -554,12 +552,6 @@ public final class Analyzer {
     /** The q.s. of every titrant line of the recipe, as {@link #analyze} doses them. */
     List<TitrantResult> titrate(Recipe recipe) {
         return recipe.titrants().isEmpty() ? List.of() : adjust(recipe, new ArrayList<>());
-    }
-
-    /** What the meter shows at the adjustment temperature and part volume (closed) with {@code moles} of titrant. */
-    double meterReading(Recipe recipe, Ingredient titrant, double moles) {
-        Formulation.Adjustment adj = titrant.line().adjustTo().orElseThrow();
-        return pH(recipe, titrant, moles, adj.kelvin(), OptionalDouble.empty(), adj.atVolume());
     }
 
     /** Acid or base: the pH of a 0.01 mol/kg solution of the titrant alone at 25 °C, below or above neutral. */
@@ -659,8 +651,7 @@ public final class Analyzer {
                                         + "at %.0f °C", t.substance().name(), goalPH, max / water * 1000, reach,
                                 goalK - Thermo.KELVIN_OFFSET), reach, startPH)));
             }
-            moles = Math.abs(startPH - goalPH) < 1e-9 ? 0
-                    : new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            moles = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
             Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
             if (overflow.isPresent()) {
                 return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);

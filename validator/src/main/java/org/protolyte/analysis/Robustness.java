@@ -1,7 +1,6 @@
 package org.protolyte.analysis;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -107,7 +106,7 @@ public final class Robustness {
                     pH[c].addValue(r[0][c]);
                     beta[c].addValue(r[1][c] * 1000);
                     osmolality[c].addValue(r[2][c] * 1000);
-                    if (outsideTarget(recipe, conditions.get(c), r[0][c])) {
+                    if (outsideTarget(recipe, r[0][c])) {
                         outside[c]++;
                     }
                 }
@@ -138,9 +137,9 @@ public final class Robustness {
         return i.line().tolerance().orElse(settings.defaultTolerance());
     }
 
-    private static boolean outsideTarget(Recipe recipe, Formulation.Condition c, double pH) {
-        return recipe.formulation().pHTarget().filter(t -> Formulation.sameTemperature(t.kelvin(), c.kelvin()))
-                .map(t -> !t.contains(pH)).orElse(false);
+    /** Counted at every condition, reported only at one at the target's temperature. */
+    private static boolean outsideTarget(Recipe recipe, double pH) {
+        return recipe.formulation().pHTarget().map(t -> !t.contains(pH)).orElse(false);
     }
 
     private static DescriptiveStatistics[] stats(int n) {
@@ -263,11 +262,7 @@ public final class Robustness {
                     meters[i] = analyzer.prepare(recipe, s, kelvin, OptionalDouble.empty(), Set.of());
                 }
             }
-            nominal = sample(Map.of(), 0);      // fills the warm starts
-            if (nominal == null) {
-                Arrays.fill(warm, null);
-                Arrays.fill(meterWarm, null);
-            }
+            nominal = sample(Map.of(), 0);      // fills the warm starts of what it solves
         }
 
         /** Why the first batch that could not be solved failed, if one did. */
