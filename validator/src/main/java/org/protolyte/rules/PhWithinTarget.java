@@ -6,6 +6,7 @@ import java.util.Optional;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.Formulation;
 
 /**
@@ -58,12 +59,13 @@ public final class PhWithinTarget implements CheckKind {
         }
         String main = at.get().mainBuffer().map(b -> String.format(Locale.ROOT, "; %s carries %.0f %% of the buffering",
                 b.system(), b.share() * 100)).orElse("");
-        String lever = a.targetSensitivities().stream().findFirst().filter(x -> x.dpHPerPercent() != 0)
+        // named only where it shows at the three decimals printed (no "-0.000 per +1 %")
+        String lever = a.targetSensitivities().stream().findFirst().filter(x -> Math.abs(x.dpHPerPercent()) >= 0.0005)
                 .map(x -> String.format(Locale.ROOT, "; the pH moves most with %s (%+.3f per +1 %%)", x.substance(),
                         x.dpHPerPercent())).orElse("");
         String setpoint = a.titrants().stream().filter(x -> x.setpointForTarget().isPresent()).findFirst()
                 .map(x -> String.format(Locale.ROOT, "; adjusting to pH %.2f at %.0f °C instead of %.2f would meet it",
-                        x.setpointForTarget().getAsDouble(), x.adjustKelvin() - 273.15, x.goalPH())).orElse("");
+                        x.setpointForTarget().getAsDouble(), x.adjustKelvin() - Thermo.KELVIN_OFFSET, x.goalPH())).orElse("");
         String co2 = at.get().co2ForTarget().isPresent() ? String.format(Locale.ROOT,
                 "; a CO2 level of %.3g kPa (%.2g %% at standard pressure) would give pH %.2f with this bicarbonate",
                 at.get().co2ForTarget().getAsDouble() / 1000, at.get().co2ForTarget().getAsDouble() / 1013.25,

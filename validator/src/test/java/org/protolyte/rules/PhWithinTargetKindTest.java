@@ -95,6 +95,17 @@ class PhWithinTargetKindTest {
                 "/components/0", 0)), a.drifts(), a.titratableAcidity(), a.robustness(), a.working());
         String none = at(flat, c -> Analyses.pH(c, 7.5)).get(0).message();
         assertEquals("pH at 25 °C is 7.50, target 6.80 to 7.00", none);
+        // a lever that rounds to zero at three decimals ("-0.000 per +1 %") is no lever to name; one that shows is
+        for (double dpH : new double[] {-0.0004999, 0.0004999}) {
+            FormulationAnalysis tiny = new FormulationAnalysis(a.recipe(), a.solution(), a.conditions(), List.of(),
+                    a.caveats(), a.assumptions(), List.of(new org.protolyte.analysis.Sensitivity("sodium chloride",
+                    "/components/0", dpH)), a.drifts(), a.titratableAcidity(), a.robustness(), a.working());
+            assertEquals("pH at 25 °C is 7.50, target 6.80 to 7.00", at(tiny, c -> Analyses.pH(c, 7.5)).get(0).message());
+        }
+        FormulationAnalysis shows = new FormulationAnalysis(a.recipe(), a.solution(), a.conditions(), List.of(),
+                a.caveats(), a.assumptions(), List.of(new org.protolyte.analysis.Sensitivity("sodium chloride",
+                "/components/0", -0.0005)), a.drifts(), a.titratableAcidity(), a.robustness(), a.working());
+        assertTrue(at(shows, c -> Analyses.pH(c, 7.5)).get(0).message().endsWith("(-0.001 per +1 %)"));
     }
 
     @Test
