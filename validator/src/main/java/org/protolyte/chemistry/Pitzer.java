@@ -41,7 +41,7 @@ public final class Pitzer {
 
     /** The ions the parameters cover; a solution whose ionic strength comes from others is not for this model. */
     public static boolean covers(String ion) {
-        return ion.equals("Na+") || ion.equals("K+") || ion.equals("Cl-");
+        return salineIndex(ion) >= 0;
     }
 
     /**
@@ -61,6 +61,21 @@ public final class Pitzer {
         sum += k * cl * (bPhi(SALTS.get("K+|Cl-"), s) + z * SALTS.get("K+|Cl-").cPhi() / 2);
         sum += na * k * (THETA_NA_K + cl * PSI_NA_K_CL);
         return OptionalDouble.of(1 + 2 * sum / (na + k + cl));
+    }
+
+    /** Where a free ion sits in {@link #osmoticCoefficient}'s arguments: 0 Na+, 1 K+, 2 Cl-; −1 if not covered. */
+    public static int salineIndex(String ion) {
+        return switch (ion) {
+            case "Na+" -> 0;
+            case "K+" -> 1;
+            case "Cl-" -> 2;
+            default -> -1;
+        };
+    }
+
+    /** Mean activity coefficient of sodium chloride at molality m: the reference electrolyte of saline solutions. */
+    public static double sodiumChlorideMeanActivityCoefficient(double m, double kelvin) {
+        return meanActivityCoefficient("Na+", m, kelvin);
     }
 
     /** Mean activity coefficient of a single 1:1 salt ("Na+" or "K+" with "Cl-") at molality m. */

@@ -1,0 +1,173 @@
+package org.protolyte.chemistry;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * Where a solved condition stops being trustworthy: below the freezing point, outside water's range, constants used
+ * beyond their data, an ionic strength beyond the activity model. A warning keeps the number with reduced accuracy;
+ * an indeterminate caveat means no number can be given.
+ */
+final class ValidityJudge {
+
+    /** A generous bound on a pKa extrapolated a few kelvin beyond its data (common practice), and the pH effect below
+     *  which a component's constants outside their range do not void the result. */
+    static final double EXTRAPOLATION_ERROR = 0.1;
+    static final double MINOR_PH_EFFECT = 0.005;
+    /**
+     * How far (K) a complex's constant is carried beyond its data with a warning rather than no result: an ion pair's
+     * ΔH° of a few kJ/mol moves its log K by about 0.1 over 20 K (van 't Hoff, derived), the size of its own uncertainty,
+     * and the complexes correct an acid–base speciation whose own constants are valid there.
+     */
+    static final double COMPLEX_EXTRAPOLATION = 25;
+    /**
+     * The pH error per unit error in a single-ion log γ at the step that usually carries a buffer: the squared charges
+     * of H2PO4- and HPO4-2 differ by 3 (log aH = log Ka + log(m_acid/m_base) + Δz²·f, derived from the mass-action law).
+     */
+    private static final int PHOSPHATE_CHARGE_SQUARES = 3;
+
+    private ValidityJudge() {
+    }
+
+    /**
+     * Below the freezing point ice forms and a liquid-state pH means nothing. With one component per species the
+     * particle molality is Σ T_C whatever the pH, so this is known before solving.
+     */
+    static void checkNotFrozen(double[] totals, double kelvin) {
+        double particles = 0;
+        for (double t : totals) {
+            particles += t;
+        }
+        double tf = Cryoscopy.freezingPointKelvin(particles);
+        if (kelvin < tf) {
+            throw new IndeterminateException(Caveat.indeterminate("below-freezing-point", String.format(Locale.ROOT,
+                    "%.1f °C is below the estimated freezing point of the solution (%.2f °C): ice forms and a "
+                            + "liquid-state pH means nothing there",
+                    kelvin - Thermo.KELVIN_OFFSET, tf - Thermo.KELVIN_OFFSET)));
+        }
+    }
+
+    /** Water's own range: outside it nothing can be said. */
+    static void checkWaterRange(double kelvin) {
+        if (!Water.VALIDITY.contains(kelvin)) {
+            throw new IndeterminateException(Caveat.indeterminate("temperature-out-of-range", String.format(
+                    Locale.ROOT, "%.1f °C is outside %s, where the water properties used are valid",
+                    kelvin - Thermo.KELVIN_OFFSET, Water.VALIDITY)));
+        }
+    }
+
+    /**
+     * Above the warning limit the pH keeps the activity model: the buffer ions have no Pitzer parameters here. The
+     * error to expect is derived from the two models where both exist: Δ = |log10 γ±(model) − log10 γ±(Pitzer, NaCl)|
+     * at this ionic strength, taken as the error per unit z² of a single-ion log γ; a step whose forms differ by Δz² in
+     * squared charge is then off by about Δz²·Δ in pH.
+     */
+    static List<Caveat> ionicStrength(PreparedProblem p, double i) {
+        List<Caveat> out = new ArrayList<>();
+        ActivityModel activity = p.activity;
+        if (i > activity.indeterminateAbove()) {
+            out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg, where the %s equation cannot be trusted",
+                    i, activity.indeterminateAbove(), activity.name())));
+        } else if (i > activity.warnAbove()) {
+            double t = Pitzer.VALIDITY.contains(p.kelvin) ? p.kelvin : Thermo.T_REF;
+            double delta = Math.abs(activity.log10Gamma(1, i, p.debyeHuckelA)
+                    - Math.log10(Pitzer.sodiumChlorideMeanActivityCoefficient(i, t)));
+            out.add(Caveat.warning("ionic-strength-high", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg: the buffer ions have no Pitzer parameters here, so "
+                            + "the pH keeps the %s equation; at this ionic strength it differs from Pitzer by %.3f in "
+                            + "log γ± of sodium chloride, so expect an error of about %.2f pH where a step between "
+                            + "charges −1 and −2 carries the buffering (H2PO4-/HPO4-2), more for higher charges",
+                    i, activity.warnAbove(), activity.name(), delta, PHOSPHATE_CHARGE_SQUARES * delta)));
+        }
+        return out;
+    }
+
+    /**
+     * Components present whose constants are not valid at this temperature, judged at the solution (pH, I):
+     * indeterminate where the component carries a real share of the buffering, a warning where even a 0.1 error in its
+     * pKa would move the pH by less than 0.005 (dpH/dpKa_C = β_C/β, the component's share of the buffer capacity, see
+     * {@link Equilibrium}). A trace of indicator or a minor amino acid does not void a medium's pH; the buffer that sets
+     * it does. Refills the workspace's molalities at this pH.
+     */
+    static List<Caveat> temperature(Workspace ws, double pH, double ionicStrength, boolean describeMinor) {
+        PreparedProblem p = ws.p;
+        List<Caveat> out = new ArrayList<>();
+        List<String> minor = new ArrayList<>();
+        double t = p.kelvin - Thermo.KELVIN_OFFSET;
+        boolean[] reported = new boolean[p.components.length];
+        double beta = -1;
+        for (int i = 0; i < p.n; i++) {
+            int j = p.comp[i];
+            TemperatureRange v = p.sp[i].formation().validity();
+            if (p.complexParts[i] != null) {
+                if (!v.contains(p.kelvin)) {
+                    complexOutOfRange(ws, i, pH, ionicStrength, v, describeMinor, minor, out);
+                }
+                continue;
+            }
+            if (reported[j] || !(ws.total[j] > 0 || p.open(j)) || v.contains(p.kelvin)) {
+                continue;
+            }
+            reported[j] = true;
+            if (beta < 0) {
+                p.speciation.molalities(ws, pH);
+                beta = p.speciation.bufferSum(ws, pH);
+                if (p.complexes) {
+                    BufferCapacity.componentTerms(ws);
+                }
+            }
+            double share = p.open(j) ? 1 : Math.abs(ws.term[j]) / beta;
+            if (share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT) {
+                if (describeMinor) {
+                    minor.add(String.format(Locale.ROOT, "%s (%s, %.2g %% of β)", p.sp[i].name(), v, 100 * share));
+                }
+            } else {
+                out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
+                        "%.1f °C is outside %s, where the constants of %s are valid", t, v, p.sp[i].name())));
+            }
+        }
+        if (!minor.isEmpty()) {
+            out.add(Caveat.warning("temperature-out-of-range-minor", String.format(Locale.ROOT,
+                    "%.1f °C is outside the range of the constants of %s; each carries so little of the buffer "
+                            + "capacity that even a %.1f error in its pKa moves the pH by less than %.3f",
+                    t, String.join(", ", minor), EXTRAPOLATION_ERROR, MINOR_PH_EFFECT)));
+        }
+        return out;
+    }
+
+    /**
+     * A complex's constant outside its range: its own effect, found by moving its log β by the extrapolation bound and
+     * solving the charge balance again at the same activity coefficients, in a workspace of its own.
+     */
+    private static void complexOutOfRange(Workspace ws, int c, double pH, double ionicStrength, TemperatureRange v,
+                                          boolean describeMinor, List<String> minor, List<Caveat> out) {
+        PreparedProblem p = ws.p;
+        double t = p.kelvin - Thermo.KELVIN_OFFSET;
+        boolean near = p.kelvin > v.minKelvin() - COMPLEX_EXTRAPOLATION
+                && p.kelvin < v.maxKelvin() + COMPLEX_EXTRAPOLATION;
+        if (near && !describeMinor) {
+            return;             // a warning at most, and the fast path reports none: the effect is not needed
+        }
+        Workspace moved = new Workspace(p.withLogBetaShift(c, EXTRAPOLATION_ERROR));
+        System.arraycopy(ws.total, 0, moved.total, 0, ws.total.length);
+        System.arraycopy(ws.freeBasis, 0, moved.freeBasis, 0, ws.freeBasis.length);
+        moved.setActivityCoefficients(ionicStrength);
+        double effect = Math.abs(ChargeBalance.root(moved, pH) - pH);
+        if (effect < MINOR_PH_EFFECT) {
+            if (describeMinor) {
+                minor.add(String.format(Locale.ROOT, "%s (%s, pH effect %.1g)", p.sp[c].name(), v, effect));
+            }
+        } else if (near) {
+            out.add(Caveat.warning("temperature-out-of-range-complex", String.format(Locale.ROOT,
+                    "%.1f °C is outside %s, the data behind the constant of the complex %s; it is extrapolated by "
+                            + "van 't Hoff, and a %.1f error in its log K would move the pH by %.3f", t, v,
+                    p.sp[c].name(), EXTRAPOLATION_ERROR, effect)));
+        } else {
+            out.add(Caveat.indeterminate("temperature-out-of-range", String.format(Locale.ROOT,
+                    "%.1f °C is outside %s, where the constant of the complex %s is valid, and it moves the pH by "
+                            + "%.3f per %.1f in log K", t, v, p.sp[c].name(), effect, EXTRAPOLATION_ERROR)));
+        }
+    }
+}
