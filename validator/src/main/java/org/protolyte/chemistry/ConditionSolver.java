@@ -29,6 +29,8 @@ final class ConditionSolver {
 
     final Workspace ws;
     private final PreparedProblem p;
+    /** The last self-consistent solution {pH, I}, or null (none yet, or the last was at a fixed I). */
+    private double[] last;
 
     ConditionSolver(PreparedProblem p) {
         this.p = p;
@@ -38,8 +40,10 @@ final class ConditionSolver {
     /** The full state with its caveats, the activity coefficients self-consistent (NaN) or at a fixed I. */
     EquilibriumState state(double fixedIonicStrength) {
         admissible();
+        last = null;
         double[] r = iterate(fixedIonicStrength, Double.NaN, Double.NaN);
         ws.setActivityCoefficients(r[1]);
+        last = Double.isNaN(fixedIonicStrength) ? r : null;
         List<Caveat> caveats = new ArrayList<>(ValidityJudge.temperature(ws, r[0], r[1], true));
         caveats.addAll(ValidityJudge.ionicStrength(p, r[1]));
         return state(r[0], r[1], caveats);
@@ -66,11 +70,22 @@ final class ConditionSolver {
 
     /** {pH, I} self-consistent from a nearby solution (or null), the activity coefficients left at that I. */
     private double[] converge(Equilibrium.Point warm) {
+        last = null;
         admissible();
         double[] r = warm == null ? iterate(Double.NaN, Double.NaN, Double.NaN)
                 : iterate(Double.NaN, warm.pH(), warm.ionicStrength());
         ws.setActivityCoefficients(r[1]);
+        last = r;
         return r;
+    }
+
+    /** The derivatives of the last self-consistent solution. */
+    Derivatives derivatives() {
+        if (last == null) {
+            throw new IllegalStateException("no self-consistent solution to differentiate");
+        }
+        ws.setActivityCoefficients(last[1]);
+        return new Derivatives(ws, last[0], last[1]);
     }
 
     /** What no number can be given for, known before solving. */

@@ -191,50 +191,14 @@ final class CoupledSpeciation implements Speciation {
     public double bufferSum(Workspace ws, double pH) {
         PreparedProblem p = ws.p;
         int nc = p.components.length;
-        double[] m = ws.m;
-        double[] rhs = ws.sumRhs;                 // Σ_s ν_sj p_s m_s
-        double[] chargeWeight = ws.sumCharge;     // Σ_s z_s ν_sj m_s
-        double[] diagonal = ws.sumDiagonal;       // Σ_s ν_sj² m_s
-        Arrays.fill(rhs, 0);
-        Arrays.fill(chargeWeight, 0);
-        Arrays.fill(diagonal, 0);
         int[] position = ws.sumPosition;          // index in the coupled block, or −1
-        int u = 0;
-        for (int j = 0; j < nc; j++) {
-            position[j] = p.coupledComponent[j] && !p.open(j) && ws.total[j] > 0 ? u++ : -1;
-        }
+        int u = positions(p, ws.total, position);
+        double[] rhs = ws.sumRhs;
+        double[] chargeWeight = ws.sumCharge;
+        double[] diagonal = ws.sumDiagonal;
         double[][] block = ws.sumBlock;
-        for (int q = 0; q < u; q++) {
-            Arrays.fill(block[q], 0, u, 0);
-        }
-        double direct = ws.hydrogen(pH) + ws.hydroxide(pH);   // −(∂f/∂pH at fixed b)/ln10
-        for (int i = 0; i < p.n; i++) {
-            direct += p.charge[i] * p.protons[i] * m[i];
-            if (p.complexParts[i] == null) {
-                int j = p.comp[i];
-                rhs[j] += p.protons[i] * m[i];
-                chargeWeight[j] += p.charge[i] * m[i];
-                diagonal[j] += m[i];
-                continue;
-            }
-            int[] parts = p.complexParts[i];
-            int[] counts = p.complexCounts[i];
-            for (int x = 0; x < parts.length; x++) {
-                int j = parts[x];
-                rhs[j] += counts[x] * p.protons[i] * m[i];
-                chargeWeight[j] += p.charge[i] * counts[x] * m[i];
-                diagonal[j] += counts[x] * counts[x] * m[i];
-                for (int y = 0; y < parts.length; y++) {
-                    int k = parts[y];
-                    if (position[j] >= 0 && position[k] >= 0 && k != j) {
-                        block[position[j]][position[k]] += counts[x] * counts[y] * m[i];
-                    } else if (position[j] >= 0 && p.open(k)) {
-                        // an open component's slope is known: its column moves to the right-hand side
-                        rhs[j] -= counts[x] * counts[y] * m[i] * p.protons[p.fixedIndex[k]];
-                    }
-                }
-            }
-        }
+        double direct = accumulate(p, ws.m, ws.hydrogen(pH) + ws.hydroxide(pH), position, u, rhs, chargeWeight,
+                diagonal, block);
         double[] d = ws.basisSlope;               // d ln b_j/dpH, divided by ln10
         Arrays.fill(d, 0);
         double[] y = ws.sumY;
@@ -261,5 +225,58 @@ final class CoupledSpeciation implements Speciation {
             sum -= chargeWeight[k] * d[k];
         }
         return sum;
+    }
+
+    /** Each closed coupled component present gets its index in the block; returns how many. */
+    static int positions(PreparedProblem p, double[] total, int[] position) {
+        int u = 0;
+        for (int j = 0; j < p.components.length; j++) {
+            position[j] = p.coupledComponent[j] && !p.open(j) && total[j] > 0 ? u++ : -1;
+        }
+        return u;
+    }
+
+    /**
+     * The sums of {@link #bufferSum}, all linear in the molalities {@code x} (so the same code gives their slopes from
+     * the slopes of x): per component Σ_s ν_sj p_s x_s (rhs), Σ_s z_s ν_sj x_s, Σ_s ν_sj² x_s, the coupled block's
+     * off-diagonal Σ_s ν_sj ν_sk x_s; returns {@code start} + Σ_s z_s p_s x_s.
+     */
+    static double accumulate(PreparedProblem p, double[] x, double start, int[] position, int u, double[] rhs,
+                             double[] chargeWeight, double[] diagonal, double[][] block) {
+        Arrays.fill(rhs, 0);
+        Arrays.fill(chargeWeight, 0);
+        Arrays.fill(diagonal, 0);
+        for (int q = 0; q < u; q++) {
+            Arrays.fill(block[q], 0, u, 0);
+        }
+        double direct = start;
+        for (int i = 0; i < p.n; i++) {
+            direct += p.charge[i] * p.protons[i] * x[i];
+            if (p.complexParts[i] == null) {
+                int j = p.comp[i];
+                rhs[j] += p.protons[i] * x[i];
+                chargeWeight[j] += p.charge[i] * x[i];
+                diagonal[j] += x[i];
+                continue;
+            }
+            int[] parts = p.complexParts[i];
+            int[] counts = p.complexCounts[i];
+            for (int a = 0; a < parts.length; a++) {
+                int j = parts[a];
+                rhs[j] += counts[a] * p.protons[i] * x[i];
+                chargeWeight[j] += p.charge[i] * counts[a] * x[i];
+                diagonal[j] += counts[a] * counts[a] * x[i];
+                for (int b = 0; b < parts.length; b++) {
+                    int k = parts[b];
+                    if (position[j] >= 0 && position[k] >= 0 && k != j) {
+                        block[position[j]][position[k]] += counts[a] * counts[b] * x[i];
+                    } else if (position[j] >= 0 && p.open(k)) {
+                        // an open component's slope is known: its column moves to the right-hand side
+                        rhs[j] -= counts[a] * counts[b] * x[i] * p.protons[p.fixedIndex[k]];
+                    }
+                }
+            }
+        }
+        return direct;
     }
 }

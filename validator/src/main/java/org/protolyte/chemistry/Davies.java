@@ -21,6 +21,16 @@ public final class Davies implements ActivityModel {
         return -a * charge * charge * (s / (1 + s) - 0.3 * ionicStrength);
     }
 
+    /** d/dI of the above: −A z² (1/(2√I (1+√I)²) − 0.3), derived. */
+    @Override
+    public double log10GammaSlope(int charge, double ionicStrength, double a) {
+        if (charge == 0) {
+            return 0;
+        }
+        double s = Math.sqrt(ionicStrength);
+        return -a * charge * charge * (1 / (2 * s * (1 + s) * (1 + s)) - 0.3);
+    }
+
     /**
      * With ln γ_i = z_i² f(I), f = −A ln10 (√I/(1+√I) − 0.3 I), the excess Gibbs energy is 2 F(I), F = ∫₀^I f, and
      * Gibbs–Duhem gives Σ m_i (φ − 1) = 2 (I f − F), where ∫₀^I √x/(1+√x) dx = I − 2√I + 2 ln(1+√I) (derived here; the

@@ -62,6 +62,18 @@ public final class Equilibrium {
         return withStepShifts(Map.of(system, step(system, step, delta, 0)));
     }
 
+    /**
+     * The log β changes that raising one step's pKa by one makes: every species that carries that step's proton (the
+     * first {@code step + 1} of the system, most protonated first) by one. For {@link Derivatives#logBeta}.
+     */
+    public static Map<Species, Double> pKaShift(AcidBaseSystem system, int step) {
+        Map<Species, Double> out = new java.util.LinkedHashMap<>();
+        for (int i = 0; i <= step; i++) {
+            out.put(system.species().get(i), 1.0);
+        }
+        return out;
+    }
+
     /** The same with one step's ΔH° of ionization raised by {@code delta} J/mol: its pKa moves away from 25 °C. */
     public Equilibrium withDeltaHShift(AcidBaseSystem system, int step, double delta) {
         return withStepShifts(Map.of(system, step(system, step, 0, delta)));
@@ -192,6 +204,16 @@ public final class Equilibrium {
         public Point point(double[] totals, Point warm) {
             problem.load(totals, solver.ws.total);
             return solver.point(warm);
+        }
+
+        /**
+         * The derivatives of the last self-consistent solution of this problem (by {@link #solve} with NaN,
+         * {@link #point} or {@link #trial}): how its pH, I and β respond to the constants and the totals.
+         *
+         * @throws IllegalStateException where there is none
+         */
+        public Derivatives derivatives() {
+            return solver.derivatives();
         }
 
         /** The components, in the order {@link #point(double[], Point)} takes their totals. */

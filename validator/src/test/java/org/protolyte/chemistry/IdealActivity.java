@@ -15,6 +15,11 @@ public final class IdealActivity implements ActivityModel {
     }
 
     @Override
+    public double log10GammaSlope(int charge, double ionicStrength, double debyeHuckelA) {
+        return 0;
+    }
+
+    @Override
     public double warnAbove() {
         return Double.POSITIVE_INFINITY;
     }

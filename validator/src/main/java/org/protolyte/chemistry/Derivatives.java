@@ -1,0 +1,274 @@
+package org.protolyte.chemistry;
+
+import java.util.Map;
+
+/**
+ * Derivatives of a solved, self-consistent state by implicit differentiation (the implicit function theorem), not by
+ * solving again. The state is the root of two equations in pH and I, the species following from the mass balances at
+ * the activity coefficients of I:
+ * <pre>
+ *   F = Σ z_s m_s + mH − mOH = 0,     G = I − ½ (Σ z_s² m_s + mH + mOH) = 0
+ * </pre>
+ * A change of a constant or an amount, θ, moves the species at fixed pH and I by dm/dθ (one linear solve of the mass
+ * balances, {@link #tangent}); then [F_pH F_I; G_pH G_I]·(dpH, dI) = −(F_θ, G_θ), and every figure that is a function
+ * of the molalities follows: dm = dm/dθ + dm/dpH·dpH + dm/dI·dI, and the buffer capacity by differentiating its own
+ * formula along dm ({@link CoupledSpeciation#bufferSum}, whose sums are linear in m).
+ *
+ * <p>At fixed b (the free basis of each component), ln m_s = ln β_s − p_s ln10·pH + Σ_j ν_sj (ln γ_j + ln b_j) − ln γ_s.
+ * A closed component's balance T_j = Σ_s ν_sj m_s gives Σ_k J_jk d ln b_k = dT_j − Σ_s ν_sj m_s g_s with
+ * J_jk = Σ_s ν_sj ν_sk m_s, g_s the change of ln m_s at fixed b; an open component's b follows its fixed species.
+ * Immutable: a snapshot of the state.
+ */
+public final class Derivatives {
+
+    /** The response of a state to a change: pH, ionic strength (mol/kg) and buffer capacity (mol/kg per pH). */
+    public record Response(double pH, double ionicStrength, double bufferCapacity) {
+    }
+
+    private final PreparedProblem p;
+    private final double[] m;
+    private final double[] total;
+    private final double mH;
+    private final double mOH;
+    private final double[] speciesSlope;     // ln10 · d log10 γ_s / dI
+    private final double[] componentSlope;   // ln10 · d log10 γ_j / dI of each component's free basis
+    private final double hydrogenSlope;
+    private final double hydroxideSlope;
+    private final Tangent byPH;
+    private final Tangent byI;
+    private final double determinant;
+
+    /** The species' changes at fixed pH and I, and what they do to F and Q = ½ Σ z² m. */
+    private record Tangent(double[] dm, double dmH, double dmOH, double f, double q) {
+    }
+
+    Derivatives(Workspace ws, double pH, double ionicStrength) {
+        p = ws.p;
+        m = p.speciation.molalities(ws, pH).clone();
+        total = ws.total.clone();
+        mH = ws.hydrogen(pH);
+        mOH = ws.hydroxide(pH);
+        speciesSlope = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            speciesSlope[i] = Thermo.LN10 * p.activity.log10GammaSlope(p.charge[i], ionicStrength, p.debyeHuckelA);
+        }
+        componentSlope = new double[p.components.length];
+        for (int j = 0; j < componentSlope.length; j++) {
+            componentSlope[j] = Thermo.LN10 * p.activity.log10GammaSlope(p.components[j].charge(), ionicStrength,
+                    p.debyeHuckelA);
+        }
+        hydrogenSlope = Thermo.LN10 * p.activity.log10GammaSlope(1, ionicStrength, p.debyeHuckelA);
+        hydroxideSlope = Thermo.LN10 * p.activity.log10GammaSlope(-1, ionicStrength, p.debyeHuckelA);
+        double[] g = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            g[i] = -Thermo.LN10 * p.protons[i];
+        }
+        byPH = tangent(g, new double[total.length], -Thermo.LN10, Thermo.LN10);
+        for (int i = 0; i < p.n; i++) {
+            double s = -speciesSlope[i];
+            if (p.complexParts[i] == null) {
+                s += componentSlope[p.comp[i]];
+            } else {
+                for (int q = 0; q < p.complexParts[i].length; q++) {
+                    s += p.complexCounts[i][q] * componentSlope[p.complexParts[i][q]];
+                }
+            }
+            g[i] = s;
+        }
+        byI = tangent(g, new double[total.length], -hydrogenSlope, -hydroxideSlope);
+        // [F_pH F_I; G_pH G_I] with G = I − Q
+        determinant = byPH.f() * (1 - byI.q()) + byI.f() * byPH.q();
+        if (!(Math.abs(determinant) > 0) || !Double.isFinite(determinant)) {
+            throw new IndeterminateException(Caveat.indeterminate("derivatives-singular",
+                    "the derivatives of this state cannot be computed: its balances are singular"));
+        }
+    }
+
+    /** The response to raising the log β of some species by the amounts given (per unit of the change). */
+    public Response logBeta(Map<Species, Double> shifts) {
+        double[] g = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            g[i] = Thermo.LN10 * shifts.getOrDefault(p.sp[i], 0.0);
+        }
+        return response(tangent(g, new double[total.length], 0, 0));
+    }
+
+    /** The response to raising pKw by one: Kw tenfold smaller. */
+    public Response pKw() {
+        return response(tangent(new double[p.n], new double[total.length], 0, -Thermo.LN10));
+    }
+
+    /** The response to changing the components' totals by {@code dTotals} (mol/kg, in the prepared order). */
+    public Response totals(double[] dTotals) {
+        if (dTotals.length != total.length) {
+            throw new IllegalArgumentException("expected " + total.length + " totals, got " + dTotals.length);
+        }
+        return response(tangent(new double[p.n], dTotals, 0, 0));
+    }
+
+    private Response response(Tangent t) {
+        // F_pH dpH + F_I dI = −F_θ;  −Q_pH dpH + (1 − Q_I) dI = Q_θ
+        double dpH = (-t.f() * (1 - byI.q()) - byI.f() * t.q()) / determinant;
+        double dI = (byPH.f() * t.q() - t.f() * byPH.q()) / determinant;
+        double[] dm = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            dm[i] = t.dm()[i] + byPH.dm()[i] * dpH + byI.dm()[i] * dI;
+        }
+        double dmH = t.dmH() + byPH.dmH() * dpH + byI.dmH() * dI;
+        double dmOH = t.dmOH() + byPH.dmOH() * dpH + byI.dmOH() * dI;
+        return new Response(dpH, dI, Thermo.LN10 * bufferSumSlope(dm, dmH + dmOH));
+    }
+
+    /**
+     * dm at fixed pH and I for sources g_s (change of ln m_s at fixed b), total changes dT and the changes of ln mH
+     * and ln mOH; with what they do to F and to Q = ½ (Σ z² m + mH + mOH).
+     */
+    private Tangent tangent(double[] g, double[] dT, double dLnH, double dLnOH) {
+        int nc = total.length;
+        double[] dLnB = new double[nc];
+        int[] position = new int[nc];
+        java.util.Arrays.fill(position, -1);
+        int u = 0;
+        for (int j = 0; j < nc; j++) {
+            if (p.open(j)) {
+                dLnB[j] = -g[p.fixedIndex[j]];          // its fixed species does not move
+            } else if (total[j] > 0 && p.complexes && p.coupledComponent[j]) {
+                position[j] = u++;
+            } else if (total[j] > 0) {
+                double own = 0;
+                for (int i = 0; i < p.n; i++) {
+                    if (p.comp[i] == j) {
+                        own += m[i] * g[i];
+                    }
+                }
+                dLnB[j] = (dT[j] - own) / total[j];
+            } else if (dT[j] != 0) {
+                throw new IndeterminateException(Caveat.indeterminate("derivatives-absent-component",
+                        "the derivative with respect to " + p.components[j].name() + " is not defined where it is absent"));
+            }
+        }
+        if (u > 0) {
+            double[][] jacobian = new double[u][u];
+            double[] rhs = new double[u];
+            for (int j = 0; j < nc; j++) {
+                if (position[j] >= 0) {
+                    rhs[position[j]] = dT[j];
+                }
+            }
+            for (int i = 0; i < p.n; i++) {
+                int[] parts = p.complexParts[i] == null ? new int[] {p.comp[i]} : p.complexParts[i];
+                int[] counts = p.complexParts[i] == null ? new int[] {1} : p.complexCounts[i];
+                for (int a = 0; a < parts.length; a++) {
+                    int row = position[parts[a]];
+                    if (row < 0) {
+                        continue;
+                    }
+                    rhs[row] -= counts[a] * m[i] * g[i];
+                    for (int b = 0; b < parts.length; b++) {
+                        int col = position[parts[b]];
+                        if (col >= 0) {
+                            jacobian[row][col] += counts[a] * counts[b] * m[i];
+                        } else if (p.open(parts[b])) {
+                            rhs[row] -= counts[a] * counts[b] * m[i] * dLnB[parts[b]];
+                        }
+                    }
+                }
+            }
+            LinearSolve.inPlace(jacobian, rhs, u);
+            for (int j = 0; j < nc; j++) {
+                if (position[j] >= 0) {
+                    dLnB[j] = rhs[position[j]];
+                }
+            }
+        }
+        double[] dm = new double[p.n];
+        double f = mH * dLnH - mOH * dLnOH;
+        double q = 0.5 * (mH * dLnH + mOH * dLnOH);
+        for (int i = 0; i < p.n; i++) {
+            double d = g[i];
+            if (p.complexParts[i] == null) {
+                d += dLnB[p.comp[i]];
+            } else {
+                for (int a = 0; a < p.complexParts[i].length; a++) {
+                    d += p.complexCounts[i][a] * dLnB[p.complexParts[i][a]];
+                }
+            }
+            dm[i] = m[i] * d;
+            f += p.charge[i] * dm[i];
+            q += 0.5 * p.charge[i] * p.charge[i] * dm[i];
+        }
+        return new Tangent(dm, mH * dLnH, mOH * dLnOH, f, q);
+    }
+
+    /**
+     * The change of β/ln10 along dm (and d(mH + mOH)), differentiating {@link CoupledSpeciation#bufferSum}: its sums are
+     * linear in m, its basis slopes d solve A·d = y, so dd = A⁻¹(dy − dA·d), and β/ln10 = direct − Σ_k c_k d_k. The same
+     * formula holds without complexes, where it equals the variance form Σ m (p − p̄)² (z − p is fixed within a system).
+     */
+    private double bufferSumSlope(double[] dm, double dWater) {
+        int nc = total.length;
+        int[] position = new int[nc];
+        int u = CoupledSpeciation.positions(p, total, position);
+        double[] rhs = new double[nc];
+        double[] charge = new double[nc];
+        double[] diagonal = new double[nc];
+        double[][] block = new double[u][u];
+        CoupledSpeciation.accumulate(p, m, 0, position, u, rhs, charge, diagonal, block);
+        double[] dRhs = new double[nc];
+        double[] dCharge = new double[nc];
+        double[] dDiagonal = new double[nc];
+        double[][] dBlock = new double[u][u];
+        double dDirect = CoupledSpeciation.accumulate(p, dm, dWater, position, u, dRhs, dCharge, dDiagonal, dBlock);
+        double[] d = new double[nc];
+        double[] dd = new double[nc];
+        double[] y = new double[u];
+        for (int j = 0; j < nc; j++) {
+            if (p.open(j)) {
+                d[j] = p.protons[p.fixedIndex[j]];
+            } else if (position[j] >= 0) {
+                block[position[j]][position[j]] = diagonal[j];
+                dBlock[position[j]][position[j]] = dDiagonal[j];
+                y[position[j]] = rhs[j];
+            } else if (diagonal[j] > 0) {
+                d[j] = rhs[j] / diagonal[j];
+                dd[j] = (dRhs[j] - dDiagonal[j] * d[j]) / diagonal[j];
+            }
+        }
+        if (u > 0) {
+            double[][] a = new double[u][];
+            for (int q = 0; q < u; q++) {
+                a[q] = block[q].clone();
+            }
+            LinearSolve.inPlace(a, y, u);
+            double[] z = new double[u];
+            for (int j = 0; j < nc; j++) {
+                if (position[j] >= 0) {
+                    d[j] = y[position[j]];
+                }
+            }
+            for (int j = 0; j < nc; j++) {
+                int r = position[j];
+                if (r < 0) {
+                    continue;
+                }
+                z[r] = dRhs[j];
+                for (int k = 0; k < nc; k++) {
+                    if (position[k] >= 0) {
+                        z[r] -= dBlock[r][position[k]] * d[k];
+                    }
+                }
+            }
+            LinearSolve.inPlace(block, z, u);
+            for (int j = 0; j < nc; j++) {
+                if (position[j] >= 0) {
+                    dd[j] = z[position[j]];
+                }
+            }
+        }
+        double sum = dDirect;
+        for (int k = 0; k < nc; k++) {
+            sum -= dCharge[k] * d[k] + charge[k] * dd[k];
+        }
+        return sum;
+    }
+}
