@@ -67,7 +67,9 @@ public final class Analyzer {
         Optional<Solution> working = recipe.formulation().dilution()
                 .map(d -> solution.diluted(d.factor(), recipe.makeUpKelvin()));
         working.ifPresent(w -> recipe.formulation().conditions().forEach(c -> results.add(condition(recipe, w, c))));
-        List<ConditionResult> all = new ConstantsPropagation(equilibrium).apply(recipe, solution, results);
+        List<Solution> solutions = new ArrayList<>(java.util.Collections.nCopies(n, solution));
+        working.ifPresent(w -> solutions.addAll(java.util.Collections.nCopies(n, w)));
+        List<ConditionResult> all = new ConstantsPropagation(this).apply(recipe, solution, results, solutions, titrants);
         List<ConditionResult> own = all.subList(0, n);
         Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
                 recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
@@ -113,44 +115,6 @@ public final class Analyzer {
             }
         }
         return new Forecast(out, states, caveats);
-    }
-
-    /**
-     * pH and buffer capacity (mol/L per pH) of every condition, q.s. included, then of every condition of the working
-     * solution where the document is a concentrate; NaN where not determinate.
-     */
-    double[][] core(Recipe recipe) {
-        List<Caveat> ignored = new ArrayList<>();
-        Map<Ingredient, Double> doses = new HashMap<>();
-        try {
-            if (!recipe.titrants().isEmpty()) {
-                adjust(recipe, ignored).forEach(t -> doses.put(t.ingredient(), t.moles()));
-            }
-        } catch (DocumentException e) {
-            // caught: a moved constant that makes the q.s. fail leaves this world out; the caller then reports the
-            // uncertainty as not computed
-            return null;
-        }
-        Solution concentrate = recipe.solution(doses);
-        List<Formulation.Condition> conditions = recipe.formulation().conditions();
-        int n = conditions.size();
-        Optional<Solution> working = recipe.formulation().dilution()
-                .map(d -> concentrate.diluted(d.factor(), recipe.makeUpKelvin()));
-        double[][] out = new double[2][working.isPresent() ? 2 * n : n];
-        for (int i = 0; i < out[0].length; i++) {
-            Formulation.Condition c = conditions.get(i % n);
-            Solution solution = i < n ? concentrate : working.orElseThrow();
-            try {
-                EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal());
-                out[0][i] = s.pH();
-                out[1][i] = s.bufferCapacity() * solution.waterKg() / solution.volumeLitres(c.kelvin());
-            } catch (IndeterminateException e) {
-                // caught: NaN marks the condition, whose uncertainty the caller then reports as not computed
-                out[0][i] = Double.NaN;
-                out[1][i] = Double.NaN;
-            }
-        }
-        return out;
     }
 
     /** Where adjustTo states its own pH and the target is missed: the setpoint that would meet the target. */
@@ -697,6 +661,17 @@ public final class Analyzer {
                 "the q.s. to pH %.2f needs %.1f mL of the %.3g mol/L %s stock, more than the %.1f mL of solution the "
                         + "recipe makes; use a stronger stock", goalPH, moles / t.stockMolarity() * 1000,
                 t.stockMolarity(), t.substance().name(), basis.amount() * 1000), startPH, startPH));
+    }
+
+    /** Where the q.s. of a titrant is judged: the temperature, CO2 state and fraction of the final volume. */
+    record Goal(double kelvin, OptionalDouble co2, double volumeFraction) {
+    }
+
+    /** The goal of a titrant's q.s., as {@link #dose} meets it. */
+    static Goal goal(Recipe recipe, TitrantResult t) {
+        Formulation.Adjustment adj = t.ingredient().line().adjustTo().orElseThrow();
+        boolean explicit = adj.pH().isPresent();
+        return new Goal(t.goalKelvin(), goalCo2(recipe, explicit, t.goalKelvin()), explicit ? adj.atVolume() : 1);
     }
 
     /** The meter reads a closed sample while adjusting; the target holds in the CO2 state of its condition. */

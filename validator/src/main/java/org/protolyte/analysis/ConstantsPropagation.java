@@ -1,114 +1,220 @@
 package org.protolyte.analysis;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
 
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Caveat;
+import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.Derivatives;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.chemistry.Species;
+import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
 
-/** The pH's uncertainty from the constants: see {@link Uncertainty} for what it covers. */
+/**
+ * The pH's uncertainty from the constants (see {@link Uncertainty} for what it covers), by linear propagation with
+ * derivatives from implicit differentiation ({@link Derivatives}): each pKa used, each ΔH° that has an uncertainty,
+ * each complex's log K and pKw, moved by its standard uncertainty u, gives at each condition
+ * <pre>
+ *   c = ∂pH/∂θ·u + ∂pH/∂n · dn/dθ·u,     dn/dθ = −(∂pH_goal/∂θ)/(∂pH_goal/∂n)
+ * </pre>
+ * where n is the q.s. dose, held to its goal pH (the implicit function theorem once more); the changes add in
+ * quadrature with the covariance of a step's pKa and ΔH° (u² = Σ c_i² + 2ρ c_pKa c_ΔH; they come from one fit).
+ */
 final class ConstantsPropagation {
 
-    /** pH changes smaller than this are not resolved by the solver. */
+    /** pH changes smaller than this are below the solver's resolution: none, so that a report is the same every run. */
     static final double PH_RESOLUTION = 1e-9;
 
-    private final Equilibrium equilibrium;
+    private final Analyzer analyzer;
 
-    ConstantsPropagation(Equilibrium equilibrium) {
-        this.equilibrium = equilibrium;
+    ConstantsPropagation(Analyzer analyzer) {
+        this.analyzer = analyzer;
     }
 
-    /**
-     * Linear propagation of the constants' standard uncertainties: each pKa used, each ΔH° that has an uncertainty,
-     * each complex's log K, and pKw moved by its uncertainty, the q.s. and every condition solved again, the changes added in quadrature
-     * with the covariance of a step's pKa and ΔH° (u² = Σ c_i² + 2ρ c_pKa c_ΔH; they come from one fit).
-     */
-    List<ConditionResult> apply(Recipe recipe, Solution solution, List<ConditionResult> results) {
-        record Perturbation(String name, double u, Equilibrium equilibrium, int pair, double correlation) {
-        }
-        List<Perturbation> perturbations = new ArrayList<>();
+    /** One constant moved by its uncertainty: its response at a state of a given temperature. */
+    interface Move {
+        Derivatives.Response at(Derivatives d, double kelvin);
+    }
+
+    record Perturbation(String name, double u, Move move, int pair, double correlation) {
+    }
+
+    /** The constants whose uncertainties count for this recipe, in a fixed order (systems by name). */
+    static List<Perturbation> perturbations(Recipe recipe, Solution solution) {
+        List<Perturbation> out = new ArrayList<>();
         boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
         List<AcidBaseSystem> systems = new ArrayList<>(recipe.library().systems());
-        systems.sort(java.util.Comparator.comparing(AcidBaseSystem::name));
+        systems.sort(Comparator.comparing(AcidBaseSystem::name));
         for (AcidBaseSystem sys : systems) {
-            boolean used = solution.totals().getOrDefault(sys.basis(), 0.0) > 0 || anyCo2 && sys.name().equals(Analyzer.CARBONATE);
+            boolean used = solution.totals().getOrDefault(sys.basis(), 0.0) > 0
+                    || anyCo2 && sys.name().equals(Analyzer.CARBONATE);
             for (int k = 0; used && k < sys.steps().size(); k++) {
                 DissociationStep step = sys.steps().get(k);
                 String name = sys.name() + (sys.steps().size() > 1 ? " pKa" + (k + 1) : " pKa");
-                int pair = perturbations.size();
-                if (step.uncertainty() > 0) {
-                    perturbations.add(new Perturbation(name, step.uncertainty(),
-                            equilibrium.withPKaShift(sys, k, step.uncertainty()), -1, 0));
+                Map<Species, Double> carried = Equilibrium.pKaShift(sys, k);
+                int pair = out.size();
+                double u = step.uncertainty();
+                if (u > 0) {
+                    out.add(new Perturbation(name, u, (d, kelvin) -> scaled(d.logBeta(carried), u), -1, 0));
                 }
-                if (step.deltaHUncertainty() > 0) {
-                    boolean paired = step.uncertainty() > 0 && step.correlation() != 0;
-                    perturbations.add(new Perturbation(name.replace("pKa", "ΔH°"), step.deltaHUncertainty() / 1000,
-                            equilibrium.withDeltaHShift(sys, k, step.deltaHUncertainty()), paired ? pair : -1,
-                            step.correlation()));
+                double uH = step.deltaHUncertainty();
+                if (uH > 0) {
+                    boolean paired = u > 0 && step.correlation() != 0;
+                    out.add(new Perturbation(name.replace("pKa", "ΔH°"), uH / 1000, (d, kelvin) ->
+                            scaled(d.logBeta(carried), DissociationStep.pKaChangeFromDeltaH(uH, kelvin)),
+                            paired ? pair : -1, step.correlation()));
                 }
             }
         }
         for (Species complex : solution.species()) {       // complexes, ion pairs and esters the recipe forms
-            if (complex.isComplex() && complex.formation().uncertainty() > 0) {
-                perturbations.add(new Perturbation(complex.name() + " log K", complex.formation().uncertainty(),
-                        equilibrium.withLogKShift(complex, complex.formation().uncertainty()), -1, 0));
+            double u = complex.formation().uncertainty();
+            if (complex.isComplex() && u > 0) {
+                out.add(new Perturbation(complex.name() + " log K", u,
+                        (d, kelvin) -> scaled(d.logBeta(Map.of(complex, 1.0)), u), -1, 0));
             }
         }
-        perturbations.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
-                equilibrium.withPKwShift(Equilibrium.PKW_UNCERTAINTY), -1, 0));
-        int n = results.size();
-        double[] pH2 = new double[n];
-        double[] beta2 = new double[n];
-        double[][] dpHs = new double[perturbations.size()][n];
-        double[][] dBetas = new double[perturbations.size()][n];
-        List<List<Uncertainty.Contribution>> parts = new ArrayList<>();
-        for (int i = 0; i < n; i++) {
-            parts.add(new ArrayList<>());
+        out.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
+                (d, kelvin) -> scaled(d.pKw(), Equilibrium.PKW_UNCERTAINTY), -1, 0));
+        return out;
+    }
+
+    private static Derivatives.Response scaled(Derivatives.Response r, double f) {
+        return new Derivatives.Response(r.pH() * f, r.ionicStrength() * f, r.bufferCapacity() * f);
+    }
+
+    /**
+     * A solved condition, differentiated: its derivatives, and for a q.s. dose n the slope of its totals (mol/kg per
+     * mol) and of its water per litre (kg/L per mol), from the moles and the water mass, which are affine in n.
+     */
+    private record Differentiated(Derivatives d, double kelvin, double[] dTotalsPerMole, double waterPerLitre,
+                                  double dWaterPerLitrePerMole) {
+        Derivatives.Response perMole() {
+            return d.totals(dTotalsPerMole);
         }
-        boolean[] failed = new boolean[n];
-        for (int q = 0; q < perturbations.size(); q++) {
-            Perturbation p = perturbations.get(q);
-            double[][] moved = new Analyzer(p.equilibrium()).core(recipe);
-            for (int i = 0; i < n; i++) {
-                ConditionResult r = results.get(i);
-                if (!r.determinate() || moved == null || Double.isNaN(moved[0][i])) {
-                    failed[i] = true;
-                    continue;
+    }
+
+    private Differentiated differentiate(Recipe recipe, Solution at, Optional<Solution> moved, double step,
+                                         double kelvin, OptionalDouble co2) {
+        Equilibrium.Prepared p = analyzer.prepare(recipe, at, kelvin, co2, java.util.Set.of());
+        p.trial(at.totals(), null);
+        Derivatives d = p.derivatives();
+        List<Component> order = p.components();
+        double[] slope = new double[order.size()];
+        double perLitre = at.waterKg() / at.volumeLitres(kelvin);
+        double dPerLitre = 0;
+        if (moved.isPresent()) {
+            Solution m = moved.get();
+            double w0 = at.waterKg();
+            double dWater = (m.waterKg() - w0) / step;
+            for (int j = 0; j < slope.length; j++) {
+                double t0 = at.totals().getOrDefault(order.get(j), 0.0);
+                double dMoles = (m.totals().getOrDefault(order.get(j), 0.0) * m.waterKg() - t0 * w0) / step;
+                slope[j] = (dMoles - t0 * dWater) / w0;      // T = n/m_w with n and m_w affine in the dose
+            }
+            double v0 = at.volumeLitres(kelvin);
+            double dVolume = (m.volumeLitres(kelvin) - v0) / step;
+            dPerLitre = (dWater * v0 - w0 * dVolume) / (v0 * v0);
+        }
+        return new Differentiated(d, kelvin, slope, perLitre, dPerLitre);
+    }
+
+    /**
+     * @param solutions the solution of each result (the concentrate's, then the working solution's)
+     * @param titrants  the q.s. results: the one dosed (moles &gt; 0, goal reached) is held to its goal
+     */
+    List<ConditionResult> apply(Recipe recipe, Solution concentrate, List<ConditionResult> results,
+                                List<Solution> solutions, List<TitrantResult> titrants) {
+        List<Perturbation> perturbations = perturbations(recipe, concentrate);
+        Optional<TitrantResult> dosed = titrants.stream()
+                .filter(t -> t.used() && t.unreachable().isEmpty() && t.moles() > 0).findFirst();
+        int n = results.size();
+        // dn per perturbation, where a dose is held to its goal
+        double[] dDose = new double[perturbations.size()];
+        double step = dosed.map(t -> t.moles() * 1e-3).orElse(0.0);
+        boolean doseFailed = false;
+        if (dosed.isPresent()) {
+            TitrantResult t = dosed.get();
+            Analyzer.Goal goal = Analyzer.goal(recipe, t);
+            try {
+                Solution at = recipe.solution(Map.of(t.ingredient(), t.moles()), goal.volumeFraction());
+                Solution more = recipe.solution(Map.of(t.ingredient(), t.moles() + step), goal.volumeFraction());
+                Differentiated g = differentiate(recipe, at, Optional.of(more), step, goal.kelvin(), goal.co2());
+                double perMole = g.perMole().pH();
+                for (int q = 0; q < perturbations.size(); q++) {
+                    dDose[q] = -perturbations.get(q).move().at(g.d(), g.kelvin()).pH() / perMole;
                 }
-                // below the solver's pH resolution (Equilibrium settles to 1e-9) a change is rounding, which varies
-                // with how the JVM compiled the maths: none, so that a report is the same from one run to the next
-                double raw = moved[0][i] - r.state().orElseThrow().pH();
-                double dpH = Math.abs(raw) < PH_RESOLUTION ? 0 : raw;
-                double dBeta = moved[1][i] - r.bufferCapacityPerLitre();
-                dpHs[q][i] = dpH;
-                dBetas[q][i] = dBeta;
-                pH2[i] += dpH * dpH;
-                beta2[i] += dBeta * dBeta;
-                if (p.pair() >= 0) {        // the covariance term with the same step's pKa
-                    pH2[i] += 2 * p.correlation() * dpH * dpHs[p.pair()][i];
-                    beta2[i] += 2 * p.correlation() * dBeta * dBetas[p.pair()][i];
-                }
-                parts.get(i).add(new Uncertainty.Contribution(p.name(), p.u(), dpH));
+                doseFailed = !(Math.abs(perMole) > 0);
+            } catch (IndeterminateException | IllegalStateException e) {
+                // caught: a q.s. that cannot be differentiated leaves every condition without its uncertainty, which
+                // each one then says (below)
+                doseFailed = true;
             }
         }
         List<ConditionResult> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
-            if (failed[i]) {
-                out.add(results.get(i).determinate() ? results.get(i).withCaveat(Caveat.warning("uncertainty-not-computed",
-                        "the uncertainty from the constants could not be computed here: the pH is shown without it"))
-                        : results.get(i));
+            ConditionResult r = results.get(i);
+            if (!r.determinate()) {
+                out.add(r);
                 continue;
             }
-            List<Uncertainty.Contribution> c = new ArrayList<>(parts.get(i));
-            c.sort(java.util.Comparator.comparingDouble((Uncertainty.Contribution x) -> -Math.abs(x.pHChange())));
-            out.add(results.get(i).withUncertainty(new Uncertainty(Math.sqrt(Math.max(0, pH2[i])),
-                    Math.sqrt(Math.max(0, beta2[i])), c)));
+            boolean working = i >= recipe.formulation().conditions().size();    // the diluted working solution's
+            Optional<Uncertainty> u = doseFailed ? Optional.empty()
+                    : uncertainty(recipe, r, solutions.get(i), dosed, step, perturbations, dDose, working);
+            out.add(u.map(r::withUncertainty).orElseGet(() -> r.withCaveat(Caveat.warning("uncertainty-not-computed",
+                    "the uncertainty from the constants could not be computed here: the pH is shown without it"))));
         }
         return out;
+    }
+
+    private Optional<Uncertainty> uncertainty(Recipe recipe, ConditionResult r, Solution solution,
+                                              Optional<TitrantResult> dosed, double step, List<Perturbation> perturbations,
+                                              double[] dDose, boolean working) {
+        Differentiated c;
+        try {
+            Optional<Solution> more = dosed.map(t -> {
+                Solution s = recipe.solution(Map.of(t.ingredient(), t.moles() + step));
+                return working ? s.diluted(recipe.formulation().dilution().orElseThrow().factor(), recipe.makeUpKelvin())
+                        : s;
+            });
+            c = differentiate(recipe, solution, more, step, r.condition().kelvin(), r.condition().co2Pascal());
+        } catch (IndeterminateException | IllegalStateException e) {
+            // caught: this condition's uncertainty is not computed, which the caller says in a caveat
+            return Optional.empty();
+        }
+        Derivatives.Response perMole = dosed.isPresent() ? c.perMole() : new Derivatives.Response(0, 0, 0);
+        double beta = r.bufferCapacityPerLitre() / c.waterPerLitre();         // mol/kg per pH
+        double pH2 = 0;
+        double beta2 = 0;
+        double[] dpHs = new double[perturbations.size()];
+        double[] dBetas = new double[perturbations.size()];
+        List<Uncertainty.Contribution> parts = new ArrayList<>();
+        for (int q = 0; q < perturbations.size(); q++) {
+            Perturbation p = perturbations.get(q);
+            Derivatives.Response own = p.move().at(c.d(), c.kelvin());
+            double raw = own.pH() + perMole.pH() * dDose[q];
+            double dpH = Math.abs(raw) < PH_RESOLUTION ? 0 : raw;
+            double dBeta = (own.bufferCapacity() + perMole.bufferCapacity() * dDose[q]) * c.waterPerLitre()
+                    + beta * c.dWaterPerLitrePerMole() * dDose[q];
+            dpHs[q] = dpH;
+            dBetas[q] = dBeta;
+            pH2 += dpH * dpH;
+            beta2 += dBeta * dBeta;
+            if (p.pair() >= 0) {        // the covariance term with the same step's pKa
+                pH2 += 2 * p.correlation() * dpH * dpHs[p.pair()];
+                beta2 += 2 * p.correlation() * dBeta * dBetas[p.pair()];
+            }
+            parts.add(new Uncertainty.Contribution(p.name(), p.u(), dpH));
+        }
+        parts.sort(Comparator.comparingDouble((Uncertainty.Contribution x) -> -Math.abs(x.pHChange())));
+        return Optional.of(new Uncertainty(Math.sqrt(Math.max(0, pH2)), Math.sqrt(Math.max(0, beta2)), parts));
     }
 }

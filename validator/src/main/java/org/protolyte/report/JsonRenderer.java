@@ -80,9 +80,10 @@ public final class JsonRenderer {
         tool.put("pHConvention", "conventional pH scale (Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. "
                 + "74 (2002) 2169): pH = −log10(γH·mH) with γH from the Davies equation");
         tool.put("uncertainty", "pHUncertainty and bufferCapacityUncertainty are standard uncertainties from the "
-                + "published constants (each pKa used and pKw, taken as independent), by linear propagation; they do "
-                + "not cover batch-to-batch variation, the activity model, or the uncertainty of ΔH° and ΔCp° (not yet in "
-                + "the library)");
+                + "published constants (each pKa used, each ΔH° that has an uncertainty, each complex's log K, and pKw; a "
+                + "step's pKa and ΔH° with their correlation where the source gives it), by linear propagation with "
+                + "derivatives from implicit differentiation, the q.s. held to its goal; they do not cover "
+                + "batch-to-batch variation, the activity model, or ΔCp°");
         tool.put("generatedAt", generatedAt.toString());
         ArrayNode library = tool.putArray("substanceLibrary");
         libraryFiles.forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));

@@ -20,7 +20,8 @@ import org.protolyte.substance.LibraryLoader;
 /**
  * The buffer capacity's uncertainty from the constants, combined as the GUM's law of propagation for correlated
  * inputs (JCGM 100:2008, eq. 16): u² = c_pKa² + c_ΔH² + 2ρ c_pKa c_ΔH, each sensitivity c found here by moving that
- * one constant by its standard uncertainty and analysing again (a finite difference), pKw's added in quadrature.
+ * one constant by plus and minus its standard uncertainty and analysing again (a central difference, against the
+ * analysis's derivatives), pKw's added in quadrature.
  */
 class BetaUncertaintyTest {
 
@@ -50,10 +51,11 @@ class BetaUncertaintyTest {
         Recipe r = new RecipeResolver(lib).resolve(f);
         AcidBaseSystem xb = lib.system("XB").orElseThrow();
         ConditionResult nominal = new Analyzer(EQUILIBRIUM).analyze(r).conditions().get(0);
-        double beta = nominal.bufferCapacityPerLitre();
-        double cPKa = beta(r, EQUILIBRIUM.withPKaShift(xb, 0, 0.01)) - beta;
-        double cDH = beta(r, EQUILIBRIUM.withDeltaHShift(xb, 0, 8000)) - beta;
-        double cW = beta(r, EQUILIBRIUM.withPKwShift(Equilibrium.PKW_UNCERTAINTY)) - beta;
+        double cPKa = (beta(r, EQUILIBRIUM.withPKaShift(xb, 0, 0.01)) - beta(r, EQUILIBRIUM.withPKaShift(xb, 0, -0.01))) / 2;
+        double cDH = (beta(r, EQUILIBRIUM.withDeltaHShift(xb, 0, 8000))
+                - beta(r, EQUILIBRIUM.withDeltaHShift(xb, 0, -8000))) / 2;
+        double cW = (beta(r, EQUILIBRIUM.withPKwShift(Equilibrium.PKW_UNCERTAINTY))
+                - beta(r, EQUILIBRIUM.withPKwShift(-Equilibrium.PKW_UNCERTAINTY))) / 2;
         assertTrue(Math.abs(cPKa) > 1e-5 && Math.abs(cDH) > 1e-5, () -> "the case needs β to move: " + cPKa + " " + cDH);
         double expected = Math.sqrt(cPKa * cPKa + cDH * cDH + 2 * rho * cPKa * cDH + cW * cW);
         assertEquals(expected, nominal.uncertainty().orElseThrow().bufferCapacityPerLitre(), 0.01 * expected);
