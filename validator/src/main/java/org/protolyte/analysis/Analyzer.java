@@ -16,6 +16,7 @@ import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.CarbonDioxide;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.Component;
+import org.protolyte.chemistry.Derivatives;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.SolidPhase;
@@ -40,6 +41,12 @@ public final class Analyzer {
 
     /** Upper limit of a q.s. search, mol of titrant per kg of water: far beyond any buffer's need. */
     static final double MAX_TITRANT_MOLALITY = 2.0;
+    /**
+     * The relative change of an amount between the two solutions whose secant is its slope: exact where moles and water
+     * are affine in it ({@link AmountSlope}); a molality amount in a final volume is not, and its slope is then off by
+     * about this fraction of itself.
+     */
+    static final double AMOUNT_STEP = 1e-3;
     /** Name of the library system that a CO2 condition opens. */
     static final String CARBONATE = "carbonate";
 
@@ -59,23 +66,26 @@ public final class Analyzer {
         }
         Solution solution = recipe.solution(doses);
         List<ConditionResult> results = new ArrayList<>();
+        List<Optional<Derivatives>> derivatives = new ArrayList<>();
         for (Formulation.Condition c : recipe.formulation().conditions()) {
-            results.add(condition(recipe, solution, c));
+            results.add(condition(recipe, solution, c, derivatives));
         }
         titrants.replaceAll(t -> explicitSetpointForTarget(recipe, t));
         int n = results.size();
         Optional<Solution> working = recipe.formulation().dilution()
                 .map(d -> solution.diluted(d.factor(), recipe.makeUpKelvin()));
-        working.ifPresent(w -> recipe.formulation().conditions().forEach(c -> results.add(condition(recipe, w, c))));
+        working.ifPresent(w -> recipe.formulation().conditions()
+                .forEach(c -> results.add(condition(recipe, w, c, derivatives))));
         List<Solution> solutions = new ArrayList<>(java.util.Collections.nCopies(n, solution));
         working.ifPresent(w -> solutions.addAll(java.util.Collections.nCopies(n, w)));
-        List<ConditionResult> all = new ConstantsPropagation(this).apply(recipe, solution, results, solutions, titrants);
+        List<ConditionResult> all = new ConstantsPropagation(this).apply(recipe, solution, results, solutions,
+                derivatives, titrants);
         List<ConditionResult> own = all.subList(0, n);
         Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
                 recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
         Optional<TitratableAcidity> acidity = titratableAcidity(recipe, solution, caveats);
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, own), drifts(recipe, own), acidity, Optional.empty(), diluted);
+                sensitivities(recipe, doses, solution, own, derivatives), drifts(recipe, own), acidity, Optional.empty(), diluted);
     }
 
     /**
@@ -318,19 +328,28 @@ public final class Analyzer {
         }
     }
 
-    /** dpH at the target's temperature per +1 % of each weighed component, titrants held at their q.s. */
-    private List<Sensitivity> sensitivities(Recipe recipe, Map<Ingredient, Double> doses, List<ConditionResult> results) {
+    /**
+     * dpH at the target's temperature per +1 % of each weighed component, titrants held at their q.s.: the derivative
+     * with respect to the amount (implicit differentiation, {@link Derivatives}) times 1 %, to first order.
+     */
+    private List<Sensitivity> sensitivities(Recipe recipe, Map<Ingredient, Double> doses, Solution solution,
+                                            List<ConditionResult> results, List<Optional<Derivatives>> derivatives) {
         Optional<Formulation.PhTarget> target = recipe.formulation().pHTarget();
         if (target.isEmpty()) {
             return List.of();
         }
-        Optional<ConditionResult> at = results.stream().filter(ConditionResult::determinate)
-                .filter(c -> Formulation.sameTemperature(c.condition().kelvin(), target.get().kelvin())).findFirst();
-        if (at.isEmpty()) {
+        int at = -1;
+        for (int i = 0; i < results.size() && at < 0; i++) {
+            if (results.get(i).determinate() && derivatives.get(i).isPresent()
+                    && Formulation.sameTemperature(results.get(i).condition().kelvin(), target.get().kelvin())) {
+                at = i;
+            }
+        }
+        if (at < 0) {
             return List.of();
         }
-        double base = at.get().state().orElseThrow().pH();
-        double kelvin = at.get().condition().kelvin();
+        Derivatives d = derivatives.get(at).orElseThrow();
+        double kelvin = results.get(at).condition().kelvin();
         List<Sensitivity> out = new ArrayList<>();
         for (Ingredient ing : recipe.ingredients()) {
             if (ing.kind() == Ingredient.Kind.TITRANT || ing.substance().solvent() || !ing.substance().composition()
@@ -338,17 +357,16 @@ public final class Analyzer {
                 continue;
             }
             List<Ingredient> changed = new ArrayList<>(recipe.ingredients());
-            Ingredient more = new Ingredient(ing.line(), ing.substance(), ing.kind(), ing.value() * 1.01,
-                    ing.stockMolarity(), ing.stockDensity());
-            changed.set(changed.indexOf(ing), more);
-            Recipe r = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin());
-            Map<Ingredient, Double> titrants = new HashMap<>(doses);
+            changed.set(changed.indexOf(ing), new Ingredient(ing.line(), ing.substance(), ing.kind(),
+                    ing.value() * (1 + AMOUNT_STEP), ing.stockMolarity(), ing.stockDensity()));
+            Solution more = new Recipe(recipe.formulation(), recipe.library(), changed, recipe.makeUpKelvin())
+                    .solution(new HashMap<>(doses));
+            AmountSlope slope = AmountSlope.between(solution, more, AMOUNT_STEP, d.components(), kelvin);
             try {
-                Solution s = r.solution(titrants);
-                double pH = solve(recipe, s, kelvin, at.get().condition().co2Pascal()).pH();
-                out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(), pH - base));
+                out.add(new Sensitivity(ing.substance().name(), ing.line().pointer(),
+                        0.01 * d.totals(slope.totals()).pH()));
             } catch (IndeterminateException e) {
-                // caught: a component whose 1 % change cannot be solved has no sensitivity to report
+                // caught: a component whose amount cannot be differentiated here has no sensitivity to report
             }
         }
         out.sort(java.util.Comparator.comparingDouble((Sensitivity x) -> -Math.abs(x.dpHPerPercent())));
@@ -387,10 +405,17 @@ public final class Analyzer {
                 Map.of(dissolved, CarbonDioxide.dissolvedMolality(kelvin, co2.getAsDouble())));
     }
 
-    private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c) {
+    /** One condition's result; its derivatives (for the uncertainty and the sensitivities) go to {@code derivatives}. */
+    private ConditionResult condition(Recipe recipe, Solution solution, Formulation.Condition c,
+                                      List<Optional<Derivatives>> derivatives) {
         double volume = solution.volumeLitres(c.kelvin());
+        derivatives.add(Optional.empty());
         try {
-            EquilibriumState s = solve(recipe, solution, c.kelvin(), c.co2Pascal());
+            Equilibrium.Prepared problem = prepare(recipe, solution, c.kelvin(), c.co2Pascal(), java.util.Set.of());
+            EquilibriumState s = problem.solve(solution.totals(), Double.NaN);
+            if (s.determinate()) {
+                derivatives.set(derivatives.size() - 1, differentiated(problem));
+            }
             double perLitre = solution.waterKg() / volume;
             boolean determinate = s.determinate();
             List<Caveat> caveats = new ArrayList<>(s.caveats());
@@ -405,6 +430,16 @@ public final class Analyzer {
         } catch (IndeterminateException e) {
             return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, Double.NaN, volume, List.of(),
                     OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty(), List.of());
+        }
+    }
+
+    /** The derivatives of the last solve of a problem; empty where its balances are singular there. */
+    private static Optional<Derivatives> differentiated(Equilibrium.Prepared problem) {
+        try {
+            return Optional.of(problem.derivatives());
+        } catch (IndeterminateException e) {
+            // caught: the uncertainty and sensitivities of this condition are then not computed, which each says
+            return Optional.empty();
         }
     }
 

@@ -91,40 +91,27 @@ final class ConstantsPropagation {
         return new Derivatives.Response(r.pH() * f, r.ionicStrength() * f, r.bufferCapacity() * f);
     }
 
-    /**
-     * A solved condition, differentiated: its derivatives, and for a q.s. dose n the slope of its totals (mol/kg per
-     * mol) and of its water per litre (kg/L per mol), from the moles and the water mass, which are affine in n.
-     */
-    private record Differentiated(Derivatives d, double kelvin, double[] dTotalsPerMole, double waterPerLitre,
-                                  double dWaterPerLitrePerMole) {
+    /** A solved condition, differentiated, with the slope of its totals along the q.s. dose (mol). */
+    private record Differentiated(Derivatives d, double kelvin, AmountSlope dose) {
         Derivatives.Response perMole() {
-            return d.totals(dTotalsPerMole);
+            return d.totals(dose.totals());
         }
     }
 
+    /** The derivatives of a condition: {@code known} where the analysis kept them, else from a solve here. */
     private Differentiated differentiate(Recipe recipe, Solution at, Optional<Solution> moved, double step,
-                                         double kelvin, OptionalDouble co2) {
-        Equilibrium.Prepared p = analyzer.prepare(recipe, at, kelvin, co2, java.util.Set.of());
-        p.trial(at.totals(), null);
-        Derivatives d = p.derivatives();
-        List<Component> order = p.components();
-        double[] slope = new double[order.size()];
-        double perLitre = at.waterKg() / at.volumeLitres(kelvin);
-        double dPerLitre = 0;
-        if (moved.isPresent()) {
-            Solution m = moved.get();
-            double w0 = at.waterKg();
-            double dWater = (m.waterKg() - w0) / step;
-            for (int j = 0; j < slope.length; j++) {
-                double t0 = at.totals().getOrDefault(order.get(j), 0.0);
-                double dMoles = (m.totals().getOrDefault(order.get(j), 0.0) * m.waterKg() - t0 * w0) / step;
-                slope[j] = (dMoles - t0 * dWater) / w0;      // T = n/m_w with n and m_w affine in the dose
-            }
-            double v0 = at.volumeLitres(kelvin);
-            double dVolume = (m.volumeLitres(kelvin) - v0) / step;
-            dPerLitre = (dWater * v0 - w0 * dVolume) / (v0 * v0);
+                                         double kelvin, OptionalDouble co2, Optional<Derivatives> known) {
+        Derivatives d;
+        if (known.isPresent()) {
+            d = known.get();
+        } else {
+            Equilibrium.Prepared p = analyzer.prepare(recipe, at, kelvin, co2, java.util.Set.of());
+            p.trial(at.totals(), null);
+            d = p.derivatives();
         }
-        return new Differentiated(d, kelvin, slope, perLitre, dPerLitre);
+        List<Component> order = d.components();
+        return new Differentiated(d, kelvin, moved.map(m -> AmountSlope.between(at, m, step, order, kelvin))
+                .orElseGet(() -> AmountSlope.none(at, order.size(), kelvin)));
     }
 
     /**
@@ -132,7 +119,8 @@ final class ConstantsPropagation {
      * @param titrants  the q.s. results: the one dosed (moles &gt; 0, goal reached) is held to its goal
      */
     List<ConditionResult> apply(Recipe recipe, Solution concentrate, List<ConditionResult> results,
-                                List<Solution> solutions, List<TitrantResult> titrants) {
+                                List<Solution> solutions, List<Optional<Derivatives>> derivatives,
+                                List<TitrantResult> titrants) {
         List<Perturbation> perturbations = perturbations(recipe, concentrate);
         Optional<TitrantResult> dosed = titrants.stream()
                 .filter(t -> t.used() && t.unreachable().isEmpty() && t.moles() > 0).findFirst();
@@ -147,7 +135,8 @@ final class ConstantsPropagation {
             try {
                 Solution at = recipe.solution(Map.of(t.ingredient(), t.moles()), goal.volumeFraction());
                 Solution more = recipe.solution(Map.of(t.ingredient(), t.moles() + step), goal.volumeFraction());
-                Differentiated g = differentiate(recipe, at, Optional.of(more), step, goal.kelvin(), goal.co2());
+                Differentiated g = differentiate(recipe, at, Optional.of(more), step, goal.kelvin(), goal.co2(),
+                        Optional.empty());
                 double perMole = g.perMole().pH();
                 for (int q = 0; q < perturbations.size(); q++) {
                     dDose[q] = -perturbations.get(q).move().at(g.d(), g.kelvin()).pH() / perMole;
@@ -168,7 +157,8 @@ final class ConstantsPropagation {
             }
             boolean working = i >= recipe.formulation().conditions().size();    // the diluted working solution's
             Optional<Uncertainty> u = doseFailed ? Optional.empty()
-                    : uncertainty(recipe, r, solutions.get(i), dosed, step, perturbations, dDose, working);
+                    : uncertainty(recipe, r, solutions.get(i), derivatives.get(i), dosed, step, perturbations, dDose,
+                    working);
             out.add(u.map(r::withUncertainty).orElseGet(() -> r.withCaveat(Caveat.warning("uncertainty-not-computed",
                     "the uncertainty from the constants could not be computed here: the pH is shown without it"))));
         }
@@ -176,7 +166,7 @@ final class ConstantsPropagation {
     }
 
     private Optional<Uncertainty> uncertainty(Recipe recipe, ConditionResult r, Solution solution,
-                                              Optional<TitrantResult> dosed, double step, List<Perturbation> perturbations,
+                                              Optional<Derivatives> known, Optional<TitrantResult> dosed, double step, List<Perturbation> perturbations,
                                               double[] dDose, boolean working) {
         Differentiated c;
         try {
@@ -185,13 +175,13 @@ final class ConstantsPropagation {
                 return working ? s.diluted(recipe.formulation().dilution().orElseThrow().factor(), recipe.makeUpKelvin())
                         : s;
             });
-            c = differentiate(recipe, solution, more, step, r.condition().kelvin(), r.condition().co2Pascal());
+            c = differentiate(recipe, solution, more, step, r.condition().kelvin(), r.condition().co2Pascal(), known);
         } catch (IndeterminateException | IllegalStateException e) {
             // caught: this condition's uncertainty is not computed, which the caller says in a caveat
             return Optional.empty();
         }
         Derivatives.Response perMole = dosed.isPresent() ? c.perMole() : new Derivatives.Response(0, 0, 0);
-        double beta = r.bufferCapacityPerLitre() / c.waterPerLitre();         // mol/kg per pH
+        double beta = r.bufferCapacityPerLitre() / c.dose().waterPerLitre();         // mol/kg per pH
         double pH2 = 0;
         double beta2 = 0;
         double[] dpHs = new double[perturbations.size()];
@@ -202,8 +192,8 @@ final class ConstantsPropagation {
             Derivatives.Response own = p.move().at(c.d(), c.kelvin());
             double raw = own.pH() + perMole.pH() * dDose[q];
             double dpH = Math.abs(raw) < PH_RESOLUTION ? 0 : raw;
-            double dBeta = (own.bufferCapacity() + perMole.bufferCapacity() * dDose[q]) * c.waterPerLitre()
-                    + beta * c.dWaterPerLitrePerMole() * dDose[q];
+            double dBeta = (own.bufferCapacity() + perMole.bufferCapacity() * dDose[q]) * c.dose().waterPerLitre()
+                    + beta * c.dose().dWaterPerLitre() * dDose[q];
             dpHs[q] = dpH;
             dBetas[q] = dBeta;
             pH2 += dpH * dpH;

@@ -84,6 +84,11 @@ public final class Derivatives {
         }
     }
 
+    /** The components, in the order {@link #totals} takes their changes. */
+    public java.util.List<Component> components() {
+        return java.util.List.of(p.components);
+    }
+
     /** The response to raising the log β of some species by the amounts given (per unit of the change). */
     public Response logBeta(Map<Species, Double> shifts) {
         double[] g = new double[p.n];
