@@ -143,9 +143,13 @@ public final class Analyzer {
             }
             double goal = target.midpoint();
             double max = MAX_TITRANT_MOLALITY * recipe.solution(Map.of()).waterKg();
-            UnivariateFunction g = n -> pH(recipe, t.ingredient(), n, target.kelvin(), co2At(recipe, target.kelvin()))
-                    - goal;
-            double n = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            DoseCurve curve = DoseCurve.of(this, recipe, t.ingredient(), max, target.kelvin(),
+                    co2At(recipe, target.kelvin()), 1);
+            double atNone = curve.pH(0) - goal;
+            if (Math.signum(atNone) == Math.signum(curve.pH(max) - goal)) {
+                return t;           // no dose of this titrant meets the target's midpoint
+            }
+            double n = curve.doseFor(goal, atNone, max);
             double part = t.ingredient().line().adjustTo().orElseThrow().atVolume();
             return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty(), part));
         } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
@@ -638,10 +642,10 @@ public final class Analyzer {
         double max = MAX_TITRANT_MOLALITY * water;
         OptionalDouble co2 = goalCo2(recipe, explicit, goalK);
         double goalVolume = explicit ? part : 1;
-        UnivariateFunction g = n -> pH(recipe, t, n, goalK, co2, goalVolume) - goalPH;
         double moles;
         try {
-            double atMax = g.value(max);
+            DoseCurve curve = DoseCurve.of(this, recipe, t, max, goalK, co2, goalVolume);
+            double atMax = curve.pH(max) - goalPH;
             if ((role == TitrantResult.Role.ACID) ? atMax > 0 : atMax < 0) {
                 double reach = atMax + goalPH;
                 return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK,
@@ -650,7 +654,7 @@ public final class Analyzer {
                                         + "at %.0f °C", t.substance().name(), goalPH, max / water * 1000, reach,
                                 goalK - Thermo.KELVIN_OFFSET), reach, startPH)));
             }
-            moles = new BrentSolver(1e-13, 1e-15 * max, 1e-10).solve(1000, g, 0, max);
+            moles = curve.doseFor(goalPH, startPH - goalPH, max);
             Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
             if (overflow.isPresent()) {
                 return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);

@@ -230,5 +230,11 @@ public final class Equilibrium {
             problem.load(totals, solver.ws.total);
             return solver.trial(warm);
         }
+
+        /** The same with the totals in the order of {@link #components()}. */
+        public Point trial(double[] totals, Point warm) {
+            problem.load(totals, solver.ws.total);
+            return solver.trial(warm);
+        }
     }
 }
