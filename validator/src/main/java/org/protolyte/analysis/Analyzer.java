@@ -22,6 +22,7 @@ import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.SolidPhase;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.chemistry.Species;
+import org.protolyte.chemistry.RootFinder;
 import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.DocumentException;
@@ -47,6 +48,8 @@ public final class Analyzer {
      * about this fraction of itself.
      */
     static final double AMOUNT_STEP = 1e-3;
+    /** The highest CO2 partial pressure a search for the target's CO2 level tries, Pa (50 kPa). */
+    private static final double CO2_SEARCH_MAX_PASCAL = 5e4;
     /** Name of the library system that a CO2 condition opens. */
     static final String CARBONATE = "carbonate";
 
@@ -318,14 +321,34 @@ public final class Analyzer {
             return OptionalDouble.empty();
         }
         double goal = target.get().midpoint();
-        // pH falls as CO2 rises; search log10 of the partial pressure between 1 Pa and 50 kPa
-        UnivariateFunction f = lg -> solve(recipe, solution, c.kelvin(), OptionalDouble.of(Math.pow(10, lg)))
-                .pH() - goal;
+        // pH falls as CO2 rises; search x = log10 of the partial pressure (Pa) between 1 Pa and 50 kPa, on the problem
+        // prepared at 1 Pa with its dissolved CO2 scaled (Henry's law is linear), dpH/dx from the derivatives
+        double top = Math.log10(CO2_SEARCH_MAX_PASCAL);
+        Equilibrium.Prepared atOnePascal = prepare(recipe, solution, c.kelvin(), OptionalDouble.of(1.0), java.util.Set.of());
+        RootFinder.Function f = new RootFinder.Function() {
+            private Equilibrium.Point warm;
+            private double slope;
+
+            @Override
+            public double value(double x) {
+                Equilibrium.Prepared p = atOnePascal.withFixedScaled(Math.pow(10, x));
+                warm = p.trial(solution.totals(), warm);
+                slope = Thermo.LN10 * p.derivatives().fixedScaled().pH();
+                return warm.pH() - goal;
+            }
+
+            @Override
+            public double slope() {
+                return slope;
+            }
+        };
         try {
-            if (f.value(0) < 0 || f.value(Math.log10(5e4)) > 0) {
+            double atLow = f.value(0);
+            if (atLow < 0 || f.value(top) > 0) {
                 return OptionalDouble.empty();
             }
-            return OptionalDouble.of(Math.pow(10, new BrentSolver(1e-12, 1e-9).solve(200, f, 0, Math.log10(5e4))));
+            double start = Math.min(top, Math.max(0, Math.log10(c.co2Pascal().getAsDouble())));
+            return OptionalDouble.of(Math.pow(10, RootFinder.solve(f, 0, atLow, top, start, 1e-12, 1e-10)));
         } catch (IndeterminateException | MathIllegalStateException e) {
             // caught: a hint in the report only (no rule judges it); where it cannot be found none is shown
             return OptionalDouble.empty();
@@ -427,7 +450,7 @@ public final class Analyzer {
             return new ConditionResult(c, Optional.of(s), caveats, s.bufferCapacity() * perLitre,
                     s.osmolality() * perLitre, volume,
                     buffers(recipe, solution, s, perLitre),
-                    determinate ? inAir(recipe, solution, c) : OptionalDouble.empty(),
+                    determinate ? inAir(recipe, solution, c, s) : OptionalDouble.empty(),
                     loads,
                     determinate ? co2ForTarget(recipe, solution, c) : OptionalDouble.empty(), Optional.empty(),
                     determinate ? saturation(recipe, s) : List.of()).finite();
@@ -522,13 +545,16 @@ public final class Analyzer {
     }
 
     /** A closed condition's pH once equilibrated with room air (CO2 at its fraction of standard pressure). */
-    private OptionalDouble inAir(Recipe recipe, Solution solution, Formulation.Condition c) {
+    private OptionalDouble inAir(Recipe recipe, Solution solution, Formulation.Condition c, EquilibriumState closed) {
         if (c.co2Pascal().isPresent()) {
             return OptionalDouble.empty();
         }
         try {
             double air = FormulationReader.AIR_CO2_FRACTION * FormulationReader.STANDARD_PRESSURE;
-            return OptionalDouble.of(solve(recipe, solution, c.kelvin(), OptionalDouble.of(air)).pH());
+            // started from the closed solution: the same recipe, a little carbonic acid taken up
+            Equilibrium.Point start = new Equilibrium.Point(closed.pH(), closed.ionicStrength(), Double.NaN, Double.NaN);
+            return OptionalDouble.of(prepare(recipe, solution, c.kelvin(), OptionalDouble.of(air), java.util.Set.of())
+                    .trial(solution.totals(), start).pH());
         } catch (IndeterminateException e) {
             // caught: a hint in the report only (no rule judges it); where it cannot be solved none is shown
             return OptionalDouble.empty();

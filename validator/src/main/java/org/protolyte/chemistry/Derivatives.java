@@ -37,6 +37,13 @@ public final class Derivatives {
     private final Tangent byPH;
     private final Tangent byI;
     private final double determinant;
+    // the buffer capacity's sums at the state (see bufferSumAtState)
+    private final int[] position;
+    private final int blockSize;
+    private final double[] charge;
+    private final double[] diagonal;
+    private final double[][] block;
+    private final double[] basisSlope;
 
     /** The species' changes at fixed pH and I, and what they do to F and Q = ½ Σ z² m. */
     private record Tangent(double[] dm, double dmH, double dmOH, double f, double q) {
@@ -57,13 +64,21 @@ public final class Derivatives {
             componentSlope[j] = Thermo.LN10 * p.activity.log10GammaSlope(p.components[j].charge(), ionicStrength,
                     p.debyeHuckelA);
         }
+        int nc = total.length;
+        position = new int[nc];
+        blockSize = CoupledSpeciation.positions(p, total, position);
+        charge = new double[nc];
+        diagonal = new double[nc];
+        block = new double[blockSize][blockSize];
+        basisSlope = new double[nc];
+        bufferSumAtState();
         hydrogenSlope = Thermo.LN10 * p.activity.log10GammaSlope(1, ionicStrength, p.debyeHuckelA);
         hydroxideSlope = Thermo.LN10 * p.activity.log10GammaSlope(-1, ionicStrength, p.debyeHuckelA);
         double[] g = new double[p.n];
         for (int i = 0; i < p.n; i++) {
             g[i] = -Thermo.LN10 * p.protons[i];
         }
-        byPH = tangent(g, new double[total.length], -Thermo.LN10, Thermo.LN10);
+        byPH = tangent(g, new double[total.length], -Thermo.LN10, Thermo.LN10, 0);
         for (int i = 0; i < p.n; i++) {
             double s = -speciesSlope[i];
             if (p.complexParts[i] == null) {
@@ -75,7 +90,7 @@ public final class Derivatives {
             }
             g[i] = s;
         }
-        byI = tangent(g, new double[total.length], -hydrogenSlope, -hydroxideSlope);
+        byI = tangent(g, new double[total.length], -hydrogenSlope, -hydroxideSlope, 0);
         // [F_pH F_I; G_pH G_I] with G = I − Q
         determinant = byPH.f() * (1 - byI.q()) + byI.f() * byPH.q();
         if (!(Math.abs(determinant) > 0) || !Double.isFinite(determinant)) {
@@ -95,12 +110,17 @@ public final class Derivatives {
         for (int i = 0; i < p.n; i++) {
             g[i] = Thermo.LN10 * shifts.getOrDefault(p.sp[i], 0.0);
         }
-        return response(tangent(g, new double[total.length], 0, 0));
+        return response(tangent(g, new double[total.length], 0, 0, 0));
+    }
+
+    /** The response to raising ln of every molality held by a gas phase by one (ln of the partial pressure). */
+    public Response fixedScaled() {
+        return response(tangent(new double[p.n], new double[total.length], 0, 0, 1));
     }
 
     /** The response to raising pKw by one: Kw tenfold smaller. */
     public Response pKw() {
-        return response(tangent(new double[p.n], new double[total.length], 0, -Thermo.LN10));
+        return response(tangent(new double[p.n], new double[total.length], 0, -Thermo.LN10, 0));
     }
 
     /** The response to changing the components' totals by {@code dTotals} (mol/kg, in the prepared order). */
@@ -108,7 +128,7 @@ public final class Derivatives {
         if (dTotals.length != total.length) {
             throw new IllegalArgumentException("expected " + total.length + " totals, got " + dTotals.length);
         }
-        return response(tangent(new double[p.n], dTotals, 0, 0));
+        return response(tangent(new double[p.n], dTotals, 0, 0, 0));
     }
 
     private Response response(Tangent t) {
@@ -126,9 +146,10 @@ public final class Derivatives {
 
     /**
      * dm at fixed pH and I for sources g_s (change of ln m_s at fixed b), total changes dT and the changes of ln mH
-     * and ln mOH; with what they do to F and to Q = ½ (Σ z² m + mH + mOH).
+     * and ln mOH, and of ln of the molalities held by a gas phase; with what they do to F and to
+     * Q = ½ (Σ z² m + mH + mOH).
      */
-    private Tangent tangent(double[] g, double[] dT, double dLnH, double dLnOH) {
+    private Tangent tangent(double[] g, double[] dT, double dLnH, double dLnOH, double dLnFixed) {
         int nc = total.length;
         double[] dLnB = new double[nc];
         int[] position = new int[nc];
@@ -136,7 +157,7 @@ public final class Derivatives {
         int u = 0;
         for (int j = 0; j < nc; j++) {
             if (p.open(j)) {
-                dLnB[j] = -g[p.fixedIndex[j]];          // its fixed species does not move
+                dLnB[j] = dLnFixed - g[p.fixedIndex[j]];   // its fixed species moves only with the gas
             } else if (total[j] > 0 && p.complexes && p.coupledComponent[j]) {
                 position[j] = u++;
             } else if (total[j] > 0) {
@@ -212,45 +233,22 @@ public final class Derivatives {
      */
     private double bufferSumSlope(double[] dm, double dWater) {
         int nc = total.length;
-        int[] position = new int[nc];
-        int u = CoupledSpeciation.positions(p, total, position);
-        double[] rhs = new double[nc];
-        double[] charge = new double[nc];
-        double[] diagonal = new double[nc];
-        double[][] block = new double[u][u];
-        CoupledSpeciation.accumulate(p, m, 0, position, u, rhs, charge, diagonal, block);
+        int u = blockSize;
         double[] dRhs = new double[nc];
         double[] dCharge = new double[nc];
         double[] dDiagonal = new double[nc];
         double[][] dBlock = new double[u][u];
         double dDirect = CoupledSpeciation.accumulate(p, dm, dWater, position, u, dRhs, dCharge, dDiagonal, dBlock);
-        double[] d = new double[nc];
         double[] dd = new double[nc];
-        double[] y = new double[u];
         for (int j = 0; j < nc; j++) {
-            if (p.open(j)) {
-                d[j] = p.protons[p.fixedIndex[j]];
+            if (!p.open(j) && position[j] < 0 && diagonal[j] > 0) {
+                dd[j] = (dRhs[j] - dDiagonal[j] * basisSlope[j]) / diagonal[j];
             } else if (position[j] >= 0) {
-                block[position[j]][position[j]] = diagonal[j];
                 dBlock[position[j]][position[j]] = dDiagonal[j];
-                y[position[j]] = rhs[j];
-            } else if (diagonal[j] > 0) {
-                d[j] = rhs[j] / diagonal[j];
-                dd[j] = (dRhs[j] - dDiagonal[j] * d[j]) / diagonal[j];
             }
         }
         if (u > 0) {
-            double[][] a = new double[u][];
-            for (int q = 0; q < u; q++) {
-                a[q] = block[q].clone();
-            }
-            LinearSolve.inPlace(a, y, u);
             double[] z = new double[u];
-            for (int j = 0; j < nc; j++) {
-                if (position[j] >= 0) {
-                    d[j] = y[position[j]];
-                }
-            }
             for (int j = 0; j < nc; j++) {
                 int r = position[j];
                 if (r < 0) {
@@ -259,11 +257,15 @@ public final class Derivatives {
                 z[r] = dRhs[j];
                 for (int k = 0; k < nc; k++) {
                     if (position[k] >= 0) {
-                        z[r] -= dBlock[r][position[k]] * d[k];
+                        z[r] -= dBlock[r][position[k]] * basisSlope[k];
                     }
                 }
             }
-            LinearSolve.inPlace(block, z, u);
+            double[][] a = new double[u][];
+            for (int q = 0; q < u; q++) {
+                a[q] = block[q].clone();
+            }
+            LinearSolve.inPlace(a, z, u);
             for (int j = 0; j < nc; j++) {
                 if (position[j] >= 0) {
                     dd[j] = z[position[j]];
@@ -272,8 +274,42 @@ public final class Derivatives {
         }
         double sum = dDirect;
         for (int k = 0; k < nc; k++) {
-            sum -= dCharge[k] * d[k] + charge[k] * dd[k];
+            sum -= dCharge[k] * basisSlope[k] + charge[k] * dd[k];
         }
         return sum;
     }
+
+    /**
+     * The sums of {@link CoupledSpeciation#bufferSum} at the state, and its basis slopes d: A·d = y for the coupled
+     * block, rhs/diagonal alone, the fixed species' protons for an open component. Kept for every response.
+     */
+    private void bufferSumAtState() {
+        int nc = total.length;
+        double[] rhs = new double[nc];
+        CoupledSpeciation.accumulate(p, m, 0, position, blockSize, rhs, charge, diagonal, block);
+        double[] y = new double[blockSize];
+        for (int j = 0; j < nc; j++) {
+            if (p.open(j)) {
+                basisSlope[j] = p.protons[p.fixedIndex[j]];
+            } else if (position[j] >= 0) {
+                block[position[j]][position[j]] = diagonal[j];
+                y[position[j]] = rhs[j];
+            } else if (diagonal[j] > 0) {
+                basisSlope[j] = rhs[j] / diagonal[j];
+            }
+        }
+        if (blockSize > 0) {
+            double[][] a = new double[blockSize][];
+            for (int q = 0; q < blockSize; q++) {
+                a[q] = block[q].clone();
+            }
+            LinearSolve.inPlace(a, y, blockSize);
+            for (int j = 0; j < nc; j++) {
+                if (position[j] >= 0) {
+                    basisSlope[j] = y[position[j]];
+                }
+            }
+        }
+    }
+
 }

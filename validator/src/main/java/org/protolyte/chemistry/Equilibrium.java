@@ -216,6 +216,14 @@ public final class Equilibrium {
             return solver.derivatives();
         }
 
+        /**
+         * The same problem with every species held by a gas phase scaled by {@code factor}: the partial pressure
+         * scaled (Henry's law is linear), for a search over it.
+         */
+        public Prepared withFixedScaled(double factor) {
+            return new Prepared(problem.withFixedScaled(factor));
+        }
+
         /** The components, in the order {@link #point(double[], Point)} takes their totals. */
         public List<Component> components() {
             return List.of(problem.components);

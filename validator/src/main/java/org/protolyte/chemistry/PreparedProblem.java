@@ -150,8 +150,11 @@ final class PreparedProblem {
         speciation = complexes ? CoupledSpeciation.INSTANCE : FreeSpeciation.INSTANCE;
     }
 
-    /** The same problem with one species' log β raised by {@code delta}: for judging that constant's own effect. */
-    private PreparedProblem(PreparedProblem p, int species, double delta) {
+    /**
+     * The same problem with one species' log β raised by {@code delta} (for judging that constant's own effect; −1 for
+     * none) and every species held by a gas phase scaled by {@code fixedScale} (a partial pressure scaled).
+     */
+    private PreparedProblem(PreparedProblem p, int species, double delta, double fixedScale) {
         activity = p.activity;
         kelvin = p.kelvin;
         n = p.n;
@@ -160,9 +163,11 @@ final class PreparedProblem {
         protons = p.protons;
         charge = p.charge;
         log10Beta = p.log10Beta.clone();
-        log10Beta[species] += delta;
         beta = p.beta.clone();
-        beta[species] = Math.pow(10, log10Beta[species]);
+        if (species >= 0) {
+            log10Beta[species] += delta;
+            beta[species] = Math.pow(10, log10Beta[species]);
+        }
         index = p.index;
         components = p.components;
         complexParts = p.complexParts;
@@ -177,12 +182,19 @@ final class PreparedProblem {
         kw = p.kw;
         debyeHuckelA = p.debyeHuckelA;
         fixedIndex = p.fixedIndex;
-        fixedMolality = p.fixedMolality;
+        fixedMolality = p.fixedMolality.clone();
+        for (int j = 0; j < fixedMolality.length; j++) {
+            fixedMolality[j] *= fixedScale;
+        }
         speciation = p.speciation;
     }
 
     PreparedProblem withLogBetaShift(int species, double delta) {
-        return new PreparedProblem(this, species, delta);
+        return new PreparedProblem(this, species, delta, 1);
+    }
+
+    PreparedProblem withFixedScaled(double factor) {
+        return new PreparedProblem(this, -1, 0, factor);
     }
 
     boolean open(int component) {

@@ -146,6 +146,10 @@ class DerivativesTest {
                 }
             }
             agree(central(h -> point(DAVIES.withPKwShift(h), x, x.totals())), d.pKw(), label + " pKw");
+            if (!x.fixed().isEmpty()) {
+                agree(central(h -> base.withFixedScaled(Math.exp(h)).trial(x.totals(), null)), d.fixedScaled(),
+                        label + " ln CO2");
+            }
             List<Component> order = base.components();
             for (int j = 0; j < order.size(); j++) {
                 Component c = order.get(j);
