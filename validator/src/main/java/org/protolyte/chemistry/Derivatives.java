@@ -107,8 +107,11 @@ public final class Derivatives {
     /** The response to raising the log β of some species by the amounts given (per unit of the change). */
     public Response logBeta(Map<Species, Double> shifts) {
         double[] g = new double[p.n];
-        for (int i = 0; i < p.n; i++) {
-            g[i] = Thermo.LN10 * shifts.getOrDefault(p.sp[i], 0.0);
+        for (Map.Entry<Species, Double> e : shifts.entrySet()) {
+            Integer i = p.speciesIndex.get(e.getKey());
+            if (i != null) {
+                g[i] += Thermo.LN10 * e.getValue();
+            }
         }
         return response(tangent(g, new double[total.length], 0, 0, 0));
     }

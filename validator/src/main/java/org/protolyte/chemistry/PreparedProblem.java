@@ -26,6 +26,8 @@ final class PreparedProblem {
     final double kelvin;
     final int n;
     final Species[] sp;
+    /** Each species' index (the first, should one be listed twice). */
+    final Map<Species, Integer> speciesIndex;
     final int[] comp;               // index of the species' component (a complex: the component it is shown under)
     final int[] protons;
     final int[] charge;
@@ -70,6 +72,11 @@ final class PreparedProblem {
         }
         n = used.size();
         sp = used.toArray(new Species[0]);
+        Map<Species, Integer> at = new java.util.HashMap<>();
+        for (int i = n - 1; i >= 0; i--) {
+            at.put(sp[i], i);
+        }
+        speciesIndex = Map.copyOf(at);
         comp = new int[n];
         protons = new int[n];
         charge = new int[n];
@@ -159,6 +166,7 @@ final class PreparedProblem {
         kelvin = p.kelvin;
         n = p.n;
         sp = p.sp;
+        speciesIndex = p.speciesIndex;
         comp = p.comp;
         protons = p.protons;
         charge = p.charge;
