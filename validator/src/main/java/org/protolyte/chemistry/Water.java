@@ -6,8 +6,11 @@ package org.protolyte.chemistry;
  */
 public final class Water {
 
-    /** Molar mass of water used by IAPWS R11-07, g/mol. */
-    public static final double MOLAR_MASS = 18.015268;
+    /**
+     * Molar mass of water used by IAPWS R11-07, g/mol: part of that formulation of Kw, and used nowhere else
+     * (stoichiometry takes water from the atomic weights, {@code substance.AtomicWeights.WATER}).
+     */
+    private static final double MOLAR_MASS = 18.015268;
     /**
      * Range of the formulations below taken together: Malmberg–Maryott is fitted on 0–100 °C; down to −5 °C
      * (a salt solution that is still liquid) it is a short extrapolation.

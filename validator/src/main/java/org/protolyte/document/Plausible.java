@@ -4,6 +4,7 @@ import java.util.Optional;
 
 import org.protolyte.units.Dimension;
 import org.protolyte.units.Quantity;
+import org.protolyte.units.Unit;
 
 /**
  * The plausible range of a quantity read from any document, in the dimension's base unit, checked once after
@@ -14,10 +15,10 @@ public record Plausible(double min, boolean minIncluded, double max, boolean max
         String why) {
 
     /** pH is read in liquid water: 0 to 100 °C at ambient pressure (water boils at 100 °C at 101.325 kPa). */
-    public static final Plausible LIQUID_TEMPERATURE = new Plausible(273.15, true, 373.15, true, "Cel", 1,
+    public static final Plausible LIQUID_TEMPERATURE = new Plausible(Unit.CEL.toBase(0), true, Unit.CEL.toBase(100), true, "Cel", 1,
             "pH is read and adjusted in liquid water at ambient pressure (common practice)");
     /** A condition may be frozen storage, down to liquid-nitrogen vapour; above 100 °C water boils. */
-    public static final Plausible CONDITION_TEMPERATURE = new Plausible(73.15, true, 373.15, true, "Cel", 1,
+    public static final Plausible CONDITION_TEMPERATURE = new Plausible(Unit.CEL.toBase(-200), true, Unit.CEL.toBase(100), true, "Cel", 1,
             "conditions range from storage over liquid nitrogen to boiling water at ambient pressure (common practice)");
     /** A weighing tolerance is a part of the amount: more than nothing, less than all of it. */
     public static final Plausible TOLERANCE = new Plausible(0, false, 1, false, "%", 100,
@@ -40,7 +41,7 @@ public record Plausible(double min, boolean minIncluded, double max, boolean max
     }
 
     private String show(double base) {
-        double v = unit.equals("Cel") ? Math.round((base - 273.15) * 1e6) / 1e6 : base * scale;
+        double v = unit.equals("Cel") ? Math.round((base - Unit.KELVIN_AT_ZERO_CELSIUS) * 1e6) / 1e6 : base * scale;
         return v == Math.rint(v) && Math.abs(v) < 1e6 ? Long.toString((long) v) : Double.toString(v);
     }
 

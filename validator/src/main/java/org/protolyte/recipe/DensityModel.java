@@ -1,7 +1,8 @@
 package org.protolyte.recipe;
 
-import org.protolyte.chemistry.Water;
 import org.protolyte.substance.Substance;
+import org.protolyte.chemistry.Water;
+import org.protolyte.substance.AtomicWeights;
 
 /**
  * Water mass of a solution made up to volume, from additive apparent molar volumes at infinite
@@ -26,7 +27,7 @@ public final class DensityModel {
         if (s.apparentMolarVolume().isPresent()) {
             return s.apparentMolarVolume().getAsDouble();
         }
-        double anhydrous = s.molarMass().orElse(0) - s.hydrationWater() * Water.MOLAR_MASS;
+        double anhydrous = s.molarMass().orElse(0) - s.hydrationWater() * AtomicWeights.WATER;
         return FALLBACK_SPECIFIC_VOLUME * Math.max(0, anhydrous);
     }
 

@@ -10,12 +10,12 @@ import java.util.Set;
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Species;
-import org.protolyte.chemistry.Water;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
 import org.protolyte.substance.Composition;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
+import org.protolyte.substance.AtomicWeights;
 
 /**
  * A formulation with every substance resolved and every amount in moles (or mol/kg) per basis. It
@@ -62,7 +62,7 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
             double n = ing.kind() == Ingredient.Kind.TITRANT ? titrantMoles.getOrDefault(ing, 0.0) : ing.value();
             fixed.put(ing, n);
             if (ing.substance().solvent()) {
-                extraWater += n * Water.MOLAR_MASS / 1000;
+                extraWater += n * AtomicWeights.WATER / 1000;
                 continue;
             }
             fixedVolume += n * phi;
@@ -70,7 +70,7 @@ public record Recipe(Formulation formulation, SubstanceLibrary library, List<Ing
                 bulkiest = ing;
                 bulkiestVolume = n * phi;
             }
-            extraWater += n * ing.substance().hydrationWater() * Water.MOLAR_MASS / 1000;
+            extraWater += n * ing.substance().hydrationWater() * AtomicWeights.WATER / 1000;
             if (ing.hasStock()) {
                 extraWater += stockWater(ing, n);
             }

@@ -4,6 +4,8 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 
+import org.protolyte.chemistry.Thermo;
+
 /** Rounding for presentation: the engine's doubles carry more digits than the constants justify. */
 final class Numbers {
     /** From here up, a number keeps its exponent: a plain 1e300 would print 301 digits. */
@@ -29,6 +31,6 @@ final class Numbers {
     }
 
     static double celsius(double kelvin) {
-        return kelvin - 273.15;
+        return kelvin - Thermo.KELVIN_OFFSET;
     }
 }

@@ -5,6 +5,7 @@ import java.util.Optional;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Thermo;
 import org.protolyte.document.Formulation;
 
 /** Which condition a rule judges: the one its parameters name, else "use", else every determinate one. */
@@ -37,7 +38,7 @@ final class Conditions {
     }
 
     static double celsius(ConditionResult c) {
-        return c.condition().kelvin() - 273.15;
+        return c.condition().kelvin() - Thermo.KELVIN_OFFSET;
     }
 
     /**

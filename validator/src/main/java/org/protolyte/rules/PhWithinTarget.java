@@ -40,7 +40,7 @@ public final class PhWithinTarget implements CheckKind {
         if (target.contains(pH)) {
             return List.of();
         }
-        double t = target.kelvin() - 273.15;
+        double t = target.kelvin() - Thermo.KELVIN_OFFSET;
         String range = Double.isInfinite(target.min()) ? String.format(Locale.ROOT, "at most %.2f", target.max())
                 : Double.isInfinite(target.max()) ? String.format(Locale.ROOT, "at least %.2f", target.min())
                 : String.format(Locale.ROOT, "%.2f to %.2f", target.min(), target.max());

@@ -38,6 +38,12 @@ public final class AtomicWeights {
             Map.entry("Mo", 95.95),
             Map.entry("I", 126.90447));
 
+    /**
+     * Water, g/mol, from the weights above (2 × 1.008 + 15.999): the mass of water of hydration and of water weighed as
+     * a component, so that a hydrate less its water is its anhydrous salt to the last digit.
+     */
+    public static final double WATER = 2 * WEIGHTS.get("H") + WEIGHTS.get("O");
+
     private AtomicWeights() {
     }
 

@@ -44,6 +44,9 @@ public enum Unit {
     PERCENT_W_W("% w/w", Dimension.MASS_FRACTION, 0.01, true),
     PERCENT("%", Dimension.FRACTION, 0.01, false);
 
+    /** Kelvin at 0 °C: t/°C = T/K − 273.15 (SI Brochure, 9th ed., BIPM 2019, section 2.3.1). */
+    public static final double KELVIN_AT_ZERO_CELSIUS = 273.15;
+
     private final String code;
     private final Dimension dimension;
     private final double factor;
@@ -71,7 +74,7 @@ public enum Unit {
     /** Converts a value in this unit to the dimension's base unit. */
     public double toBase(double value) {
         if (this == CEL || this == LAB_DEG_C) {
-            return value + 273.15;
+            return value + KELVIN_AT_ZERO_CELSIUS;
         }
         return value * factor;
     }
