@@ -23,6 +23,7 @@ import java.util.stream.Collectors;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.RecipeConflict;
 import org.protolyte.analysis.Robustness;
 import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.batch.BatchAnalyzer;
@@ -421,7 +422,12 @@ public final class Protolyte {
             throw new DocumentException(withNameProblems(doc, e.problems()));
         }
         Recipe recipe = resolver.resolve(f);
-        FormulationAnalysis analysis = analyzer.analyze(recipe);
+        FormulationAnalysis analysis;
+        try {
+            analysis = analyzer.analyze(recipe);
+        } catch (RecipeConflict e) {
+            throw atAdjustment(f, e);
+        }
         if (robustness.isPresent()) {
             analysis = analysis.withRobustness(new Robustness(new Equilibrium(Davies.INSTANCE))
                     .run(recipe, robustness.get(), done -> { }));
@@ -448,6 +454,11 @@ public final class Protolyte {
             throw packsCannotBeCombined(e);
         }
         return DocumentReport.ofBatch(b, sha256, verdict, failOn);
+    }
+
+    /** A conflict the analysis names by component, as a problem at that component's adjustTo. */
+    public static DocumentException atAdjustment(Formulation f, RecipeConflict e) {
+        return new DocumentException(f.document().problem(e.component().line().pointer() + "/adjustTo", e.getMessage()));
     }
 
     /** Packs that cannot be combined are a problem of the input the run was given, not an internal fault. */

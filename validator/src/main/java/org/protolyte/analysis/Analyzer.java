@@ -9,8 +9,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.MathIllegalStateException;
 import org.protolyte.chemistry.AcidBaseSystem;
 import org.protolyte.chemistry.CarbonDioxide;
@@ -25,7 +23,6 @@ import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.RootFinder;
 import org.protolyte.chemistry.SpeciesAmount;
 import org.protolyte.chemistry.Thermo;
-import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
 import org.protolyte.document.FormulationReader;
 import org.protolyte.recipe.DensityModel;
@@ -50,8 +47,6 @@ public final class Analyzer {
     static final double AMOUNT_STEP = 1e-3;
     /** The highest CO2 partial pressure a search for the target's CO2 level tries, Pa (50 kPa). */
     private static final double CO2_SEARCH_MAX_PASCAL = 5e4;
-    /** Name of the library system that a CO2 condition opens. */
-    static final String CARBONATE = "carbonate";
 
     private final Equilibrium equilibrium;
 
@@ -149,10 +144,11 @@ public final class Analyzer {
             DoseCurve curve = DoseCurve.of(this, recipe, t.ingredient(), max, target.kelvin(),
                     co2At(recipe, target.kelvin()), 1);
             double atNone = curve.pH(0) - goal;
-            if (Math.signum(atNone) == Math.signum(curve.pH(max) - goal)) {
+            double atMax = curve.pH(max) - goal;
+            if (Math.signum(atNone) == Math.signum(atMax)) {
                 return t;           // no dose of this titrant meets the target's midpoint
             }
-            double n = curve.doseFor(goal, atNone, max);
+            double n = curve.doseFor(goal, atNone, atMax, max);
             double part = t.ingredient().line().adjustTo().orElseThrow().atVolume();
             return t.withSetpointForTarget(pH(recipe, t.ingredient(), n, t.adjustKelvin(), OptionalDouble.empty(), part));
         } catch (IndeterminateException | MathIllegalStateException | IllegalArgumentException e) {
@@ -244,49 +240,47 @@ public final class Analyzer {
 
     /**
      * mmol per litre of solution of strong base (positive) or strong acid (negative) that brings the pH at a
-     * temperature to {@code goal}: added sodium or chloride (the strong ions of NaOH, HCl), found by Newton steps
-     * with the buffer capacity as the slope (dC/dpH = β), kept inside a bracket and bisected where a step leaves it.
+     * temperature to {@code goal}: added sodium or chloride (the strong ions of NaOH, HCl), found by the root finder
+     * with dpH/dC from the derivatives, up to {@link #MAX_TITRANT_MOLALITY}.
      */
     private double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
         Component sodium = recipe.library().ion("Na+").orElseThrow();
         Component chloride = recipe.library().ion("Cl-").orElseThrow();
         Equilibrium.Prepared problem = prepare(recipe, solution, kelvin, co2, java.util.Set.of(sodium, chloride));
-        Map<Component, Double> totals = new LinkedHashMap<>(solution.totals());
-        Equilibrium.Point s0 = problem.trial(totals, null);
-        if (Math.abs(s0.pH() - goal) < 1e-9) {
-            return 0;
+        List<Component> order = problem.components();
+        double[] totals = new double[order.size()];
+        for (int j = 0; j < totals.length; j++) {
+            totals[j] = solution.totals().getOrDefault(order.get(j), 0.0);
         }
-        boolean base = s0.pH() < goal;
-        Component ion = base ? sodium : chloride;
-        double present = totals.getOrDefault(ion, 0.0);
-        double sign = base ? 1 : -1;             // base raises the pH, acid lowers it
-        double lo = 0;
-        double hi = MAX_TITRANT_MOLALITY;
-        double x = 0;
-        Equilibrium.Point s = s0;
-        for (int i = 0; i < 100; i++) {
-            double f = sign * (goal - s.pH());    // > 0 while more is needed
-            if (Math.abs(f) < 1e-10) {
-                break;
+        boolean base = problem.trial(totals, null).pH() < goal;
+        int ion = order.indexOf(base ? sodium : chloride);
+        double present = totals[ion];
+        double[] unit = new double[totals.length];
+        unit[ion] = 1;
+        RootFinder.Function f = new RootFinder.Function() {
+            private Equilibrium.Point warm;
+            private double slope;
+
+            @Override
+            public double value(double x) {
+                totals[ion] = present + x;
+                warm = problem.trial(totals, warm);
+                slope = DoseCurve.slope(problem, unit);
+                return warm.pH() - goal;
             }
-            if (f > 0) {
-                lo = x;
-            } else {
-                hi = x;
+
+            @Override
+            public double slope() {
+                return slope;
             }
-            double step = s.bufferCapacity() * f;
-            double next = x + step;
-            x = next > lo && next < hi ? next : (lo + hi) / 2;
-            totals.put(ion, present + x);
-            s = problem.trial(totals, s);
-            if (hi - lo < 1e-15) {
-                break;
-            }
+        };
+        double atMax = f.value(MAX_TITRANT_MOLALITY);
+        double atNone = f.value(0);
+        if (Math.signum(atNone) == Math.signum(atMax) && Math.abs(atNone) >= RootFinder.PH_TOLERANCE) {
+            throw new IndeterminateException(Caveat.indeterminate("load-not-found", "no amount of strong "
+                    + (base ? "base" : "acid") + " up to " + MAX_TITRANT_MOLALITY + " mol/kg reaches pH " + goal));
         }
-        if (Math.abs(s.pH() - goal) > 1e-6) {
-            throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("load-not-found",
-                    "no amount of strong " + (base ? "base" : "acid") + " up to 2 mol/kg reaches pH " + goal));
-        }
+        double x = RootFinder.solve(f, 0, atNone, MAX_TITRANT_MOLALITY, atMax, 0);
         double mmolPerLitre = x * solution.waterKg() / solution.volumeLitres(kelvin) * 1000;
         return base ? mmolPerLitre : -mmolPerLitre;
     }
@@ -324,13 +318,16 @@ public final class Analyzer {
         // pH falls as CO2 rises; search x = log10 of the partial pressure (Pa) between 1 Pa and 50 kPa, on the problem
         // prepared at 1 Pa with its dissolved CO2 scaled (Henry's law is linear), dpH/dx from the derivatives
         double top = Math.log10(CO2_SEARCH_MAX_PASCAL);
-        Equilibrium.Prepared atOnePascal = prepare(recipe, solution, c.kelvin(), OptionalDouble.of(1.0), java.util.Set.of());
         RootFinder.Function f = new RootFinder.Function() {
+            private Equilibrium.Prepared atOnePascal;
             private Equilibrium.Point warm;
             private double slope;
 
             @Override
             public double value(double x) {
+                if (atOnePascal == null) {
+                    atOnePascal = prepare(recipe, solution, c.kelvin(), OptionalDouble.of(1.0), java.util.Set.of());
+                }
                 Equilibrium.Prepared p = atOnePascal.withFixedScaled(Math.pow(10, x));
                 warm = p.trial(solution.totals(), warm);
                 slope = Thermo.LN10 * p.derivatives().fixedScaled().pH();
@@ -344,11 +341,12 @@ public final class Analyzer {
         };
         try {
             double atLow = f.value(0);
-            if (atLow < 0 || f.value(top) > 0) {
+            double atTop = f.value(top);
+            if (atLow < 0 || atTop > 0) {
                 return OptionalDouble.empty();
             }
             double start = Math.min(top, Math.max(0, Math.log10(c.co2Pascal().getAsDouble())));
-            return OptionalDouble.of(Math.pow(10, RootFinder.solve(f, 0, atLow, top, start, 1e-12, 1e-10)));
+            return OptionalDouble.of(Math.pow(10, RootFinder.solve(f, 0, atLow, top, atTop, start)));
         } catch (IndeterminateException | MathIllegalStateException e) {
             // caught: a hint in the report only (no rule judges it); where it cannot be found none is shown
             return OptionalDouble.empty();
@@ -423,8 +421,9 @@ public final class Analyzer {
         if (co2.isEmpty()) {
             return equilibrium.prepare(List.copyOf(species), components, kelvin, Map.of());
         }
-        AcidBaseSystem carbonate = recipe.library().system(CARBONATE).orElseThrow(() -> new IndeterminateException(
-                Caveat.indeterminate("no-carbonate-system", "the library has no 'carbonate' system for a CO2 condition")));
+        AcidBaseSystem carbonate = recipe.library().carbonDioxide().orElseThrow(() -> new IndeterminateException(
+                Caveat.indeterminate("no-carbonate-system", "the library has no system whose acid form is "
+                        + CarbonDioxide.DISSOLVED + " for a CO2 condition")));
         species.addAll(carbonate.species());
         components.add(carbonate.basis());
         Species dissolved = carbonate.species().get(0);
@@ -602,7 +601,7 @@ public final class Analyzer {
             String what = lines.size() > 2 ? "more than two components carry adjustTo"
                     : "two " + (roles.get(lines.get(0)) == TitrantResult.Role.ACID ? "acids" : "bases")
                     + " carry adjustTo; give at most one acid and one base";
-            throw new DocumentException(f.document().problem(lines.get(1).line().pointer() + "/adjustTo", what));
+            throw new RecipeConflict(lines.get(1), what);
         }
         Formulation.Adjustment adj = lines.get(0).line().adjustTo().orElseThrow();
         double adjustK = adj.kelvin();
@@ -617,14 +616,13 @@ public final class Analyzer {
             goalPH = f.pHTarget().get().midpoint();
             goalK = f.pHTarget().get().kelvin();
         } else {
-            throw new DocumentException(f.document().problem(adj.pointer(),
-                    "adjustTo has no pH and the document has no pH target to adjust to"));
+            throw new RecipeConflict(lines.get(0), "adjustTo has no pH and the document has no pH target to adjust to");
         }
         if (lines.size() == 2) {
             Formulation.Adjustment other = lines.get(1).line().adjustTo().orElseThrow();
             if (!Formulation.sameTemperature(other.kelvin(), adjustK) || !other.pH().equals(adj.pH())) {
-                throw new DocumentException(f.document().problem(other.pointer(),
-                        "an acid and a base adjusting the same recipe must carry the same adjustTo"));
+                throw new RecipeConflict(lines.get(1),
+                        "an acid and a base adjusting the same recipe must carry the same adjustTo");
             }
         }
         double startPH;
@@ -680,7 +678,7 @@ public final class Analyzer {
                                         + "at %.0f °C", t.substance().name(), goalPH, max / water * 1000, reach,
                                 goalK - Thermo.KELVIN_OFFSET), reach, startPH)));
             }
-            moles = curve.doseFor(goalPH, startPH - goalPH, max);
+            moles = curve.doseFor(goalPH, startPH - goalPH, atMax, max);
             Optional<TitrantResult.Unreachable> overflow = overflow(recipe, t, moles, goalPH, startPH);
             if (overflow.isPresent()) {
                 return new TitrantResult(t, role, 0, true, OptionalDouble.empty(), adjustK, goalPH, goalK, overflow);

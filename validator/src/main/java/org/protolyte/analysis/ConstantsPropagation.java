@@ -15,7 +15,6 @@ import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.chemistry.Species;
-import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
 
@@ -52,11 +51,12 @@ final class ConstantsPropagation {
     static List<Perturbation> perturbations(Recipe recipe, Solution solution) {
         List<Perturbation> out = new ArrayList<>();
         boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
+        Optional<AcidBaseSystem> carbonDioxide = recipe.library().carbonDioxide();
         List<AcidBaseSystem> systems = new ArrayList<>(recipe.library().systems());
         systems.sort(Comparator.comparing(AcidBaseSystem::name));
         for (AcidBaseSystem sys : systems) {
             boolean used = solution.totals().getOrDefault(sys.basis(), 0.0) > 0
-                    || anyCo2 && sys.name().equals(Analyzer.CARBONATE);
+                    || anyCo2 && carbonDioxide.filter(sys::equals).isPresent();
             for (int k = 0; used && k < sys.steps().size(); k++) {
                 DissociationStep step = sys.steps().get(k);
                 String name = sys.name() + (sys.steps().size() > 1 ? " pKa" + (k + 1) : " pKa");

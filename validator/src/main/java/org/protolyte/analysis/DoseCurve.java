@@ -5,7 +5,6 @@ import java.util.Map;
 import java.util.OptionalDouble;
 
 import org.protolyte.chemistry.Component;
-import org.protolyte.chemistry.Derivatives;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.chemistry.RootFinder;
@@ -69,20 +68,27 @@ final class DoseCurve implements RootFinder.Function {
         }
         Equilibrium.Point p = problem.trial(totals, warm);
         warm = p;
-        try {
-            Derivatives d = problem.derivatives();
-            slope = d.totals(slopeOfTotals).pH();
-        } catch (IndeterminateException e) {
-            // caught: no slope here; the search bisects this step instead (RootFinder takes NaN so)
-            slope = Double.NaN;
-        }
+        slope = slope(problem, slopeOfTotals);
         return p.pH();
     }
 
-    /** The dose at which the pH is {@code goalPH}, between no titrant ({@code atNone} = pH there − goal) and reach. */
-    double doseFor(double goalPH, double atNone, double reach) {
+    /** dpH along a change of the totals at the problem's last solve; NaN where its balances are singular there. */
+    static double slope(Equilibrium.Prepared problem, double[] dTotals) {
+        try {
+            return problem.derivatives().totals(dTotals).pH();
+        } catch (IndeterminateException e) {
+            // caught: no slope here; the search bisects this step instead (RootFinder takes NaN so)
+            return Double.NaN;
+        }
+    }
+
+    /**
+     * The dose at which the pH is {@code goalPH}, between no titrant and reach, where the pH minus the goal is
+     * {@code atNone} and {@code atReach}.
+     */
+    double doseFor(double goalPH, double atNone, double atReach, double reach) {
         goal = goalPH;
-        return RootFinder.solve(this, 0, atNone, reach, 0, 1e-15 * reach, 1e-10);
+        return RootFinder.solve(this, 0, atNone, reach, atReach, 0);
     }
 
     @Override

@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.RecipeConflict;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.EquilibriumState;
 import org.protolyte.chemistry.Thermo;
@@ -26,6 +27,7 @@ import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
 import org.protolyte.units.Dimension;
 import org.protolyte.units.Quantity;
+import org.protolyte.substance.AtomicWeights;
 
 import tools.jackson.databind.node.JsonNodeFactory;
 
@@ -39,8 +41,6 @@ import tools.jackson.databind.node.JsonNodeFactory;
  */
 public final class BatchAnalyzer {
 
-    /** Water, g/mol (IUPAC 2021 atomic weights: 2 × 1.008 + 15.999). */
-    private static final double WATER = 18.015;
     /** Below these differences nothing needs explaining; a rule's own limits are larger (defaults 0.1, 10 %, 3 %). */
     private static final double QUIET_PH = 0.02;
     private static final double QUIET_RELATIVE = 0.01;
@@ -129,7 +129,7 @@ public final class BatchAnalyzer {
                 problems.add(r.document().problem(a.pointer() + "/substance", e.getMessage()));
                 continue;
             }
-            boolean titrant = master.titrants().stream().anyMatch(t -> t.substance().name().equals(s.name()));
+            boolean titrant = master.titrants().stream().anyMatch(t -> t.substance().equals(s));
             double moles;
             if (a.amount().dimension() == Dimension.VOLUME) {
                 moles = a.amount().base() * a.stockMolarity().orElseThrow();
@@ -159,7 +159,7 @@ public final class BatchAnalyzer {
     static double corrected(BatchRecord.Addition a, Substance s) {
         double m = a.amount().base();
         double molar = s.molarMass().getAsDouble();
-        double anhydrous = molar - s.hydrationWater() * WATER;
+        double anhydrous = molar - s.hydrationWater() * AtomicWeights.WATER;
         return switch (a.weighed()) {
             case PURE -> m / molar;
             case ANHYDROUS -> m / anhydrous;
@@ -168,7 +168,7 @@ public final class BatchAnalyzer {
                 if (a.assayAsIs()) {
                     yield m * assay / molar;
                 }
-                double w = a.water().orElse(s.hydrationWater() * WATER / molar);
+                double w = a.water().orElse(s.hydrationWater() * AtomicWeights.WATER / molar);
                 yield m * (1 - w) * assay / anhydrous;
             }
         };
@@ -182,7 +182,7 @@ public final class BatchAnalyzer {
         for (Ingredient ing : master.ingredients()) {
             Substance want = ing.substance();
             if (ing.kind() == Ingredient.Kind.TITRANT) {
-                List<Made> used = left.stream().filter(x -> x.titrant() && x.substance().name().equals(want.name()))
+                List<Made> used = left.stream().filter(x -> x.titrant() && x.substance().equals(want))
                         .toList();
                 left.removeAll(used);
                 double moles = used.stream().mapToDouble(Made::moles).sum();
@@ -192,11 +192,11 @@ public final class BatchAnalyzer {
                 continue;
             }
             double expected = nominal.moles().getOrDefault(ing, 0.0) * scale;
-            List<Made> same = left.stream().filter(x -> x.substance().name().equals(want.name())).toList();
+            List<Made> same = left.stream().filter(x -> x.substance().equals(want)).toList();
             BatchAnalysis.Match match = BatchAnalysis.Match.SAME;
             if (same.isEmpty()) {
                 List<Substance> siblings = library.siblings(want);
-                same = left.stream().filter(x -> siblings.stream().anyMatch(s -> s.name().equals(x.substance().name())))
+                same = left.stream().filter(x -> siblings.stream().anyMatch(s -> s.equals(x.substance())))
                         .limit(1).toList();
                 match = same.isEmpty() ? BatchAnalysis.Match.MISSING : BatchAnalysis.Match.OTHER_FORM;
             }
@@ -248,7 +248,7 @@ public final class BatchAnalyzer {
         }
         if (qs && !forward) {
             Made first = made.stream().filter(Made::stocked).findFirst().orElseThrow();
-            double ml = made.stream().filter(x -> x.stocked() && x.substance().name().equals(first.substance().name()))
+            double ml = made.stream().filter(x -> x.stocked() && x.substance().equals(first.substance()))
                     .mapToDouble(x -> x.moles() / x.molarity() * 1000).sum();
             obs.add(new BatchAnalysis.Observation(BatchAnalysis.Observation.Kind.TITRANT,
                     "mL of " + first.substance().name() + " " + molarityText(first.molarity()), ml, Double.NaN,
@@ -394,7 +394,7 @@ public final class BatchAnalyzer {
                     titrantFactor, Optional.empty());
             Analyzer.Forecast f = analyzer.forecast(recipe);
             return new Outcome(f.states().get(0), reasons(f.caveats()));
-        } catch (DocumentException e) {
+        } catch (DocumentException | RecipeConflict e) {
             return new Outcome(Optional.empty(), problems(e));
         }
     }
@@ -404,8 +404,9 @@ public final class BatchAnalyzer {
                 : String.join("; ", caveats.stream().map(Caveat::message).toList());
     }
 
-    private static String problems(DocumentException e) {
-        return "the batch cannot be computed: " + String.join("; ", e.problems().stream().map(Problem::message).toList());
+    private static String problems(RuntimeException e) {
+        return "the batch cannot be computed: " + (e instanceof DocumentException d
+                ? String.join("; ", d.problems().stream().map(Problem::message).toList()) : e.getMessage());
     }
 
     /**
@@ -447,12 +448,12 @@ public final class BatchAnalyzer {
                     Optional.of(new Goal(titrant.substance(), titrant.molarity() * factor, goalPH, goalKelvin, atVolume)));
             Analyzer.Forecast f = analyzer.forecast(recipe);
             for (Map.Entry<Ingredient, OptionalDouble> e : f.doses().entrySet()) {
-                if (e.getKey().substance().name().equals(titrant.substance().name()) && e.getValue().isPresent()) {
+                if (e.getKey().substance().equals(titrant.substance()) && e.getValue().isPresent()) {
                     return Predicted.of(e.getValue().getAsDouble() / (titrant.molarity() * factor) * 1000);
                 }
             }
             return Predicted.none(why + reasons(f.caveats()));
-        } catch (DocumentException e) {
+        } catch (DocumentException | RecipeConflict e) {
             return Predicted.none(why + problems(e));
         }
     }
@@ -512,7 +513,7 @@ public final class BatchAnalyzer {
             Recipe recipe = recipe(r, master, made, 1, conditions(cs.stream().map(Formulation.Condition::name).toList(),
                     cs.stream().map(Formulation.Condition::kelvin).toList()), 1, Optional.empty());
             return Optional.of(analyzer.analyze(recipe));
-        } catch (DocumentException e) {
+        } catch (DocumentException | RecipeConflict e) {
             caveats.add(Caveat.warning("batch-as-made", "the batch as made cannot be shown at the master's conditions: "
                     + problems(e)));
             return Optional.empty();

@@ -8,6 +8,9 @@ package org.protolyte.chemistry;
  */
 public final class CarbonDioxide {
 
+    /** The form of a system that Henry's law holds at a gas phase's partial pressure. */
+    public static final String DISSOLVED = "CO2(aq)";
+
     /** mol/(m³·Pa) at 298.15 K. */
     public static final double HCP_25 = 3.3e-4;
     /** K, the van 't Hoff temperature dependence of Hcp. */

@@ -9,6 +9,8 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.protolyte.Protolyte;
+import org.protolyte.analysis.RecipeConflict;
 import org.protolyte.analysis.Robustness;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.Equilibrium;
@@ -88,12 +90,19 @@ public final class RobustnessCommand implements Callable<Integer> {
         }
         boolean terminal = System.console() != null;
         Robustness.Settings settings = new Robustness.Settings(samples, seed, tolerancePercent / 100, meter);
-        Robustness.Result result = new Robustness(new Equilibrium(Davies.INSTANCE)).run(recipe, settings, done -> {
-            if (terminal && done % Math.max(500, samples / 20) == 0) {
-                err.printf(Locale.ROOT, "\r%d of %d samples", done, samples);
-                err.flush();
-            }
-        });
+        Robustness.Result result;
+        try {
+            result = new Robustness(new Equilibrium(Davies.INSTANCE)).run(recipe, settings, done -> {
+                if (terminal && done % Math.max(500, samples / 20) == 0) {
+                    err.printf(Locale.ROOT, "\r%d of %d samples", done, samples);
+                    err.flush();
+                }
+            });
+        } catch (RecipeConflict e) {
+            Protolyte.atAdjustment(recipe.formulation(), e).problems()
+                    .forEach(p -> err.println("protolyte: " + Printable.text(file + ": " + p)));
+            return 2;
+        }
         if (terminal) {
             err.print("\r" + " ".repeat(40) + "\r");
             err.flush();

@@ -24,8 +24,9 @@ public final class BicarbonateNeedsCo2 implements CheckKind {
         if (f.conditions().stream().anyMatch(c -> c.co2Pascal().isPresent())) {
             return List.of();
         }
+        String carbonDioxide = a.recipe().library().carbonDioxide().map(s -> s.name()).orElse(null);
         for (Ingredient ing : a.recipe().ingredients()) {
-            if (ing.substance().composition().systems().stream().anyMatch(p -> p.system().equals("carbonate"))) {
+            if (ing.substance().composition().systems().stream().anyMatch(p -> p.system().equals(carbonDioxide))) {
                 return List.of(rule.finding(f, ing.line().pointer(), ing.substance().name() + " buffers with CO2, but no "
                         + "condition states a CO2 level: every pH here is for a closed vessel, free of CO2 as made"));
             }

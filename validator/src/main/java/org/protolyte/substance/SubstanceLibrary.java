@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.Set;
 
 import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.CarbonDioxide;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.SaltSolubility;
 import org.protolyte.chemistry.SolidPhase;
@@ -150,6 +151,11 @@ public final class SubstanceLibrary {
 
     public Optional<AcidBaseSystem> system(String name) {
         return Optional.ofNullable(systems.get(name));
+    }
+
+    /** The system a CO2 gas phase opens: the one whose most protonated form is dissolved CO2. */
+    public Optional<AcidBaseSystem> carbonDioxide() {
+        return systems.values().stream().filter(s -> s.forms().get(0).name().equals(CarbonDioxide.DISSOLVED)).findFirst();
     }
 
     public Collection<AcidBaseSystem> systems() {

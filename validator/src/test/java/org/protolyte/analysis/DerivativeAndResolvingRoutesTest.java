@@ -54,11 +54,16 @@ class DerivativeAndResolvingRoutesTest {
     }
 
     /** One constant and the two equilibria it is moved to. */
-    private record Move(String name, Equilibrium up, Equilibrium down, int pair, double correlation) {
+    record Move(String name, Equilibrium up, Equilibrium down, int pair, double correlation) {
     }
 
     /** The constants, as the production budget lists them (systems by name; see ConstantsPropagation). */
-    private static List<Move> moves(Equilibrium e, Recipe recipe, Solution solution) {
+    static List<Move> moves(Equilibrium e, Recipe recipe, Solution solution) {
+        return moves(e, recipe, solution, 1);
+    }
+
+    /** The same, each constant moved by ±{@code fraction} of its u. */
+    static List<Move> moves(Equilibrium e, Recipe recipe, Solution solution, double fraction) {
         List<Move> out = new ArrayList<>();
         boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
         List<AcidBaseSystem> systems = new ArrayList<>(recipe.library().systems());
@@ -69,24 +74,24 @@ class DerivativeAndResolvingRoutesTest {
                 DissociationStep step = sys.steps().get(k);
                 int pair = out.size();
                 if (step.uncertainty() > 0) {
-                    out.add(new Move(sys.name() + " pKa" + k, e.withPKaShift(sys, k, step.uncertainty()),
-                            e.withPKaShift(sys, k, -step.uncertainty()), -1, 0));
+                    out.add(new Move(sys.name() + " pKa" + k, e.withPKaShift(sys, k, fraction * step.uncertainty()),
+                            e.withPKaShift(sys, k, -fraction * step.uncertainty()), -1, 0));
                 }
                 if (step.deltaHUncertainty() > 0) {
                     boolean paired = step.uncertainty() > 0 && step.correlation() != 0;
-                    out.add(new Move(sys.name() + " ΔH°" + k, e.withDeltaHShift(sys, k, step.deltaHUncertainty()),
-                            e.withDeltaHShift(sys, k, -step.deltaHUncertainty()), paired ? pair : -1,
+                    out.add(new Move(sys.name() + " ΔH°" + k, e.withDeltaHShift(sys, k, fraction * step.deltaHUncertainty()),
+                            e.withDeltaHShift(sys, k, -fraction * step.deltaHUncertainty()), paired ? pair : -1,
                             step.correlation()));
                 }
             }
         }
         for (Species c : solution.species()) {
             if (c.isComplex() && c.formation().uncertainty() > 0) {
-                out.add(new Move(c.name(), e.withLogKShift(c, c.formation().uncertainty()),
-                        e.withLogKShift(c, -c.formation().uncertainty()), -1, 0));
+                out.add(new Move(c.name(), e.withLogKShift(c, fraction * c.formation().uncertainty()),
+                        e.withLogKShift(c, -fraction * c.formation().uncertainty()), -1, 0));
             }
         }
-        out.add(new Move("pKw", e.withPKwShift(Equilibrium.PKW_UNCERTAINTY), e.withPKwShift(-Equilibrium.PKW_UNCERTAINTY),
+        out.add(new Move("pKw", e.withPKwShift(fraction * Equilibrium.PKW_UNCERTAINTY), e.withPKwShift(-fraction * Equilibrium.PKW_UNCERTAINTY),
                 -1, 0));
         return out;
     }

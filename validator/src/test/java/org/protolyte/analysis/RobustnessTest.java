@@ -90,8 +90,8 @@ class RobustnessTest {
                 double t = result.tolerances().get(weighed.get(i).substance().name());
                 scale.put(weighed.get(i), (mask >> i & 1) == 1 ? 1 + t : 1 - t);
             }
-            double pH = new Robustness.Sampler(new Analyzer(EQUILIBRIUM), r,
-                    new Robustness.Nominal(new double[0], new double[0]), new Robustness.Batches(r)).sample(scale, 0)[0][0];
+            double pH = ((BatchSampler.Solved) new BatchSampler(new Analyzer(EQUILIBRIUM), r, BatchSampler.Nominal.none(),
+                    new BatchSampler.Batches(r)).sample(scale, 0)).pH()[0];
             lo = Math.min(lo, pH);
             hi = Math.max(hi, pH);
         }
