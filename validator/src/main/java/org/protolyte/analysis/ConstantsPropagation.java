@@ -131,7 +131,7 @@ final class ConstantsPropagation {
         boolean doseFailed = false;
         if (dosed.isPresent()) {
             TitrantResult t = dosed.get();
-            Analyzer.Goal goal = Analyzer.goal(recipe, t);
+            Titration.Goal goal = Titration.goal(recipe, t);
             try {
                 Solution at = recipe.solution(Map.of(t.ingredient(), t.moles()), goal.volumeFraction());
                 Solution more = recipe.solution(Map.of(t.ingredient(), t.moles() + step), goal.volumeFraction());

@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 
+import org.protolyte.units.Air;
 import org.protolyte.units.Dimension;
 import org.protolyte.units.Quantity;
 import org.protolyte.units.UnitException;
@@ -21,10 +22,6 @@ public final class FormulationReader {
 
     public static final String SCHEMA = "formulation.schema.json";
     static final double DEFAULT_TEMPERATURE = 298.15;
-    /** CO2 in dry air, mole fraction: 419.3 ppm, the NOAA global mean for 2023 (NOAA release of 2024, read). */
-    public static final double AIR_CO2_FRACTION = 4.193e-4;
-    /** Pa: the gas pressure assumed where a condition states a CO2 fraction but no pressure. */
-    public static final double STANDARD_PRESSURE = 101325;
 
     /** The largest dilution of a concentrate accepted: ten times the usual 1000x (common practice). */
     static final double MAX_DILUTION = 1e4;
@@ -240,13 +237,13 @@ public final class FormulationReader {
             if (co2 == null) {
                 return OptionalDouble.empty();
             }
-            double pressure = STANDARD_PRESSURE;
+            double pressure = Air.STANDARD_PRESSURE;   // where a condition states a CO2 fraction but no pressure
             if (c.has("pressure")) {
                 Optional<Quantity> q = positive(c.get("pressure"), p + "/pressure", "a pressure", Dimension.PRESSURE);
                 pressure = q.map(Quantity::base).orElse(pressure);
             }
             if (co2.isString() && co2.asString().equals("air")) {
-                return OptionalDouble.of(AIR_CO2_FRACTION * pressure);
+                return OptionalDouble.of(Air.co2Pascal(pressure));
             }
             Optional<Quantity> q = quantity(co2, p + "/co2", "a CO2 level", Dimension.FRACTION, Dimension.PRESSURE);
             if (q.isEmpty()) {

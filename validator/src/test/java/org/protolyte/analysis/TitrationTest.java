@@ -109,6 +109,8 @@ class TitrationTest {
                 "{\"value\": 7.8, \"tolerance\": 0.1, \"temperature\": \"37 Cel\"}", ROOM_AND_BODY);
         assertEquals(Status.INVALID, r.status());
         assertTrue(r.findings().get(0).message().contains("two acids"));
+        // the analysis names the second acid; the reader's layer places it at that component's adjustTo
+        assertEquals(java.util.Optional.of("/components/2/adjustTo"), r.findings().get(0).pointer());
     }
 
     @Test
@@ -116,6 +118,7 @@ class TitrationTest {
         DocumentReport r = check(TRIS + "," + HCL, "", ROOM_AND_BODY);
         assertEquals(Status.INVALID, r.status());
         assertTrue(r.findings().get(0).message().contains("no pH target"));
+        assertEquals(java.util.Optional.of("/components/1/adjustTo"), r.findings().get(0).pointer());
     }
 
     @Test
