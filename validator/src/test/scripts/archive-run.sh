@@ -1,7 +1,7 @@
 #!/bin/sh
-# The archive figure: re-check a folder of N generated formulation documents in one run, in a 256 MiB heap.
+# The archive figure: re-check a folder of N formulation documents in one run, in a 256 MiB heap.
 # Usage: validator/src/test/scripts/archive-run.sh [N]   (after mvn -q package; default N = 10000)
-# The documents are variants of one sample with the amounts scaled; nothing is kept afterwards.
+# The documents are copies of every shipped formulation sample in turn, each with its own id; nothing is kept.
 set -eu
 n=${1:-10000}
 root=$(cd "$(dirname "$0")/../../../.." && pwd)
@@ -9,11 +9,14 @@ jar="$root/validator/target/protolyte.jar"
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
 mkdir "$work/archive"
-template="$root/sample-formulations/parenteral-citrate-buffer-off-target.json"
+set -- "$root"/sample-formulations/*.json
+count=$#
 i=0
 while [ "$i" -lt "$n" ]; do
-  grams=$(printf '%d.%02d' $((3 + i % 3)) $((i % 97)))
-  sed -e "s/\"LB-DP-0225\"/\"ARCH-$i\"/" -e "s/\"4.41 g\"/\"$grams g\"/" "$template" > "$work/archive/doc-$i.json"
+  k=$((i % count + 1))
+  eval "template=\${$k}"
+  # the first "id" of the document is its own: made unique per copy
+  sed -e "0,/\"id\": *\"/s//\"id\": \"ARCH-$i-/" "$template" > "$work/archive/doc-$i.json"
   i=$((i + 1))
 done
 start=$(date +%s.%N)
@@ -22,4 +25,4 @@ start=$(date +%s.%N)
 java -Xmx256m -XX:TieredStopAtLevel=1 -jar "$jar" check --format json -o "$work/report.json" "$work/archive" || true
 end=$(date +%s.%N)
 size=$(wc -c < "$work/report.json")
-echo "$n documents in $(echo "$end - $start" | bc) s with -Xmx256m -XX:TieredStopAtLevel=1; report $size bytes"
+echo "$n documents ($count samples in turn) in $(echo "$end - $start" | bc) s with -Xmx256m -XX:TieredStopAtLevel=1; report $size bytes"

@@ -169,6 +169,7 @@ final class BatchSampler {
         double[][] dDose = new double[meters.length][q];
         for (int i = 0; i < meters.length; i++) {
             if (meters[i] != null) {
+                meterCurves[i].chord = false;     // the exact slope at the dose found
                 double reading = meterCurves[i].pH(x, x[titrantIndex[i]]);
                 if (!(Math.abs(meterCurves[i].slope()) > 0)) {
                     throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("meter-flat",
@@ -206,7 +207,9 @@ final class BatchSampler {
 
     /**
      * One titrant's meter: the reading with some moles of it and none of the titrants dosed after it, and the dose
-     * at which it reads a goal (the root finder, Newton with the slope from the derivatives).
+     * at which it reads a goal: the root finder with the slope from the derivatives at the nominal dose, kept for the
+     * steps that follow (a chord method: the slope barely changes over a batch's small move, each step still lands
+     * inside the proven bracket, and the goal is met to the finder's one tolerance).
      */
     private final class Meter implements RootFinder.Function {
         private final int titrant;
@@ -214,6 +217,7 @@ final class BatchSampler {
         private double goal;
         private Equilibrium.Point warm;
         private double slope = Double.NaN;
+        private boolean chord;
 
         Meter(int titrant) {
             this.titrant = titrant;
@@ -228,7 +232,9 @@ final class BatchSampler {
             List<Component> order = meters[titrant].components();
             Equilibrium.Point p = meters[titrant].point(batches.batch(order, atVolume[titrant], x).totals(), warm);
             warm = p;
-            slope = DoseCurve.slope(meters[titrant], batches.slope(order, atVolume[titrant], x, titrantIndex[titrant]));
+            if (!chord) {
+                slope = DoseCurve.slope(meters[titrant], batches.slope(order, atVolume[titrant], x, titrantIndex[titrant]));
+            }
             return p.pH();
         }
 
@@ -240,7 +246,9 @@ final class BatchSampler {
         double doseFor(double[] amounts, double goalPH, double nominalDose) {
             base = amounts;
             goal = goalPH;
+            chord = false;
             double atNominal = value(nominalDose);
+            chord = Double.isFinite(slope) && slope != 0;
             if (Math.abs(atNominal) < RootFinder.PH_TOLERANCE) {
                 return nominalDose;
             }
@@ -251,6 +259,7 @@ final class BatchSampler {
                     return RootFinder.solve(this, nominalDose, atNominal, far, atFar, 0.5 * (nominalDose + far));
                 }
             }
+            chord = false;
             double reach = Analyzer.MAX_TITRANT_MOLALITY * batches.batch(meters[titrant].components(),
                     atVolume[titrant], amounts).waterKg();
             double atReach = value(reach);
