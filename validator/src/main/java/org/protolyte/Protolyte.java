@@ -59,6 +59,10 @@ import tools.jackson.databind.JsonNode;
 /**
  * The one flow: read and validate → resolve → analyse every condition → check → report. Each input
  * is checked on its own; one bad file never stops the others.
+ *
+ * <p>Longer than the project's ~400 lines because it is the one place that knows every document kind, folder walking
+ * and the typed failures each step may raise, and turns each into a report; the steps themselves live in their
+ * packages. It is to become the library's facade (issue: the plugin's API), where it will be cut down.
  */
 public final class Protolyte {
 

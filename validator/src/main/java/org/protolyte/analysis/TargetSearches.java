@@ -82,13 +82,24 @@ final class TargetSearches {
                 return slope;
             }
         };
-        double atMax = f.value(Analyzer.MAX_TITRANT_MOLALITY);
         double atNone = f.value(0);
-        if (Math.signum(atNone) == Math.signum(atMax) && Math.abs(atNone) >= RootFinder.PH_TOLERANCE) {
+        if (Math.abs(atNone) < RootFinder.PH_TOLERANCE) {
+            return 0;
+        }
+        // the bracket's top: twice the first Newton step, four times wider until the pH passes the goal
+        double newton = -atNone / f.slope();
+        boolean stepped = Double.isFinite(newton) && newton > 0;
+        double top = stepped ? Math.min(2 * newton, Analyzer.MAX_TITRANT_MOLALITY) : Analyzer.MAX_TITRANT_MOLALITY;
+        double atTop = f.value(top);
+        while (Math.signum(atTop) == Math.signum(atNone) && top < Analyzer.MAX_TITRANT_MOLALITY) {
+            top = Math.min(4 * top, Analyzer.MAX_TITRANT_MOLALITY);
+            atTop = f.value(top);
+        }
+        if (Math.signum(atNone) == Math.signum(atTop)) {
             throw new IndeterminateException(Caveat.indeterminate("load-not-found", "no amount of strong "
                     + (base ? "base" : "acid") + " up to " + Analyzer.MAX_TITRANT_MOLALITY + " mol/kg reaches pH " + goal));
         }
-        double x = RootFinder.solve(f, 0, atNone, Analyzer.MAX_TITRANT_MOLALITY, atMax, 0);
+        double x = RootFinder.solve(f, 0, atNone, top, atTop, stepped ? Math.min(newton, top) : 0);
         double mmolPerLitre = x * solution.waterKg() / solution.volumeLitres(kelvin) * 1000;
         return base ? mmolPerLitre : -mmolPerLitre;
     }

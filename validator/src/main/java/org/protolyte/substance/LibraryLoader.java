@@ -35,6 +35,10 @@ import tools.jackson.databind.JsonNode;
  * entry whose name (or a synonym) clashes with an earlier one is an error unless it declares
  * {@code "replaces": true}. Every entry is checked: electroneutral composition, known systems, ions and
  * forms, and a declared molar mass that matches the formula.
+ *
+ * <p>Longer than the project's ~400 lines because it reads one document kind whose every section (systems, complexes,
+ * solids, solubilities, substances) is checked against the others as it is read; split by section, each part would
+ * need the whole library built so far, and the checks of one entry would be spread over several classes.
  */
 public final class LibraryLoader {
 
