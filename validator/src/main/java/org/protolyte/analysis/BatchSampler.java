@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 
+import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Derivatives;
 import org.protolyte.chemistry.Equilibrium;
@@ -49,6 +50,15 @@ final class BatchSampler {
                 setpoint[i] = t.setpointPH().orElse(Double.NaN);
             }
             return new Nominal(moles, setpoint);
+        }
+
+        /** The doses as the recipe's titrant lines take them. */
+        Map<Ingredient, Double> doses(Recipe recipe) {
+            Map<Ingredient, Double> out = new java.util.LinkedHashMap<>();
+            for (int i = 0; i < moles.length; i++) {
+                out.put(recipe.titrants().get(i), moles[i]);
+            }
+            return out;
         }
 
         static Nominal none() {
@@ -160,7 +170,7 @@ final class BatchSampler {
      */
     double[][] responses(List<ConstantsPropagation.Perturbation> perturbations) {
         if (nominal instanceof Unsolved u) {
-            throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("nominal-unsolved",
+            throw new IndeterminateException(Caveat.indeterminate("nominal-unsolved",
                     u.reason()));
         }
         double[] x = amounts(Map.of());
@@ -172,7 +182,7 @@ final class BatchSampler {
                 meterCurves[i].chord = false;     // the exact slope at the dose found
                 double reading = meterCurves[i].pH(x, x[titrantIndex[i]]);
                 if (!(Math.abs(meterCurves[i].slope()) > 0)) {
-                    throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("meter-flat",
+                    throw new IndeterminateException(Caveat.indeterminate("meter-flat",
                             "the meter reading does not move with the dose at pH " + reading));
                 }
                 Derivatives d = meters[i].derivatives();
@@ -270,7 +280,7 @@ final class BatchSampler {
             if (Math.signum(atNone) == Math.signum(atReach - atNone)) {
                 return 0;   // the meter reads past the goal with no titrant at all: none is added
             }
-            throw new IndeterminateException(org.protolyte.chemistry.Caveat.indeterminate("batch-qs-unreachable",
+            throw new IndeterminateException(Caveat.indeterminate("batch-qs-unreachable",
                     "no dose of the titrant up to " + Analyzer.MAX_TITRANT_MOLALITY
                             + " mol/kg brings this batch's meter reading to its setpoint"));
         }

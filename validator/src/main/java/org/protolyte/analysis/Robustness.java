@@ -167,16 +167,10 @@ public final class Robustness {
      */
     private static DescriptiveStatistics[] systematic(Recipe recipe, Settings settings, RandomGenerator random, int n,
                                                       BatchSampler sampler, Nominal nominalDose) {
-        Map<Ingredient, Double> doses = new LinkedHashMap<>();
-        for (int i = 0; i < nominalDose.moles().length; i++) {
-            doses.put(recipe.titrants().get(i), nominalDose.moles()[i]);
-        }
         List<ConstantsPropagation.Perturbation> constants = ConstantsPropagation.perturbations(recipe,
-                recipe.solution(doses));
-        if (!(sampler.nominal() instanceof BatchSampler.Solved nominal)) {
-            return stats(n);    // no nominal batch, no band: the reason is the study's first failure
-        }
-        double[][] response = sampler.responses(constants);
+                recipe.solution(nominalDose.doses(recipe)));
+        double[][] response = sampler.responses(constants);     // throws where the nominal batch is unsolved
+        double[] nominal = ((BatchSampler.Solved) sampler.nominal()).pH();
         DescriptiveStatistics[] out = stats(n);
         double[] z = new double[constants.size()];
         for (int w = 0; w < settings.samples(); w++) {
@@ -187,7 +181,7 @@ public final class Robustness {
                         : g;
             }
             for (int c = 0; c < n; c++) {
-                double pH = nominal.pH()[c];
+                double pH = nominal[c];
                 for (int q = 0; q < z.length; q++) {
                     pH += response[c][q] * z[q];
                 }

@@ -6,9 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.stream.Stream;
 
 import org.junit.jupiter.params.ParameterizedTest;
@@ -18,7 +16,6 @@ import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.FormulationReader;
 import org.protolyte.document.JsonReader;
 import org.protolyte.document.SchemaCatalog;
-import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.substance.LibraryLoader;
@@ -59,11 +56,7 @@ class BatchSamplerTest {
         if (!(sampler.nominal() instanceof BatchSampler.Solved)) {
             return;     // a sample whose batches cannot be solved has no systematic band (RobustnessOnSamplesTest)
         }
-        Map<Ingredient, Double> doses = new HashMap<>();
-        for (int i = 0; i < dose.moles().length; i++) {
-            doses.put(recipe.titrants().get(i), dose.moles()[i]);
-        }
-        var solution = recipe.solution(doses);
+        var solution = recipe.solution(dose.doses(recipe));
         List<ConstantsPropagation.Perturbation> constants = ConstantsPropagation.perturbations(recipe, solution);
         List<DerivativeAndResolvingRoutesTest.Move> moves = DerivativeAndResolvingRoutesTest.moves(e, recipe, solution,
                 FRACTION);
