@@ -1,66 +1,78 @@
 package org.protolyte.chemistry;
 
-import java.util.Map;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.OptionalDouble;
 
 /**
- * Pitzer's ion-interaction equations for the strong electrolytes of saline concentrates, good to several mol/kg
- * where the Davies equation fails above a few tenths (Pitzer, "Activity Coefficients in Electrolyte Solutions",
- * 2nd ed., CRC 1991, chapter 3; Harvie, Møller and Weare, Geochim. Cosmochim. Acta 48 (1984) 723, eqs. for a
- * mixture of 1:1 salts). With α = 2 and b = 1.2 kg^½/mol^½:
+ * Pitzer's ion-interaction equations for a mixture of electrolytes, in the form of Harvie, Møller and Weare,
+ * Geochim. Cosmochim. Acta 48 (1984) 723, eqs. 1–9 (Pitzer, "Activity Coefficients in Electrolyte Solutions",
+ * 2nd ed., CRC 1991, ch. 3), with b = 1.2 kg^½/mol^½ and the unsymmetrical mixing terms Eθ of Pitzer,
+ * J. Solution Chem. 4 (1975) 249. For a cation M (an anion the same with the roles swapped):
  * <pre>
- *   φ − 1 = (2/Σm) [ −A_φ I^{3/2}/(1 + b√I) + Σ_c Σ_a m_c m_a (B^φ_ca + Z C_ca) + Σ_c<c' m_c m_c' (θ + Σ_a m_a ψ) ]
- *   B^φ = β⁰ + β¹ e^{−α√I},  C = Cφ / 2,  Z = Σ m_i |z_i|   (the mean activity coefficient: see {@link #lnGamma})
+ *   ln γ_M = z_M² F + Σ_a m_a (2 B_Ma + Z C_Ma) + Σ_c m_c (2 Φ_Mc + Σ_a m_a ψ_Mca) + Σ_a&lt;a' m_a m_a' ψ_aa'M
+ *            + |z_M| Σ_c Σ_a m_c m_a C_ca
+ *   F = −A_φ [√I/(1 + b√I) + (2/b) ln(1 + b√I)] + Σ_c Σ_a m_c m_a B'_ca + Σ_i&lt;j m_i m_j Φ'_ij   (i, j alike)
+ *   Σ m (φ − 1) = 2 [−A_φ I^{3/2}/(1 + b√I) + Σ_c Σ_a m_c m_a (B^φ_ca + Z C_ca) + Σ_i&lt;j m_i m_j (Φ^φ_ij + Σ_k m_k ψ_ijk)]
+ *   B = β⁰ + β¹ g(α₁√I) + β² g(α₂√I),  B' = [β¹ g'(α₁√I) + β² g'(α₂√I)]/I,  B^φ = β⁰ + β¹ e^{−α₁√I} + β² e^{−α₂√I}
+ *   g(x) = 2[1 − (1 + x) e^{−x}]/x²,  g'(x) = −2[1 − (1 + x + x²/2) e^{−x}]/x²,  C = Cφ/(2√|z_M z_X|),  Z = Σ m_i |z_i|
  * </pre>
- * A_φ = A·ln10/3 from the Debye–Hückel slope of {@link Water} (0.3915 at 25 °C). The parameters are for 25 °C
- * (Pitzer and Mayorga, J. Phys. Chem. 77 (1973) 2300; mixing terms Pitzer and Kim, J. Am. Chem. Soc. 96 (1974) 5701;
- * all from memory) and are used within 15–35 °C, where their temperature derivatives change them by less than the
- * check tolerances.
+ * A_φ = A·ln10/3 from the Debye–Hückel slope of {@link Water} (0.3914 at 25 °C). Neutral solutes count in Σ m only
+ * (no λ terms: their γ is 1). The parameters are in {@link PitzerParameters}.
  */
 public final class Pitzer {
 
-    /** Where the 25 °C parameters are used. */
-    public static final TemperatureRange VALIDITY = TemperatureRange.celsius(15, 35);
+    /** Where the parameters of sodium and potassium chloride are used (see {@link PitzerParameters}). */
+    public static final TemperatureRange VALIDITY = PitzerParameters.binary("Na+", "Cl-").validity()
+            .intersect(PitzerParameters.binary("K+", "Cl-").validity());
 
-    private static final double ALPHA = 2.0;
-    private static final double B = 1.2;
-
-    /** β⁰, β¹ and Cφ of a 1:1 salt. */
-    record Salt(double beta0, double beta1, double cPhi) {
-    }
-
-    /** Cation–anion parameters; ions are named as in the library ("Na+", "K+", "Cl-"). */
-    private static final Map<String, Salt> SALTS = Map.of(
-            "Na+|Cl-", new Salt(0.0765, 0.2664, 0.00127),
-            "K+|Cl-", new Salt(0.04835, 0.2122, -0.00084));
-    private static final double THETA_NA_K = -0.012;
-    private static final double PSI_NA_K_CL = -0.0018;
+    static final double B = 1.2;
+    /** J(x) of Pitzer (1975), eq. 47: J ≈ x/(4 + C1 x^−C2 exp(−C3 x^C4)); constants from memory. */
+    private static final double J1 = 4.581;
+    private static final double J2 = 0.7237;
+    private static final double J3 = 0.0120;
+    private static final double J4 = 0.528;
 
     private Pitzer() {
     }
 
-    /** The ions the parameters cover; a solution whose ionic strength comes from others is not for this model. */
-    public static boolean covers(String ion) {
-        return salineIndex(ion) >= 0;
+    /** Mean activity coefficient of a single salt of these two ions at molality m of the salt. */
+    public static double meanActivityCoefficient(String cation, String anion, double m, double kelvin) {
+        Mixture x = salt(cation, anion, kelvin);
+        double[] mol = x.saltMolalities(m);
+        double[] ln = new double[2];
+        x.lnGamma(mol, ln);
+        int nu = x.nuCation + x.nuAnion;
+        return Math.exp((x.nuCation * ln[0] + x.nuAnion * ln[1]) / nu);
+    }
+
+    /** Mean activity coefficient of a chloride ("Na+" or "K+") at molality m, 25 °C parameters. */
+    public static double meanActivityCoefficient(String cation, double m, double kelvin) {
+        return meanActivityCoefficient(cation, "Cl-", m, kelvin);
+    }
+
+    /** Mean activity coefficient of sodium chloride at molality m: the reference electrolyte of saline solutions. */
+    public static double sodiumChlorideMeanActivityCoefficient(double m, double kelvin) {
+        return meanActivityCoefficient("Na+", "Cl-", m, kelvin);
+    }
+
+    /** Osmotic coefficient of a single salt of these two ions at molality m of the salt. */
+    public static double osmoticCoefficient(String cation, String anion, double m, double kelvin) {
+        Mixture x = salt(cation, anion, kelvin);
+        double[] mol = x.saltMolalities(m);
+        return 1 + x.osmoticExcess(mol) / (mol[0] + mol[1]);
     }
 
     /**
-     * Osmotic coefficient of a solution of Na+, K+ and Cl- (mol/kg); empty if another ion is present or the
-     * temperature is outside {@link #VALIDITY}.
+     * Osmotic coefficient of a solution of Na+, K+ and Cl- (mol/kg); empty outside {@link #VALIDITY}, where the
+     * parameters of sodium and potassium chloride are not used.
      */
     public static OptionalDouble osmoticCoefficient(double na, double k, double cl, double kelvin) {
         if (!VALIDITY.contains(kelvin)) {
             return OptionalDouble.empty();
         }
-        double aPhi = Water.debyeHuckelA(kelvin) * Thermo.LN10 / 3;
-        double i = 0.5 * (na + k + cl);
-        double s = Math.sqrt(i);
-        double z = na + k + cl;
-        double sum = -aPhi * i * s / (1 + B * s);
-        sum += na * cl * (bPhi(SALTS.get("Na+|Cl-"), s) + z * SALTS.get("Na+|Cl-").cPhi() / 2);
-        sum += k * cl * (bPhi(SALTS.get("K+|Cl-"), s) + z * SALTS.get("K+|Cl-").cPhi() / 2);
-        sum += na * k * (THETA_NA_K + cl * PSI_NA_K_CL);
-        return OptionalDouble.of(1 + 2 * sum / (na + k + cl));
+        Mixture x = new Mixture(List.of(new Ion("Na+", 1), new Ion("K+", 1), new Ion("Cl-", -1)), kelvin);
+        return OptionalDouble.of(1 + x.osmoticExcess(new double[] {na, k, cl}) / (na + k + cl));
     }
 
     /** Where a free ion sits in {@link #osmoticCoefficient}'s arguments: 0 Na+, 1 K+, 2 Cl-; −1 if not covered. */
@@ -73,35 +85,304 @@ public final class Pitzer {
         };
     }
 
-    /** Mean activity coefficient of sodium chloride at molality m: the reference electrolyte of saline solutions. */
-    public static double sodiumChlorideMeanActivityCoefficient(double m, double kelvin) {
-        return meanActivityCoefficient("Na+", m, kelvin);
+    private static Mixture salt(String cation, String anion, double kelvin) {
+        int zc = charge(cation);
+        int za = charge(anion);
+        Mixture x = new Mixture(List.of(new Ion(cation, zc), new Ion(anion, za)), kelvin);
+        if (x.pairs == 0) {
+            throw new IllegalArgumentException("no Pitzer parameters for " + cation + " with " + anion);
+        }
+        return x;
     }
 
-    /** Mean activity coefficient of a single 1:1 salt ("Na+" or "K+" with "Cl-") at molality m. */
-    public static double meanActivityCoefficient(String cation, double m, double kelvin) {
-        Salt p = SALTS.get(cation + "|Cl-");
-        if (p == null) {
-            throw new IllegalArgumentException("no Pitzer parameters for " + cation + " with Cl-");
+    /** The charge written at the end of an ion's name: "Na+" 1, "HPO4-2" −2. */
+    static int charge(String ion) {
+        int sign = Math.max(ion.lastIndexOf('+'), ion.lastIndexOf('-'));
+        if (sign < 0) {
+            return 0;
         }
-        return Math.exp(lnGamma(p, m, kelvin));
+        int s = ion.charAt(sign) == '+' ? 1 : -1;
+        String digits = ion.substring(sign + 1);
+        if (!digits.chars().allMatch(Character::isDigit)) {
+            throw new IllegalArgumentException("no charge at the end of the ion's name: " + ion);
+        }
+        return digits.isEmpty() ? s : s * Integer.parseInt(digits);
+    }
+
+    /** An ion (or neutral solute) of a mixture, by its name in the substance library. */
+    public record Ion(String name, int charge) {
     }
 
     /**
-     * ln γ± of a single 1:1 salt (Pitzer and Mayorga 1973): f^γ + m B^γ + m² C^γ, with
-     * f^γ = −A_φ [√I/(1 + b√I) + (2/b) ln(1 + b√I)], B^γ = 2β⁰ + (2β¹/(α²I)) [1 − (1 + α√I − α²I/2) e^{−α√I}],
-     * C^γ = 3Cφ/2.
+     * The interaction parameters among a fixed list of ions at one temperature, and the activity and osmotic
+     * coefficients of any molalities of them. Immutable.
      */
-    static double lnGamma(Salt p, double m, double kelvin) {
-        double aPhi = Water.debyeHuckelA(kelvin) * Thermo.LN10 / 3;
-        double s = Math.sqrt(m);
-        double f = -aPhi * (s / (1 + B * s) + 2 / B * Math.log1p(B * s));
-        double x = ALPHA * s;
-        double bGamma = 2 * p.beta0() + 2 * p.beta1() / (x * x) * (1 - (1 + x - x * x / 2) * Math.exp(-x));
-        return f + m * bGamma + m * m * 1.5 * p.cPhi();
+    public static final class Mixture {
+
+        final int n;
+        final int[] z;
+        final double aPhi;
+        /** Cation–anion pairs with parameters: indices, β⁰, β¹, β², C, α₁, α₂. */
+        final int pairs;
+        final int[] cation;
+        final int[] anion;
+        final double[] beta0;
+        final double[] beta1;
+        final double[] beta2;
+        final double[] c;
+        final double[] alpha1;
+        final double[] alpha2;
+        /** Like-sign pairs that mix: θ where given, Eθ where the charges differ. */
+        final int likes;
+        final int[] likeI;
+        final int[] likeJ;
+        final double[] theta;
+        /** Triplets i, j (alike), k (opposite) with ψ. */
+        final int[][] triplet;
+        final double[] psi;
+        /** Which ions have at least one cation–anion pair with parameters. */
+        final boolean[] parameterised;
+        /** Per ion: the least maximum molality of the fits of its pairs, mol/kg (∞ if none). */
+        final double[] fitLimit;
+        private int nuCation;
+        private int nuAnion;
+
+        public Mixture(List<Ion> ions, double kelvin) {
+            n = ions.size();
+            z = new int[n];
+            for (int i = 0; i < n; i++) {
+                z[i] = ions.get(i).charge();
+            }
+            aPhi = Water.debyeHuckelA(kelvin) * Thermo.LN10 / 3;
+            List<double[]> pairList = new ArrayList<>();
+            parameterised = new boolean[n];
+            fitLimit = new double[n];
+            java.util.Arrays.fill(fitLimit, Double.POSITIVE_INFINITY);
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    if (z[i] <= 0 || z[j] >= 0) {
+                        continue;
+                    }
+                    PitzerParameters.Binary b = PitzerParameters.binary(ions.get(i).name(), ions.get(j).name());
+                    if (b == null || !b.validity().contains(kelvin)) {
+                        continue;
+                    }
+                    double dt = kelvin - Thermo.T_REF;
+                    double[] at = b.at(dt);
+                    pairList.add(new double[] {i, j, at[0], at[1], at[2],
+                            at[3] / (2 * Math.sqrt(Math.abs(z[i] * z[j]))), b.alpha1(), b.alpha2()});
+                    parameterised[i] = true;
+                    parameterised[j] = true;
+                    fitLimit[i] = Math.min(fitLimit[i], b.maxMolality());
+                    fitLimit[j] = Math.min(fitLimit[j], b.maxMolality());
+                }
+            }
+            pairs = pairList.size();
+            cation = new int[pairs];
+            anion = new int[pairs];
+            beta0 = new double[pairs];
+            beta1 = new double[pairs];
+            beta2 = new double[pairs];
+            c = new double[pairs];
+            alpha1 = new double[pairs];
+            alpha2 = new double[pairs];
+            for (int p = 0; p < pairs; p++) {
+                double[] r = pairList.get(p);
+                cation[p] = (int) r[0];
+                anion[p] = (int) r[1];
+                beta0[p] = r[2];
+                beta1[p] = r[3];
+                beta2[p] = r[4];
+                c[p] = r[5];
+                alpha1[p] = r[6];
+                alpha2[p] = r[7];
+            }
+            List<int[]> likeList = new ArrayList<>();
+            List<Double> thetaList = new ArrayList<>();
+            for (int i = 0; i < n; i++) {
+                for (int j = i + 1; j < n; j++) {
+                    if (z[i] * z[j] <= 0) {
+                        continue;
+                    }
+                    Double t = PitzerParameters.theta(ions.get(i).name(), ions.get(j).name());
+                    if (t != null || z[i] != z[j]) {
+                        likeList.add(new int[] {i, j});
+                        thetaList.add(t == null ? 0 : t);
+                    }
+                }
+            }
+            likes = likeList.size();
+            likeI = new int[likes];
+            likeJ = new int[likes];
+            theta = new double[likes];
+            for (int q = 0; q < likes; q++) {
+                likeI[q] = likeList.get(q)[0];
+                likeJ[q] = likeList.get(q)[1];
+                theta[q] = thetaList.get(q);
+            }
+            List<int[]> tripletList = new ArrayList<>();
+            List<Double> psiList = new ArrayList<>();
+            for (int[] like : likeList) {
+                for (int k = 0; k < n; k++) {
+                    if (z[k] * z[like[0]] >= 0) {
+                        continue;
+                    }
+                    Double s = PitzerParameters.psi(ions.get(like[0]).name(), ions.get(like[1]).name(),
+                            ions.get(k).name());
+                    if (s != null) {
+                        tripletList.add(new int[] {like[0], like[1], k});
+                        psiList.add(s);
+                    }
+                }
+            }
+            triplet = tripletList.toArray(new int[0][]);
+            psi = psiList.stream().mapToDouble(Double::doubleValue).toArray();
+            if (n == 2 && z[0] > 0 && z[1] < 0) {
+                int g = gcd(z[0], -z[1]);
+                nuCation = -z[1] / g;
+                nuAnion = z[0] / g;
+            }
+        }
+
+        /** The molalities of the two ions of a single salt at molality m. */
+        double[] saltMolalities(double m) {
+            return new double[] {nuCation * m, nuAnion * m};
+        }
+
+        /** Whether the ion at this index has cation–anion parameters with some other ion of the list. */
+        public boolean parameterised(int ion) {
+            return parameterised[ion];
+        }
+
+        /** ln γ of every ion (0 for neutral solutes) at these molalities, into {@code out}. */
+        public void lnGamma(double[] m, double[] out) {
+            double ionic = 0;
+            double zSum = 0;
+            for (int i = 0; i < n; i++) {
+                ionic += m[i] * z[i] * z[i];
+                zSum += m[i] * Math.abs(z[i]);
+            }
+            ionic *= 0.5;
+            java.util.Arrays.fill(out, 0, n, 0.0);
+            if (!(ionic > 0)) {
+                return;
+            }
+            double s = Math.sqrt(ionic);
+            double f = -aPhi * (s / (1 + B * s) + 2 / B * Math.log1p(B * s));
+            double cSum = 0;
+            for (int p = 0; p < pairs; p++) {
+                int i = cation[p];
+                int j = anion[p];
+                double x1 = alpha1[p] * s;
+                double bb = beta0[p] + beta1[p] * g(x1) + (beta2[p] == 0 ? 0 : beta2[p] * g(alpha2[p] * s));
+                double bPrime = (beta1[p] * gPrime(x1) + (beta2[p] == 0 ? 0 : beta2[p] * gPrime(alpha2[p] * s)))
+                        / ionic;
+                double mm = m[i] * m[j];
+                f += mm * bPrime;
+                cSum += mm * c[p];
+                double w = 2 * bb + zSum * c[p];
+                out[i] += m[j] * w;
+                out[j] += m[i] * w;
+            }
+            double[] e = new double[2];
+            for (int q = 0; q < likes; q++) {
+                int i = likeI[q];
+                int j = likeJ[q];
+                mixing(z[i], z[j], ionic, e);
+                double phi = theta[q] + e[0];
+                f += m[i] * m[j] * e[1];
+                out[i] += 2 * m[j] * phi;
+                out[j] += 2 * m[i] * phi;
+            }
+            for (int t = 0; t < triplet.length; t++) {
+                int i = triplet[t][0];
+                int j = triplet[t][1];
+                int k = triplet[t][2];
+                out[i] += m[j] * m[k] * psi[t];
+                out[j] += m[i] * m[k] * psi[t];
+                out[k] += m[i] * m[j] * psi[t];
+            }
+            for (int i = 0; i < n; i++) {
+                if (z[i] != 0) {
+                    out[i] += z[i] * z[i] * f + Math.abs(z[i]) * cSum;
+                } else {
+                    out[i] = 0;
+                }
+            }
+        }
+
+        /** Σ m_i (φ − 1), mol/kg: what the interactions take from the ideal particle molality. */
+        public double osmoticExcess(double[] m) {
+            double ionic = 0;
+            double zSum = 0;
+            for (int i = 0; i < n; i++) {
+                ionic += m[i] * z[i] * z[i];
+                zSum += m[i] * Math.abs(z[i]);
+            }
+            ionic *= 0.5;
+            if (!(ionic > 0)) {
+                return 0;
+            }
+            double s = Math.sqrt(ionic);
+            double sum = -aPhi * ionic * s / (1 + B * s);
+            for (int p = 0; p < pairs; p++) {
+                double bPhi = beta0[p] + beta1[p] * Math.exp(-alpha1[p] * s)
+                        + (beta2[p] == 0 ? 0 : beta2[p] * Math.exp(-alpha2[p] * s));
+                sum += m[cation[p]] * m[anion[p]] * (bPhi + zSum * c[p]);
+            }
+            double[] e = new double[2];
+            for (int q = 0; q < likes; q++) {
+                mixing(z[likeI[q]], z[likeJ[q]], ionic, e);
+                sum += m[likeI[q]] * m[likeJ[q]] * (theta[q] + e[0] + ionic * e[1]);
+            }
+            for (int t = 0; t < triplet.length; t++) {
+                sum += m[triplet[t][0]] * m[triplet[t][1]] * m[triplet[t][2]] * psi[t];
+            }
+            return 2 * sum;
+        }
+
+        /**
+         * Eθ and Eθ' of two ions of like sign (Pitzer 1975, eqs. 41–42; zero for equal charges):
+         * Eθ = (z_i z_j/4I)[J(x_ij) − ½J(x_ii) − ½J(x_jj)], x_ij = 6 z_i z_j A_φ √I,
+         * Eθ' = −Eθ/I + (z_i z_j/8I²)[x_ij J'(x_ij) − ½x_ii J'(x_ii) − ½x_jj J'(x_jj)].
+         */
+        private void mixing(int zi, int zj, double ionic, double[] out) {
+            if (zi == zj) {
+                out[0] = 0;
+                out[1] = 0;
+                return;
+            }
+            double s = Math.sqrt(ionic);
+            double zz = zi * zj;
+            double xij = 6 * zz * aPhi * s;
+            double xii = 6 * zi * zi * aPhi * s;
+            double xjj = 6 * zj * zj * aPhi * s;
+            double[] a = j(xij);
+            double[] b = j(xii);
+            double[] d = j(xjj);
+            double e = zz / (4 * ionic) * (a[0] - 0.5 * b[0] - 0.5 * d[0]);
+            out[0] = e;
+            out[1] = -e / ionic + zz / (8 * ionic * ionic) * (xij * a[1] - 0.5 * xii * b[1] - 0.5 * xjj * d[1]);
+        }
     }
 
-    private static double bPhi(Salt p, double sqrtI) {
-        return p.beta0() + p.beta1() * Math.exp(-ALPHA * sqrtI);
+    /** {J(x), J'(x)} from Pitzer's approximation (1975, eq. 47). */
+    static double[] j(double x) {
+        double ex = Math.exp(-J3 * Math.pow(x, J4));
+        double d = 4 + J1 * Math.pow(x, -J2) * ex;
+        double dPrime = J1 * Math.pow(x, -J2) * ex * (-J2 / x - J3 * J4 * Math.pow(x, J4 - 1));
+        return new double[] {x / d, (d - x * dPrime) / (d * d)};
+    }
+
+    static double g(double x) {
+        return 2 * (1 - (1 + x) * Math.exp(-x)) / (x * x);
+    }
+
+    static double gPrime(double x) {
+        return -2 * (1 - (1 + x + x * x / 2) * Math.exp(-x)) / (x * x);
+    }
+
+    private static int gcd(int a, int b) {
+        return b == 0 ? a : gcd(b, a % b);
     }
 }
