@@ -22,6 +22,8 @@ final class ConditionSolver {
     /** I is settled when an iteration moves it by less than this plus this fraction of it. */
     private static final double I_ABSOLUTE = 1e-13;
     private static final double I_RELATIVE = 1e-10;
+    /** Pitzer's composition terms are settled when an iteration moves none by more than this (log10 γ). */
+    private static final double SPECIFIC_SETTLED = 1e-12;
     /** The coupled pH–I Newton: at most this many steps, each under one pH unit, settled at these steps (see below). */
     private static final int MAX_COUPLED_STEPS = 30;
     private static final double COUPLED_PH_STEP = 1e-8;
@@ -112,9 +114,10 @@ final class ConditionSolver {
             if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
                 return null;
             }
+            double moved = ws.updateSpecific(nextPH);
             // the last step's error is a few per cent of the step before (the I coupling converges linearly), so a
             // step of 1e-8 leaves under 1e-9: enough for a study's q.s. (met to 1e-7) and its spread (1e-3 and up)
-            boolean settled = Math.abs(nextPH - pH) < COUPLED_PH_STEP
+            boolean settled = Math.abs(nextPH - pH) < COUPLED_PH_STEP && moved < COUPLED_PH_STEP
                     && Math.abs(nextI - ionicStrength) <= I_ABSOLUTE + COUPLED_I_RELATIVE * ionicStrength;
             pH = nextPH;
             ionicStrength = nextI;
@@ -133,7 +136,9 @@ final class ConditionSolver {
                 return r;
             }
         }
-        // from scratch: the bracketed root at each ionic strength, starting from the strong ions alone
+        // from scratch: the bracketed root at each ionic strength, starting from the strong ions alone (and, at a
+        // fixed I, from the charge-and-I part of the activity coefficients alone)
+        ws.clearSpecific();
         double ionicStrength = Double.isNaN(fixedIonicStrength) ? strongIonicStrength() : fixedIonicStrength;
         double pH = Double.NaN;
         for (int i = 0; i < MAX_ITERATIONS; i++) {
@@ -144,7 +149,8 @@ final class ConditionSolver {
             }
             double next = ionicStrength(pH);
             double step = next - ionicStrength;
-            if (Math.abs(step) <= I_ABSOLUTE + I_RELATIVE * ionicStrength) {
+            double moved = ws.updateSpecific(pH);
+            if (Math.abs(step) <= I_ABSOLUTE + I_RELATIVE * ionicStrength && moved <= SPECIFIC_SETTLED) {
                 return new double[] {pH, next};
             }
             ionicStrength = i < UNRELAXED_ITERATIONS ? next : ionicStrength + RELAXATION * step;
@@ -188,8 +194,10 @@ final class ConditionSolver {
         for (int i = 0; i < p.n; i++) {
             particles += m[i];
         }
+        double excess = p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA) + (p.interactions == null ? 0
+                : p.interactions.osmoticExcess(m, ws.hydrogen(pH), ws.hydroxide(pH), ws.ionMolality));
         return new Equilibrium.Point(pH, ionicStrength, Thermo.LN10 * p.speciation.bufferSum(ws, pH),
-                particles + p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA));
+                particles + excess);
     }
 
     private EquilibriumState state(double pH, double ionicStrength, List<Caveat> caveats) {
@@ -233,7 +241,10 @@ final class ConditionSolver {
             }
         }
         double total = particles + mH + mOH;
-        OsmoticModel.Osmolality osmolality = OsmoticModel.SALINE.osmolality(p, m, total, ionicStrength);
+        OsmoticModel.Osmolality osmolality = p.interactions == null
+                ? OsmoticModel.SALINE.osmolality(p, m, total, ionicStrength)
+                : new OsmoticModel.Osmolality(total + p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA)
+                        + p.interactions.osmoticExcess(m, mH, mOH, ws.ionMolality), p.activity.name());
         return new EquilibriumState(p.kelvin, pH, ionicStrength, beta, -Math.log10(p.kw), mH, mOH,
                 total, osmolality.value(), osmolality.model(), out, caveats, byComponent, openSet);
     }

@@ -34,6 +34,17 @@ public final class Derivatives {
     private final double[] componentSlope;   // ln10 · d log10 γ_j / dI of each component's free basis
     private final double hydrogenSlope;
     private final double hydroxideSlope;
+    /**
+     * Pitzer's composition terms: at most this many refinements, relaxed after the first ones, settled where a step
+     * moves them by less than this fraction (the central difference leaves noise below that).
+     */
+    private static final int MAX_REFINEMENTS = 200;
+    private static final int UNRELAXED_REFINEMENTS = 20;
+    private static final double REFINED = 1e-7;
+    /** The central difference moves no molality by more than this fraction of itself. */
+    private static final double DIFFERENCE = 1e-4;
+    private final double[] ionM;
+    private final double[] ionLn;
     private final Tangent byPH;
     private final Tangent byI;
     private final double determinant;
@@ -55,6 +66,8 @@ public final class Derivatives {
         total = ws.total.clone();
         mH = ws.hydrogen(pH);
         mOH = ws.hydroxide(pH);
+        ionM = new double[p.interactions == null ? 0 : p.interactions.ions];
+        ionLn = new double[ionM.length];
         speciesSlope = new double[p.n];
         for (int i = 0; i < p.n; i++) {
             speciesSlope[i] = Thermo.LN10 * p.activity.log10GammaSlope(p.charge[i], ionicStrength, p.debyeHuckelA);
@@ -113,17 +126,17 @@ public final class Derivatives {
                 g[i] += Thermo.LN10 * e.getValue();
             }
         }
-        return response(tangent(g, new double[total.length], 0, 0, 0));
+        return respond(g, new double[total.length], 0, 0, 0);
     }
 
     /** The response to raising ln of every molality held by a gas phase by one (ln of the partial pressure). */
     public Response fixedScaled() {
-        return response(tangent(new double[p.n], new double[total.length], 0, 0, 1));
+        return respond(new double[p.n], new double[total.length], 0, 0, 1);
     }
 
     /** The response to raising pKw by one: Kw tenfold smaller. */
     public Response pKw() {
-        return response(tangent(new double[p.n], new double[total.length], 0, -Thermo.LN10, 0));
+        return respond(new double[p.n], new double[total.length], 0, -Thermo.LN10, 0);
     }
 
     /** The response to changing the components' totals by {@code dTotals} (mol/kg, in the prepared order). */
@@ -131,10 +144,109 @@ public final class Derivatives {
         if (dTotals.length != total.length) {
             throw new IllegalArgumentException("expected " + total.length + " totals, got " + dTotals.length);
         }
-        return response(tangent(new double[p.n], dTotals, 0, 0, 0));
+        return respond(new double[p.n], dTotals, 0, 0, 0);
     }
 
-    private Response response(Tangent t) {
+    /**
+     * The response to sources at fixed activity coefficients, with Pitzer's composition terms ({@link Interactions})
+     * followed: they move with the molalities, so ds = (∂s/∂m)·dm is found by iteration, each step a tangent with the
+     * last ds as a further source (d ln m_s = ln10 (Σ_j ν_sj ds_j − ds_s), d ln mH = −ln10 ds_H), ∂s/∂m·dm a central
+     * difference along dm. It converges as the solve's own iteration of the terms does.
+     */
+    private Response respond(double[] g, double[] dT, double dLnH, double dLnOH, double dLnFixed) {
+        Move move = response(tangent(g, dT, dLnH, dLnOH, dLnFixed));
+        if (p.interactions == null) {
+            return move.response();
+        }
+        int nc = total.length;
+        double[] ds = new double[p.n];
+        double[] dsComponent = new double[nc];
+        double[] dsWater = new double[2];
+        double[] next = new double[p.n];
+        double[] nextComponent = new double[nc];
+        double[] nextWater = new double[2];
+        for (int k = 0; k < MAX_REFINEMENTS; k++) {
+            specificAlong(move, next, nextComponent, nextWater);
+            double change = Math.max(Math.abs(nextWater[0] - dsWater[0]), Math.abs(nextWater[1] - dsWater[1]));
+            double size = Math.max(Math.abs(nextWater[0]), Math.abs(nextWater[1]));
+            double r = k < UNRELAXED_REFINEMENTS ? 1 : 0.5;
+            for (int i = 0; i < p.n; i++) {
+                change = Math.max(change, Math.abs(next[i] - ds[i]));
+                size = Math.max(size, Math.abs(next[i]));
+                ds[i] += r * (next[i] - ds[i]);
+            }
+            for (int j = 0; j < nc; j++) {
+                change = Math.max(change, Math.abs(nextComponent[j] - dsComponent[j]));
+                dsComponent[j] += r * (nextComponent[j] - dsComponent[j]);
+            }
+            dsWater[0] += r * (nextWater[0] - dsWater[0]);
+            dsWater[1] += r * (nextWater[1] - dsWater[1]);
+            double[] g2 = g.clone();
+            for (int i = 0; i < p.n; i++) {
+                double x = -ds[i];
+                if (p.complexParts[i] == null) {
+                    x += dsComponent[p.comp[i]];
+                } else {
+                    for (int q = 0; q < p.complexParts[i].length; q++) {
+                        x += p.complexCounts[i][q] * dsComponent[p.complexParts[i][q]];
+                    }
+                }
+                g2[i] += Thermo.LN10 * x;
+            }
+            move = response(tangent(g2, dT, dLnH - Thermo.LN10 * dsWater[0], dLnOH - Thermo.LN10 * dsWater[1],
+                    dLnFixed));
+            if (change <= REFINED * (1e-12 + size)) {
+                return move.response();
+            }
+        }
+        throw new IndeterminateException(Caveat.indeterminate("derivatives-not-converged",
+                "the derivatives of this state cannot be computed: the activity coefficients' response did not settle"));
+    }
+
+    /** (∂s/∂m)·dm of Pitzer's composition terms, by a central difference along the move. */
+    private void specificAlong(Move move, double[] species, double[] component, double[] water) {
+        double most = Math.max(Math.abs(move.dmH()) / mH, Math.abs(move.dmOH()) / mOH);
+        for (int i = 0; i < p.n; i++) {
+            if (m[i] > 0) {
+                most = Math.max(most, Math.abs(move.dm()[i]) / m[i]);
+            }
+        }
+        if (!(most > 0)) {
+            java.util.Arrays.fill(species, 0);
+            java.util.Arrays.fill(component, 0);
+            water[0] = 0;
+            water[1] = 0;
+            return;
+        }
+        double h = DIFFERENCE / most;
+        double[] up = new double[p.n];
+        double[] down = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            up[i] = m[i] + h * move.dm()[i];
+            down[i] = m[i] - h * move.dm()[i];
+        }
+        int nc = total.length;
+        double[] sDown = new double[p.n];
+        double[] cDown = new double[nc];
+        double[] wDown = new double[2];
+        p.interactions.specific(up, mH + h * move.dmH(), mOH + h * move.dmOH(), ionM, ionLn, species, component,
+                water);
+        p.interactions.specific(down, mH - h * move.dmH(), mOH - h * move.dmOH(), ionM, ionLn, sDown, cDown, wDown);
+        for (int i = 0; i < p.n; i++) {
+            species[i] = (species[i] - sDown[i]) / (2 * h);
+        }
+        for (int j = 0; j < nc; j++) {
+            component[j] = (component[j] - cDown[j]) / (2 * h);
+        }
+        water[0] = (water[0] - wDown[0]) / (2 * h);
+        water[1] = (water[1] - wDown[1]) / (2 * h);
+    }
+
+    /** The species' changes along a response and the response itself. */
+    private record Move(double[] dm, double dmH, double dmOH, Response response) {
+    }
+
+    private Move response(Tangent t) {
         // F_pH dpH + F_I dI = −F_θ;  −Q_pH dpH + (1 − Q_I) dI = Q_θ
         double dpH = (-t.f() * (1 - byI.q()) - byI.f() * t.q()) / determinant;
         double dI = (byPH.f() * t.q() - t.f() * byPH.q()) / determinant;
@@ -144,7 +256,7 @@ public final class Derivatives {
         }
         double dmH = t.dmH() + byPH.dmH() * dpH + byI.dmH() * dI;
         double dmOH = t.dmOH() + byPH.dmOH() * dpH + byI.dmOH() * dI;
-        return new Response(dpH, dI, Thermo.LN10 * bufferSumSlope(dm, dmH + dmOH));
+        return new Move(dm, dmH, dmOH, new Response(dpH, dI, Thermo.LN10 * bufferSumSlope(dm, dmH + dmOH)));
     }
 
     /**

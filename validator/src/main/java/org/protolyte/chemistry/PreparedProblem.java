@@ -51,6 +51,8 @@ final class PreparedProblem {
     final int[] fixedIndex;
     final double[] fixedMolality;
     final Speciation speciation;
+    /** Pitzer's composition terms where the activity model hands over to them ({@link IonInteraction}), else null. */
+    final Interactions interactions;
 
     /**
      * @param logBeta log10 β of each species at the temperature, shifts included
@@ -155,6 +157,7 @@ final class PreparedProblem {
             fixedMolality[comp[i]] = e.getValue();
         }
         speciation = complexes ? CoupledSpeciation.INSTANCE : FreeSpeciation.INSTANCE;
+        interactions = activity instanceof IonInteraction ? new Interactions(this) : null;
     }
 
     /**
@@ -195,6 +198,7 @@ final class PreparedProblem {
             fixedMolality[j] *= fixedScale;
         }
         speciation = p.speciation;
+        interactions = p.interactions;
     }
 
     PreparedProblem withLogBetaShift(int species, double delta) {

@@ -42,6 +42,16 @@ final class Workspace {
     final int[] sumPosition;
     final double[][] sumBlock;
     final double[] sumY;
+    /** Pitzer's composition terms of log10 γ ({@link Interactions}): per species, per component, {H+, OH-}. */
+    final double[] specific;
+    final double[] specificComponent;
+    final double[] specificWater = new double[2];
+    private final double[] nextSpecific;
+    private final double[] nextComponent;
+    private final double[] nextWater = new double[2];
+    final double[] ionMolality;
+    final double[] ionLn;
+    private boolean specificOn;
 
     Workspace(PreparedProblem p) {
         this.p = p;
@@ -72,6 +82,45 @@ final class Workspace {
         sumPosition = new int[nc];
         sumBlock = new double[u][u];
         sumY = new double[u];
+        specific = new double[n];
+        specificComponent = new double[nc];
+        nextSpecific = new double[n];
+        nextComponent = new double[nc];
+        int ions = p.interactions == null ? 0 : p.interactions.ions;
+        ionMolality = new double[ions];
+        ionLn = new double[ions];
+    }
+
+    /** The composition terms from the molalities at this pH and the current coefficients; returns the largest change. */
+    double updateSpecific(double pH) {
+        if (p.interactions == null) {
+            return 0;
+        }
+        double[] mm = p.speciation.molalities(this, pH);
+        double w = p.interactions.specific(mm, hydrogen(pH), hydroxide(pH), ionMolality, ionLn, nextSpecific,
+                nextComponent, nextWater);
+        double moved = Math.max(Math.abs(nextWater[0] - specificWater[0]), Math.abs(nextWater[1] - specificWater[1]));
+        for (int i = 0; i < p.n; i++) {
+            moved = Math.max(moved, Math.abs(nextSpecific[i] - specific[i]));
+        }
+        for (int j = 0; j < nextComponent.length; j++) {
+            moved = Math.max(moved, Math.abs(nextComponent[j] - specificComponent[j]));
+        }
+        System.arraycopy(nextSpecific, 0, specific, 0, p.n);
+        System.arraycopy(nextComponent, 0, specificComponent, 0, nextComponent.length);
+        specificWater[0] = nextWater[0];
+        specificWater[1] = nextWater[1];
+        specificOn = w > 0 || moved > 0;
+        return moved;
+    }
+
+    /** No composition terms: the charge-and-I part alone. */
+    void clearSpecific() {
+        Arrays.fill(specific, 0);
+        Arrays.fill(specificComponent, 0);
+        specificWater[0] = 0;
+        specificWater[1] = 0;
+        specificOn = false;
     }
 
     /** The activity coefficients at this ionic strength; γ depends on the charge and I only, so once per charge. */
@@ -93,6 +142,10 @@ final class Workspace {
         for (int j = 0; j < p.components.length; j++) {
             log10GammaComponent[j] = log10Gamma(p.components[j].charge(), ionicStrength);
         }
+        if (specificOn) {
+            addSpecific();
+            return;
+        }
         if (p.powered) {              // γ by charge: a handful of powers of ten, then products
             for (int j = 0; j < p.components.length; j++) {
                 gammaComponent[j] = gammaOfCharge(p.components[j].charge(), ionicStrength);
@@ -109,6 +162,34 @@ final class Workspace {
                     }
                 }
                 complexWeight[i] = x;
+            }
+        }
+    }
+
+    /** The composition terms added to the charge-and-I part, and the products of the paths made from them again. */
+    private void addSpecific() {
+        for (int i = 0; i < p.n; i++) {
+            log10Gamma[i] += specific[i];
+            betaOverGamma[i] = p.beta[i] * Math.pow(10, -log10Gamma[i]);
+        }
+        log10GammaH += specificWater[0];
+        log10GammaOH += specificWater[1];
+        for (int j = 0; j < p.components.length; j++) {
+            log10GammaComponent[j] += specificComponent[j];
+            gammaComponent[j] = Math.pow(10, log10GammaComponent[j]);
+        }
+        if (p.powered) {
+            for (int i = 0; i < p.n; i++) {
+                double x = log10Gamma[i];
+                double y = p.log10Beta[i] - x;
+                if (p.complexParts[i] == null) {
+                    y += log10GammaComponent[p.comp[i]];
+                } else {
+                    for (int q = 0; q < p.complexParts[i].length; q++) {
+                        y += p.complexCounts[i][q] * log10GammaComponent[p.complexParts[i][q]];
+                    }
+                }
+                complexWeight[i] = Math.pow(10, y);
             }
         }
     }
