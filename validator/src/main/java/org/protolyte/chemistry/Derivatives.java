@@ -193,14 +193,28 @@ public final class Derivatives {
                 }
                 g2[i] += Thermo.LN10 * x;
             }
+            Response before = move.response();
             move = response(tangent(g2, dT, dLnH - Thermo.LN10 * dsWater[0], dLnOH - Thermo.LN10 * dsWater[1],
                     dLnFixed));
-            if (change <= REFINED * (1e-12 + size)) {
+            if (change <= REFINED * (1e-12 + size) || settled(before, move.response())) {
                 return move.response();
             }
         }
         throw new IndeterminateException(Caveat.indeterminate("derivatives-not-converged",
                 "the derivatives of this state cannot be computed: the activity coefficients' response did not settle"));
+    }
+
+    /**
+     * A refinement that no longer moves the response, relatively or by more than 1e-12 (pH, or mol/kg, per unit of
+     * the change): the central difference's noise can keep a vanishing response flickering in its last digits.
+     */
+    private static boolean settled(Response a, Response b) {
+        return close(a.pH(), b.pH()) && close(a.ionicStrength(), b.ionicStrength())
+                && close(a.bufferCapacity(), b.bufferCapacity());
+    }
+
+    private static boolean close(double a, double b) {
+        return Math.abs(a - b) <= REFINED * Math.abs(b) + 1e-12;
     }
 
     /** (∂s/∂m)·dm of Pitzer's composition terms, by a central difference along the move. */

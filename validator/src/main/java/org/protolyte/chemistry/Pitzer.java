@@ -22,9 +22,11 @@ import java.util.OptionalDouble;
  */
 public final class Pitzer {
 
-    /** Where the parameters of sodium and potassium chloride are used (see {@link PitzerParameters}). */
-    public static final TemperatureRange VALIDITY = PitzerParameters.binary("Na+", "Cl-").validity()
-            .intersect(PitzerParameters.binary("K+", "Cl-").validity());
+    /**
+     * Where the saline osmotic coefficient ({@link #osmoticCoefficient(double, double, double, double)}) is given:
+     * within 10 K of 25 °C, where its tests hold it to published tables (none at other temperatures was reachable).
+     */
+    public static final TemperatureRange VALIDITY = PitzerParameters.WITHOUT_SLOPES;
 
     static final double B = 1.2;
     /** J(x) of Pitzer (1975), eq. 47: J ≈ x/(4 + C1 x^−C2 exp(−C3 x^C4)); constants from memory. */

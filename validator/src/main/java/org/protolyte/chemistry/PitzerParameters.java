@@ -47,18 +47,52 @@ final class PitzerParameters {
 
     static {
         Map<String, Binary> b = new LinkedHashMap<>();
-        // 1-1 salts: Pitzer and Mayorga, J. Phys. Chem. 77 (1973) 2300, Table I; slopes: Pitzer 1991, ch. 3, Table 12
-        b.put("Na+|Cl-", new Binary(0.0765, 0.2664, 0, 0.00127, 2, 0, NONE, NONE, NONE, NONE, 6.0,
-                "from memory: Pitzer and Mayorga 1973, Table I"));
-        b.put("K+|Cl-", new Binary(0.04835, 0.2122, 0, -0.00084, 2, 0, NONE, NONE, NONE, NONE, 4.8,
-                "from memory: Pitzer and Mayorga 1973, Table I"));
+        // Read in transcriptions of the tables (none of the papers was reachable itself): PM73 = Pitzer and Mayorga,
+        // J. Phys. Chem. 77 (1973) 2300, Tables I (1-1), II (organic 1-1) and VI (2-1, printed as (4/3)β⁰, (4/3)β¹,
+        // (2^{5/2}/3)Cφ and unscaled here), as transcribed in pytzer (mvdh7/pytzer, pytzer/tables.py, parameters.py);
+        // slopes: Pitzer, "Activity Coefficients in Electrolyte Solutions", 2nd ed. (1991), ch. 3, Table 12 (= Silvester
+        // and Pitzer, J. Solution Chem. 7 (1978) 327, Table I), same transcription, with its maximum molality;
+        // HMW84 = Harvie, Møller and Weare 1984 (pytzer, and PHREEQC's database/pitzer.dat); FW86 = Felmy and Weare,
+        // Geochim. Cosmochim. Acta 50 (1986) 2771; GT17 = Gallego-Urrea and Turner, Mar. Chem. 195 (2017) 84, Table S6.
+        // A maximum molality not given with the fit is NaN (not known).
+        binary(b, "Na+", "Cl-", 0.0765, 0.2664, 0.00127, 7.159e-4, 7.005e-4, -10.54e-5, 6.0, "PM73 Table I; slopes P91 Table 12");
+        binary(b, "K+", "Cl-", 0.04835, 0.2122, -0.00084, 5.794e-4, 10.71e-4, -5.095e-5, 4.5, "PM73 Table I; slopes P91 Table 12");
+        binary(b, "H+", "Cl-", 0.1775, 0.2945, 0.0008, NONE, NONE, NONE, 4.5,
+                "PM73 Table I (the sign of dCφ/dT differs between transcriptions: no slopes used)");
+        binary(b, "Na+", "OH-", 0.0864, 0.253, 0.0044, 7.000e-4, 1.340e-4, -18.94e-5, 4.2, "PM73 Table I; slopes P91 Table 12");
+        binary(b, "K+", "OH-", 0.1298, 0.32, 0.0041, NONE, NONE, NONE, NONE, "PM73 Table I");
+        binary(b, "Na+", "H2PO4-", -0.0533, 0.0396, 0.00795, NONE, NONE, NONE, NONE, "PM73 Table I");
+        binary(b, "K+", "H2PO4-", -0.0678, -0.1042, 0.0, 6.045e-4, 28.60e-4, -10.11e-5, 1.8, "PM73 Table I; slopes P91 Table 12");
+        binary(b, "Na+", "HPO4-2", -0.0777 * 0.75, 1.954 * 0.75, 0.0554 * 3 / Math.pow(2, 2.5), NONE, NONE, NONE, NONE,
+                "PM73 Table VI, printed −0.0777, 1.954, 0.0554, unscaled");
+        binary(b, "K+", "HPO4-2", 0.0330 * 0.75, 1.699 * 0.75, 0.0309 * 3 / Math.pow(2, 2.5), NONE, NONE, NONE, NONE,
+                "PM73 Table VI, printed 0.0330, 1.699, 0.0309, unscaled");
+        binary(b, "Na+", "CH3COO-", 0.1426, 0.3237, -0.00629, NONE, NONE, NONE, NONE, "PM73 Table II");
+        binary(b, "K+", "CH3COO-", 0.1587, 0.3251, -0.00660, NONE, NONE, NONE, NONE, "PM73 Table II");
+        binary(b, "Na+", "SO4-2", 0.01958, 1.113, 0.00497, NONE, NONE, NONE, 3.0, "HMW84 (PM73 Table VI unscaled)");
+        binary(b, "K+", "SO4-2", 0.04995, 0.7793, 0.0, NONE, NONE, NONE, NONE, "HMW84 (PM73 Table VI unscaled)");
+        binary(b, "Na+", "HCO3-", 0.0277, 0.0411, 0.0, NONE, NONE, NONE, NONE, "HMW84");
+        binary(b, "K+", "HCO3-", 0.0296, -0.013, -0.008, NONE, NONE, NONE, NONE, "HMW84");
+        binary(b, "Na+", "CO3-2", 0.0399, 1.389, 0.0044, NONE, NONE, NONE, NONE, "HMW84");
+        binary(b, "K+", "CO3-2", 0.1488, 1.43, -0.0015, NONE, NONE, NONE, NONE, "HMW84");
+        binary(b, "Na+", "B(OH)4-", -0.0427, 0.089, 0.0114, NONE, NONE, NONE, NONE, "FW86");
+        binary(b, "K+", "B(OH)4-", 0.035, 0.14, 0.0, NONE, NONE, NONE, NONE, "FW86");
+        binary(b, "TrisH+", "Cl-", 0.04181, 0.16024, -0.00132, NONE, NONE, NONE, NONE, "GT17 Table S6");
         BINARY = Map.copyOf(b);
-        // mixing: Pitzer and Kim, J. Am. Chem. Soc. 96 (1974) 5701, from memory
+        // mixing: HMW84 (the same as Pitzer and Kim, J. Am. Chem. Soc. 96 (1974) 5701), read in pytzer and PHREEQC
         THETA = Map.of("K+|Na+", -0.012);
         PSI = Map.of("K+|Na+|Cl-", -0.0018);
     }
 
     private PitzerParameters() {
+    }
+
+    /** A pair with α₁ = 2 and no β² (every pair here: none is a 2-2 salt). */
+    private static void binary(Map<String, Binary> b, String cation, String anion, double beta0, double beta1,
+                               double cPhi, double dBeta0, double dBeta1, double dCPhi, double maxMolality,
+                               String source) {
+        b.put(cation + "|" + anion, new Binary(beta0, beta1, 0, cPhi, 2, 0, dBeta0, dBeta1, Double.isNaN(dBeta0) ? NONE : 0,
+                dCPhi, maxMolality, source));
     }
 
     /** The parameters of a cation–anion pair, or null. */

@@ -11,8 +11,9 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Pitzer's osmotic coefficient for a mixture of NaCl and KCl, written out term by term from Harvie, Møller and Weare,
- * Geochim. Cosmochim. Acta 48 (1984) 723 (α = 2, b = 1.2; β⁰, β¹, Cφ of Pitzer and Mayorga 1973, θ(Na,K) = −0.012 and
- * ψ(Na,K,Cl) = −0.0018 of Pitzer and Kim 1974, all from memory), and where the equilibrium takes it for the
+ * Geochim. Cosmochim. Acta 48 (1984) 723 (α = 2, b = 1.2; β⁰, β¹, Cφ of Pitzer and Mayorga 1973, Table I, with their
+ * temperature derivatives from Pitzer 1991, ch. 3, Table 12, θ(Na,K) = −0.012 and ψ(Na,K,Cl) = −0.0018 of HMW84, all
+ * read in the transcription of those tables in pytzer, mvdh7/pytzer pytzer/tables.py and parameters.py), and where the equilibrium takes it for the
  * osmolality: above Davies' warning limit, with Na+, K+ and Cl- carrying at least three quarters of I, within 15–35 °C.
  */
 class PitzerOsmolalityTest {
@@ -30,8 +31,11 @@ class PitzerOsmolalityTest {
         double i = (na + k + cl) / 2;
         double z = na + k + cl;
         double root = Math.sqrt(i);
-        double naCl = 0.0765 + 0.2664 * Math.exp(-2 * root) + z * 0.00127 / 2;
-        double kCl = 0.04835 + 0.2122 * Math.exp(-2 * root) + z * -0.00084 / 2;
+        double dt = kelvin - 298.15;
+        double naCl = 0.0765 + 7.159e-4 * dt + (0.2664 + 7.005e-4 * dt) * Math.exp(-2 * root)
+                + z * (0.00127 - 10.54e-5 * dt) / 2;
+        double kCl = 0.04835 + 5.794e-4 * dt + (0.2122 + 10.71e-4 * dt) * Math.exp(-2 * root)
+                + z * (-0.00084 - 5.095e-5 * dt) / 2;
         double sum = -aPhi * Math.pow(i, 1.5) / (1 + 1.2 * root) + na * cl * naCl + k * cl * kCl
                 + na * k * (-0.012 + cl * -0.0018);
         return 1 + 2 * sum / (na + k + cl);
