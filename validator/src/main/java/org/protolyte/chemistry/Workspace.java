@@ -123,7 +123,10 @@ final class Workspace {
         specificOn = false;
     }
 
-    /** The activity coefficients at this ionic strength; γ depends on the charge and I only, so once per charge. */
+    /**
+     * The activity coefficients at this ionic strength: the charge-and-I part once per charge, plus Pitzer's composition
+     * terms where {@link #updateSpecific} left some.
+     */
     void setActivityCoefficients(double ionicStrength) {
         Arrays.fill(byCharge, Double.NaN);
         Arrays.fill(inverseGammaByCharge, Double.NaN);
