@@ -93,15 +93,7 @@ public final class Derivatives {
         }
         byPH = tangent(g, new double[total.length], -Thermo.LN10, Thermo.LN10, 0);
         for (int i = 0; i < p.n; i++) {
-            double s = -speciesSlope[i];
-            if (p.complexParts[i] == null) {
-                s += componentSlope[p.comp[i]];
-            } else {
-                for (int q = 0; q < p.complexParts[i].length; q++) {
-                    s += p.complexCounts[i][q] * componentSlope[p.complexParts[i][q]];
-                }
-            }
-            g[i] = s;
+            g[i] = p.overParts(i, componentSlope) - speciesSlope[i];
         }
         byI = tangent(g, new double[total.length], -hydrogenSlope, -hydroxideSlope, 0);
         // [F_pH F_I; G_pH G_I] with G = I − Q
@@ -183,15 +175,7 @@ public final class Derivatives {
             dsWater[1] += r * (nextWater[1] - dsWater[1]);
             double[] g2 = g.clone();
             for (int i = 0; i < p.n; i++) {
-                double x = -ds[i];
-                if (p.complexParts[i] == null) {
-                    x += dsComponent[p.comp[i]];
-                } else {
-                    for (int q = 0; q < p.complexParts[i].length; q++) {
-                        x += p.complexCounts[i][q] * dsComponent[p.complexParts[i][q]];
-                    }
-                }
-                g2[i] += Thermo.LN10 * x;
+                g2[i] += Thermo.LN10 * (p.overParts(i, dsComponent) - ds[i]);
             }
             Response before = move.response();
             move = response(tangent(g2, dT, dLnH - Thermo.LN10 * dsWater[0], dLnOH - Thermo.LN10 * dsWater[1],

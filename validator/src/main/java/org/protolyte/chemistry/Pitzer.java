@@ -146,8 +146,9 @@ public final class Pitzer {
         final boolean[] parameterised;
         /** Per ion: the least maximum molality of the fits of its pairs, mol/kg (∞ if none). */
         final double[] fitLimit;
-        private int nuCation;
-        private int nuAnion;
+        /** For a single salt (a cation and an anion): the ions per formula unit; 0 otherwise. */
+        private final int nuCation;
+        private final int nuAnion;
 
         public Mixture(List<Ion> ions, double kelvin) {
             n = ions.size();
@@ -239,16 +240,33 @@ public final class Pitzer {
             }
             triplet = tripletList.toArray(new int[0][]);
             psi = psiList.stream().mapToDouble(Double::doubleValue).toArray();
-            if (n == 2 && z[0] > 0 && z[1] < 0) {
-                int g = gcd(z[0], -z[1]);
-                nuCation = -z[1] / g;
-                nuAnion = z[0] / g;
-            }
+            boolean salt = n == 2 && z[0] > 0 && z[1] < 0;
+            int g = salt ? gcd(z[0], -z[1]) : 1;
+            nuCation = salt ? -z[1] / g : 0;
+            nuAnion = salt ? z[0] / g : 0;
         }
 
         /** The molalities of the two ions of a single salt at molality m. */
         double[] saltMolalities(double m) {
             return new double[] {nuCation * m, nuAnion * m};
+        }
+
+        /** I = ½ Σ m z². */
+        private double ionicStrength(double[] m) {
+            double sum = 0;
+            for (int i = 0; i < n; i++) {
+                sum += m[i] * z[i] * z[i];
+            }
+            return 0.5 * sum;
+        }
+
+        /** Z = Σ m |z|. */
+        private double chargeSum(double[] m) {
+            double sum = 0;
+            for (int i = 0; i < n; i++) {
+                sum += m[i] * Math.abs(z[i]);
+            }
+            return sum;
         }
 
         /** Whether the ion at this index has cation–anion parameters with some other ion of the list. */
@@ -258,13 +276,8 @@ public final class Pitzer {
 
         /** ln γ of every ion (0 for neutral solutes) at these molalities, into {@code out}. */
         public void lnGamma(double[] m, double[] out) {
-            double ionic = 0;
-            double zSum = 0;
-            for (int i = 0; i < n; i++) {
-                ionic += m[i] * z[i] * z[i];
-                zSum += m[i] * Math.abs(z[i]);
-            }
-            ionic *= 0.5;
+            double ionic = ionicStrength(m);
+            double zSum = chargeSum(m);
             java.util.Arrays.fill(out, 0, n, 0.0);
             if (!(ionic > 0)) {
                 return;
@@ -315,13 +328,8 @@ public final class Pitzer {
 
         /** Σ m_i (φ − 1), mol/kg: what the interactions take from the ideal particle molality. */
         public double osmoticExcess(double[] m) {
-            double ionic = 0;
-            double zSum = 0;
-            for (int i = 0; i < n; i++) {
-                ionic += m[i] * z[i] * z[i];
-                zSum += m[i] * Math.abs(z[i]);
-            }
-            ionic *= 0.5;
+            double ionic = ionicStrength(m);
+            double zSum = chargeSum(m);
             if (!(ionic > 0)) {
                 return 0;
             }

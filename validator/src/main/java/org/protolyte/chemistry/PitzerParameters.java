@@ -47,18 +47,18 @@ final class PitzerParameters {
 
     static {
         Map<String, Binary> b = new LinkedHashMap<>();
-        // Read in transcriptions of the tables (none of the papers was reachable itself): PM73 = Pitzer and Mayorga,
+        // Read in reproductions of the tables (none of the papers was reachable itself): PM73 = Pitzer and Mayorga,
         // J. Phys. Chem. 77 (1973) 2300, Tables I (1-1), II (organic 1-1) and VI (2-1, printed as (4/3)β⁰, (4/3)β¹,
-        // (2^{5/2}/3)Cφ and unscaled here), as transcribed in pytzer (mvdh7/pytzer, pytzer/tables.py, parameters.py);
+        // (2^{5/2}/3)Cφ and unscaled here), as reproduced in pytzer (mvdh7/pytzer, pytzer/tables.py, parameters.py);
         // slopes: Pitzer, "Activity Coefficients in Electrolyte Solutions", 2nd ed. (1991), ch. 3, Table 12 (= Silvester
-        // and Pitzer, J. Solution Chem. 7 (1978) 327, Table I), same transcription, with its maximum molality;
+        // and Pitzer, J. Solution Chem. 7 (1978) 327, Table I), same reproduction, with its maximum molality;
         // HMW84 = Harvie, Møller and Weare 1984 (pytzer, and PHREEQC's database/pitzer.dat); FW86 = Felmy and Weare,
         // Geochim. Cosmochim. Acta 50 (1986) 2771; GT17 = Gallego-Urrea and Turner, Mar. Chem. 195 (2017) 84, Table S6.
         // A maximum molality not given with the fit is NaN (not known).
         binary(b, "Na+", "Cl-", 0.0765, 0.2664, 0.00127, 7.159e-4, 7.005e-4, -10.54e-5, 6.0, "PM73 Table I; slopes P91 Table 12");
         binary(b, "K+", "Cl-", 0.04835, 0.2122, -0.00084, 5.794e-4, 10.71e-4, -5.095e-5, 4.5, "PM73 Table I; slopes P91 Table 12");
         binary(b, "H+", "Cl-", 0.1775, 0.2945, 0.0008, NONE, NONE, NONE, 4.5,
-                "PM73 Table I (the sign of dCφ/dT differs between transcriptions: no slopes used)");
+                "PM73 Table I (the sign of dCφ/dT differs between reproductions: no slopes used)");
         binary(b, "Na+", "OH-", 0.0864, 0.253, 0.0044, 7.000e-4, 1.340e-4, -18.94e-5, 4.2, "PM73 Table I; slopes P91 Table 12");
         binary(b, "K+", "OH-", 0.1298, 0.32, 0.0041, NONE, NONE, NONE, NONE, "PM73 Table I");
         binary(b, "Na+", "H2PO4-", -0.0533, 0.0396, 0.00795, NONE, NONE, NONE, NONE, "PM73 Table I");

@@ -213,6 +213,18 @@ final class PreparedProblem {
         return fixedIndex[component] >= 0;
     }
 
+    /** Σ_j ν_ij x_j over the components species i is made of (x_j itself for a species of one component). */
+    double overParts(int i, double[] perComponent) {
+        if (complexParts[i] == null) {
+            return perComponent[comp[i]];
+        }
+        double sum = 0;
+        for (int q = 0; q < complexParts[i].length; q++) {
+            sum += complexCounts[i][q] * perComponent[complexParts[i][q]];
+        }
+        return sum;
+    }
+
     /** How many of the component it is shown under a species holds: 1 for a free form. */
     int homeCount(int i) {
         return complexParts[i] == null ? 1 : complexCounts[i][0];

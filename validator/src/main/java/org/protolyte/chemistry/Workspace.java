@@ -183,16 +183,7 @@ final class Workspace {
         }
         if (p.powered) {
             for (int i = 0; i < p.n; i++) {
-                double x = log10Gamma[i];
-                double y = p.log10Beta[i] - x;
-                if (p.complexParts[i] == null) {
-                    y += log10GammaComponent[p.comp[i]];
-                } else {
-                    for (int q = 0; q < p.complexParts[i].length; q++) {
-                        y += p.complexCounts[i][q] * log10GammaComponent[p.complexParts[i][q]];
-                    }
-                }
-                complexWeight[i] = Math.pow(10, y);
+                complexWeight[i] = Math.pow(10, p.log10Beta[i] - log10Gamma[i] + p.overParts(i, log10GammaComponent));
             }
         }
     }

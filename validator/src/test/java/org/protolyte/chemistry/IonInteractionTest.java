@@ -15,8 +15,9 @@ import org.protolyte.substance.SubstanceLibrary;
 
 /**
  * The hand-over from Davies' equation to Pitzer's ({@link IonInteraction}): identical to Davies below 0.1 mol/kg,
- * continuous in pH and in its slope through 0.1–0.3 mol/kg, Pitzer's own above. Properties of the construction;
- * the check values of the concentrated model against published tables are in the reference tests.
+ * continuous in pH and in its slope through 0.1–0.3 mol/kg, Pitzer's own above. Properties of the construction, so no
+ * published value is checked here: the compositions are invented for the test and each tolerance is derived beside it;
+ * the concentrated model's check values against published tables are in {@code reference.ElectrolyteActivityTest}.
  */
 class IonInteractionTest {
 

@@ -13,8 +13,8 @@ import org.junit.jupiter.api.Test;
  * Pitzer's osmotic coefficient for a mixture of NaCl and KCl, written out term by term from Harvie, Møller and Weare,
  * Geochim. Cosmochim. Acta 48 (1984) 723 (α = 2, b = 1.2; β⁰, β¹, Cφ of Pitzer and Mayorga 1973, Table I, with their
  * temperature derivatives from Pitzer 1991, ch. 3, Table 12, θ(Na,K) = −0.012 and ψ(Na,K,Cl) = −0.0018 of HMW84, all
- * read in the transcription of those tables in pytzer, mvdh7/pytzer pytzer/tables.py and parameters.py), and where the equilibrium takes it for the
- * osmolality: above Davies' warning limit, with Na+, K+ and Cl- carrying at least three quarters of I, within 15–35 °C.
+ * read in the reproduction of those tables in pytzer, mvdh7/pytzer pytzer/tables.py and parameters.py), and where
+ * the equilibrium takes it for the osmolality: above Davies' warning limit, with Na+, K+ and Cl- carrying at least three quarters of I, within 15–35 °C.
  */
 class PitzerOsmolalityTest {
 

@@ -10,7 +10,7 @@ import org.protolyte.chemistry.Pitzer;
  * Pitzer's mean activity coefficients of single salts at 25 °C against the CRC Handbook of Chemistry and Physics:
  * table "Activity Coefficients of Acids, Bases, and Salts" (0.1–1.0 mol/kg) and table "Mean Activity Coefficients of
  * Electrolytes as a Function of Concentration" (92nd ed., p. 5-106, from Hamer and Wu, J. Phys. Chem. Ref. Data 1
- * (1972) 1047, and the later J. Phys. Chem. Ref. Data compilations it names), as transcribed in ugognw/pchemdb
+ * (1972) 1047, and the later J. Phys. Chem. Ref. Data compilations it names), as reproduced in ugognw/pchemdb
  * (tests/test_crc/*.csv; the same numbers in KingsburyLab/pyEQL tests/test_benchmark/mean_activity_coefficient.json).
  * The reference electrolytes of saline solutions within 1 % to 5 mol/kg (the target for sodium chloride is 3 mol/kg).
  * The other salts within 2.5 %: measured here, these compilations and Pitzer and Mayorga's parameters (fitted to the
