@@ -29,7 +29,7 @@ import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.batch.BatchAnalyzer;
 import org.protolyte.batch.BatchRecord;
 import org.protolyte.batch.BatchRecordReader;
-import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.IonInteraction;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.Digests;
 import org.protolyte.document.DocumentException;
@@ -109,7 +109,7 @@ public final class Protolyte {
     private final JsonReader json = new JsonReader();
     private final FormulationReader reader;
     private final RecipeResolver resolver;
-    private final Analyzer analyzer = new Analyzer(new Equilibrium(Davies.INSTANCE));
+    private final Analyzer analyzer = new Analyzer(new Equilibrium(IonInteraction.INSTANCE));
     private final Checker checker;
     private final BatchRecordReader batchReader;
     private final BatchAnalyzer batchAnalyzer;
@@ -433,7 +433,7 @@ public final class Protolyte {
             throw atAdjustment(f, e);
         }
         if (robustness.isPresent()) {
-            analysis = analysis.withRobustness(new Robustness(new Equilibrium(Davies.INSTANCE))
+            analysis = analysis.withRobustness(new Robustness(new Equilibrium(IonInteraction.INSTANCE))
                     .run(recipe, robustness.get(), done -> { }));
         }
         Checker.Verdict verdict;

@@ -351,8 +351,9 @@ public final class Analyzer {
         out.add(recipe.formulation().conditions().stream().allMatch(c -> c.co2Pascal().isPresent())
                 ? "no condition is closed" : "conditions without a CO2 level: closed, free of CO2 as made "
                 + "(no exchange with air)");
-        out.add("activity coefficients from the " + equilibrium.activityModel().name()
-                + " equation; pH on the conventional (Bates–Guggenheim) scale");
+        out.add("activity coefficients: " + equilibrium.activityModel().name() + "; pH on the conventional "
+                + "(Bates–Guggenheim) scale to ionic strength 0.1 mol/kg, on the scale of the model's single-ion "
+                + "coefficients above");
         Formulation.Basis b = recipe.formulation().basis();
         if (b.finalVolume()) {
             out.add(String.format(Locale.ROOT, "made up to volume at %.0f °C; water mass from additive apparent "

@@ -19,9 +19,10 @@ import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
 
 /**
- * The pH's uncertainty from the constants (see {@link Uncertainty} for what it covers), by linear propagation with
- * derivatives from implicit differentiation ({@link Derivatives}): each pKa used, each ΔH° that has an uncertainty,
- * each complex's log K and pKw, moved by its standard uncertainty u, gives at each condition
+ * The pH's uncertainty from the constants and the activity model (see {@link Uncertainty} for what it covers), by
+ * linear propagation with derivatives from implicit differentiation ({@link Derivatives}): each pKa used, each ΔH°
+ * that has an uncertainty, each complex's log K, pKw and the activity model's log γ, moved by its standard
+ * uncertainty u, gives at each condition
  * <pre>
  *   c = ∂pH/∂θ·u + ∂pH/∂n · dn/dθ·u,     dn/dθ = −(∂pH_goal/∂θ)/(∂pH_goal/∂n)
  * </pre>
@@ -42,7 +43,27 @@ final class ConstantsPropagation {
     /** One constant moved by its uncertainty: its response at a state of a given temperature. */
     interface Move {
         Derivatives.Response at(Derivatives d, double kelvin);
+
+        /** The standard uncertainty reported with the change: the constant's own unless it depends on the state. */
+        default double u(Derivatives d, double nominal) {
+            return nominal;
+        }
     }
+
+    /** The activity model's systematic error, reported per unit z² of log10 γ (the largest of any ion). */
+    private static final Move ACTIVITY_MODEL = new Move() {
+        @Override
+        public Derivatives.Response at(Derivatives d, double kelvin) {
+            return d.activityModel();
+        }
+
+        /** To two significant digits: the solver's last digits are not the model's. */
+        @Override
+        public double u(Derivatives d, double nominal) {
+            double u = d.activityModelUncertainty();
+            return u > 0 ? new java.math.BigDecimal(u).round(new java.math.MathContext(2)).doubleValue() : 0;
+        }
+    };
 
     record Perturbation(String name, double u, Move move, int pair, double correlation) {
     }
@@ -84,6 +105,7 @@ final class ConstantsPropagation {
         }
         out.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
                 (d, kelvin) -> scaled(d.pKw(), Equilibrium.PKW_UNCERTAINTY), -1, 0));
+        out.add(new Perturbation("activity model (log10 γ per z²)", 0, ACTIVITY_MODEL, -1, 0));
         return out;
     }
 
@@ -202,7 +224,7 @@ final class ConstantsPropagation {
                 pH2 += 2 * p.correlation() * dpH * dpHs[p.pair()];
                 beta2 += 2 * p.correlation() * dBeta * dBetas[p.pair()];
             }
-            parts.add(new Uncertainty.Contribution(p.name(), p.u(), dpH));
+            parts.add(new Uncertainty.Contribution(p.name(), p.move().u(c.d(), p.u()), dpH));
         }
         parts.sort(Comparator.comparingDouble((Uncertainty.Contribution x) -> -Math.abs(x.pHChange())));
         return Optional.of(new Uncertainty(Math.sqrt(Math.max(0, pH2)), Math.sqrt(Math.max(0, beta2)), parts));

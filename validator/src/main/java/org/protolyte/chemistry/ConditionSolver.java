@@ -47,7 +47,7 @@ final class ConditionSolver {
         ws.setActivityCoefficients(r[1]);
         last = Double.isNaN(fixedIonicStrength) ? r : null;
         List<Caveat> caveats = new ArrayList<>(ValidityJudge.temperature(ws, r[0], r[1], true));
-        caveats.addAll(ValidityJudge.ionicStrength(p, r[1]));
+        caveats.addAll(ValidityJudge.ionicStrength(ws, r[0], r[1]));
         return state(r[0], r[1], caveats);
     }
 
@@ -55,7 +55,7 @@ final class ConditionSolver {
     Equilibrium.Point point(Equilibrium.Point warm) {
         double[] r = converge(warm);
         List<Caveat> caveats = ValidityJudge.temperature(ws, r[0], r[1], false);
-        caveats.addAll(ValidityJudge.ionicStrength(p, r[1]));
+        caveats.addAll(ValidityJudge.ionicStrength(ws, r[0], r[1]));
         for (Caveat c : caveats) {
             if (c.severity() == Caveat.Severity.INDETERMINATE) {
                 throw new IndeterminateException(c);

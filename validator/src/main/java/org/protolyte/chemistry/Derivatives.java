@@ -30,6 +30,7 @@ public final class Derivatives {
     private final double[] total;
     private final double mH;
     private final double mOH;
+    private final double ionicStrength;
     private final double[] speciesSlope;     // ln10 · d log10 γ_s / dI
     private final double[] componentSlope;   // ln10 · d log10 γ_j / dI of each component's free basis
     private final double hydrogenSlope;
@@ -66,6 +67,7 @@ public final class Derivatives {
         total = ws.total.clone();
         mH = ws.hydrogen(pH);
         mOH = ws.hydroxide(pH);
+        this.ionicStrength = ionicStrength;
         ionM = new double[p.interactions == null ? 0 : p.interactions.ions];
         ionLn = new double[ionM.length];
         speciesSlope = new double[p.n];
@@ -119,6 +121,45 @@ public final class Derivatives {
             }
         }
         return respond(g, new double[total.length], 0, 0, 0);
+    }
+
+    /**
+     * The activity model's systematic error: the response to raising log10 γ of every ion by its standard uncertainty
+     * ({@link Interactions#uncertainty}; with Davies alone, z² times its disagreement with Pitzer,
+     * {@link IonInteraction#daviesDisagreement}). d ln m_s = ln10 (Σ_j ν_sj u_j − u_s), d ln mH = −ln10 u_H (pH is −log a_H).
+     */
+    public Response activityModel() {
+        int nc = total.length;
+        double[] us = new double[p.n];
+        double[] uc = new double[nc];
+        double[] uw = new double[2];
+        activityUncertainty(us, uc, uw);
+        double[] g = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            g[i] = Thermo.LN10 * (p.overParts(i, uc) - us[i]);
+        }
+        return respond(g, new double[nc], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
+    }
+
+    /** The standard uncertainty of log10 γ per unit z² behind {@link #activityModel}: the largest of any ion here. */
+    public double activityModelUncertainty() {
+        return activityUncertainty(new double[p.n], new double[total.length], new double[2]);
+    }
+
+    private double activityUncertainty(double[] us, double[] uc, double[] uw) {
+        if (p.interactions != null) {
+            return p.interactions.uncertainty(m, mH, mOH, ionM, ionLn, us, uc, uw);
+        }
+        double d = IonInteraction.daviesDisagreement(ionicStrength);
+        for (int i = 0; i < p.n; i++) {
+            us[i] = p.charge[i] * p.charge[i] * d;
+        }
+        for (int j = 0; j < uc.length; j++) {
+            uc[j] = p.components[j].charge() * p.components[j].charge() * d;
+        }
+        uw[0] = d;
+        uw[1] = d;
+        return d;
     }
 
     /** The response to raising ln of every molality held by a gas phase by one (ln of the partial pressure). */

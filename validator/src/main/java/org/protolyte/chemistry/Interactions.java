@@ -7,12 +7,27 @@ import java.util.Map;
 
 /**
  * The composition part of {@link IonInteraction} for one prepared problem: Pitzer's ln γ of every charged species,
- * of each component's free basis and of H+ and OH-, times the hand-over weight w(I), in log10 units. Immutable;
- * the scratch arrays belong to the caller's {@link Workspace}.
+ * of each component's free basis and of H+ and OH-, times the hand-over weight w(I), in log10 units. An ion without
+ * Pitzer parameters against any ion of the problem keeps Davies' γ at every ionic strength (its share of the osmotic
+ * coefficient is then Pitzer's Debye–Hückel term alone), and {@link ValidityJudge} holds its solution to Davies'
+ * limits where it carries buffering. Immutable; the scratch arrays belong to the caller's {@link Workspace}.
  */
 final class Interactions {
 
+    /**
+     * The standard uncertainty of log10 γ per unit z² that Pitzer's equations leave with the parameters here, derived
+     * from the 2.5 % in γ± within which the buffer salts' values agree with the CRC Handbook's
+     * (ElectrolyteActivityTest): for a 2-1 salt log10 γ± = (2 log10 γ+ + log10 γ2-)/3 moves by (2·1 + 4)/3 = 2 units
+     * of z², so u = log10(1.025)/2.
+     */
+    static final double PITZER_UNCERTAINTY = 0.0054;
+    /** The share of its sign's charge from which an ion's pairs are held to their range (chosen). */
+    static final double SIGNIFICANT = 0.05;
+
     final Pitzer.Mixture mixture;
+    /** The same with each pair lacking published slopes moved by their bound: for the uncertainty that leaves. */
+    private final Pitzer.Mixture bounded;
+    private final double debyeHuckelA;
     final int ions;
     final int[] speciesIon;      // −1 for a neutral species
     final int[] componentIon;    // −1 for a neutral component
@@ -37,6 +52,50 @@ final class Interactions {
         ions = list.size();
         charge = list.stream().mapToInt(Pitzer.Ion::charge).toArray();
         mixture = new Pitzer.Mixture(list, p.kelvin);
+        boolean any = false;
+        for (boolean e : mixture.extrapolated) {
+            any |= e;
+        }
+        bounded = any ? mixture.bounded() : null;
+        debyeHuckelA = p.debyeHuckelA;
+    }
+
+    /**
+     * The share of the charge of opposite sign around an ion (Σ |z| m of the other sign) carried by ions it has
+     * parameters with, at these ion molalities; 1 where there is none.
+     */
+    double coveredShare(int ion, double[] ionM) {
+        double all = 0;
+        double with = 0;
+        for (int q = 0; q < ions; q++) {
+            if (charge[q] * charge[ion] < 0) {
+                all += Math.abs(charge[q]) * ionM[q];
+            }
+        }
+        Pitzer.Mixture x = mixture;
+        for (int q = 0; q < x.pairs; q++) {
+            int other = x.cation[q] == ion ? x.anion[q] : x.anion[q] == ion ? x.cation[q] : -1;
+            if (other >= 0) {
+                with += Math.abs(charge[other]) * ionM[other];
+            }
+        }
+        return all > 0 ? with / all : 1;
+    }
+
+    /** Whether an ion carries at least {@link #SIGNIFICANT} of the charge of its sign. */
+    boolean significant(int ion, double[] ionM) {
+        double all = 0;
+        for (int q = 0; q < ions; q++) {
+            if (charge[q] * charge[ion] > 0) {
+                all += Math.abs(charge[q]) * ionM[q];
+            }
+        }
+        return Math.abs(charge[ion]) * ionM[ion] >= SIGNIFICANT * all;
+    }
+
+    /** Whether the ion at this index has Pitzer parameters here; if not, it keeps Davies' γ. */
+    boolean covered(int ion) {
+        return mixture.parameterised(ion);
     }
 
     private static int index(String name, int charge, Map<String, Integer> at, List<Pitzer.Ion> list) {
@@ -69,9 +128,15 @@ final class Interactions {
      */
     double specific(double[] m, double mH, double mOH, double[] ionM, double[] ionLn, double[] species,
                     double[] component, double[] water) {
-        double w = IonInteraction.weight(ionMolalities(m, mH, mOH, ionM));
+        double ionic = ionMolalities(m, mH, mOH, ionM);
+        double w = IonInteraction.weight(ionic);
         if (w > 0) {
             mixture.lnGamma(ionM, ionLn);
+            for (int q = 0; q < ions; q++) {
+                if (!covered(q)) {
+                    ionLn[q] = Thermo.LN10 * Davies.INSTANCE.log10Gamma(charge[q], ionic, debyeHuckelA);
+                }
+            }
         } else {
             java.util.Arrays.fill(ionLn, 0);
         }
@@ -85,6 +150,44 @@ final class Interactions {
         water[0] = k * ionLn[hydrogenIon];
         water[1] = k * ionLn[hydroxideIon];
         return w;
+    }
+
+    /**
+     * The standard uncertainty of log10 γ of every species, component basis and {H+, OH-} at these molalities, into
+     * the last three arrays: for an ion with parameters z²[(1 − w)·Davies' disagreement + w·{@link #PITZER_UNCERTAINTY}] plus w times the change of
+     * its log γ with its pairs' missing slopes at their bound; for one without, z² times Davies' disagreement. All
+     * move together: one systematic error of the model. Returns the largest per unit z².
+     */
+    double uncertainty(double[] m, double mH, double mOH, double[] ionM, double[] ionLn, double[] species,
+                       double[] component, double[] water) {
+        double ionic = ionMolalities(m, mH, mOH, ionM);
+        double[] u = new double[ions];
+        double largest = 0;
+        if (ionic > 0) {
+            double w = IonInteraction.weight(ionic);
+            double d = IonInteraction.daviesDisagreement(ionic);
+            double[] moved = new double[ions];
+            if (bounded != null) {
+                mixture.lnGamma(ionM, ionLn);
+                bounded.lnGamma(ionM, moved);
+            }
+            for (int q = 0; q < ions; q++) {
+                double zz = charge[q] * charge[q];
+                u[q] = covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY)
+                        + (bounded == null ? 0 : w * Math.abs(moved[q] - ionLn[q]) / Thermo.LN10)
+                        : zz * d;
+                largest = Math.max(largest, u[q] / zz);
+            }
+        }
+        for (int i = 0; i < species.length; i++) {
+            species[i] = speciesIon[i] < 0 ? 0 : u[speciesIon[i]];
+        }
+        for (int j = 0; j < component.length; j++) {
+            component[j] = componentIon[j] < 0 ? 0 : u[componentIon[j]];
+        }
+        water[0] = u[hydrogenIon];
+        water[1] = u[hydroxideIon];
+        return largest;
     }
 
     /** w(I)·Σ m (φ − 1) of Pitzer's equations, mol/kg: its share of the osmolality. */

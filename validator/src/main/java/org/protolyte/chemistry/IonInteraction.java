@@ -30,6 +30,15 @@ public final class IonInteraction implements ActivityModel {
         return t <= 0 || t >= 1 ? 0 : 6 * t * (1 - t) / (TO - FROM);
     }
 
+    /**
+     * How far Davies' equation is from Pitzer's at ionic strength I, at 25 °C: |log10 γ±(Davies, z = 1) −
+     * log10 γ±(NaCl)|, the error per unit z² of a single-ion log γ that Davies leaves for an ion without parameters.
+     */
+    public static double daviesDisagreement(double ionicStrength) {
+        return Math.abs(Davies.INSTANCE.log10Gamma(1, ionicStrength, Water.debyeHuckelA(Thermo.T_REF))
+                - Math.log10(Pitzer.sodiumChlorideMeanActivityCoefficient(ionicStrength, Thermo.T_REF)));
+    }
+
     @Override
     public double log10Gamma(int charge, double ionicStrength, double a) {
         return (1 - weight(ionicStrength)) * Davies.INSTANCE.log10Gamma(charge, ionicStrength, a);

@@ -26,7 +26,7 @@ public final class Pitzer {
      * Where the saline osmotic coefficient ({@link #osmoticCoefficient(double, double, double, double)}) is given:
      * within 10 K of 25 °C, where its tests hold it to published tables (none at other temperatures was reachable).
      */
-    public static final TemperatureRange VALIDITY = PitzerParameters.WITHOUT_SLOPES;
+    public static final TemperatureRange VALIDITY = TemperatureRange.celsius(15, 35);
 
     static final double B = 1.2;
     /** J(x) of Pitzer (1975), eq. 47: J ≈ x/(4 + C1 x^−C2 exp(−C3 x^C4)); constants from memory. */
@@ -144,13 +144,24 @@ public final class Pitzer {
         final double[] psi;
         /** Which ions have at least one cation–anion pair with parameters. */
         final boolean[] parameterised;
-        /** Per ion: the least maximum molality of the fits of its pairs, mol/kg (∞ if none). */
-        final double[] fitLimit;
+        /** Per pair: the ionic strength of its pure salt at the highest molality where it is used, mol/kg. */
+        final double[] pairLimit;
+        /** Per pair: whether its parameters are its 25 °C values away from 25 °C (no published slopes). */
+        final boolean[] extrapolated;
+        private final List<Ion> ions;
+        private final double kelvin;
         /** For a single salt (a cation and an anion): the ions per formula unit; 0 otherwise. */
         private final int nuCation;
         private final int nuAnion;
 
         public Mixture(List<Ion> ions, double kelvin) {
+            this(ions, kelvin, false);
+        }
+
+        /** @param bounded each pair without published slopes moved by {@link PitzerParameters#SLOPE_BOUND} */
+        private Mixture(List<Ion> ions, double kelvin, boolean bounded) {
+            this.ions = List.copyOf(ions);
+            this.kelvin = kelvin;
             n = ions.size();
             z = new int[n];
             for (int i = 0; i < n; i++) {
@@ -159,28 +170,33 @@ public final class Pitzer {
             aPhi = Water.debyeHuckelA(kelvin) * Thermo.LN10 / 3;
             List<double[]> pairList = new ArrayList<>();
             parameterised = new boolean[n];
-            fitLimit = new double[n];
-            java.util.Arrays.fill(fitLimit, Double.POSITIVE_INFINITY);
+            List<Double> limits = new ArrayList<>();
+            List<Boolean> unsloped = new ArrayList<>();
+            double dt = kelvin - Thermo.T_REF;
             for (int i = 0; i < n; i++) {
                 for (int j = 0; j < n; j++) {
                     if (z[i] <= 0 || z[j] >= 0) {
                         continue;
                     }
                     PitzerParameters.Binary b = PitzerParameters.binary(ions.get(i).name(), ions.get(j).name());
-                    if (b == null || !b.validity().contains(kelvin)) {
+                    if (b == null || !PitzerParameters.RANGE.contains(kelvin)) {
                         continue;
                     }
-                    double dt = kelvin - Thermo.T_REF;
-                    double[] at = b.at(dt);
+                    double[] at = bounded ? b.bounded(dt) : b.at(dt);
                     pairList.add(new double[] {i, j, at[0], at[1], at[2],
                             at[3] / (2 * Math.sqrt(Math.abs(z[i] * z[j]))), b.alpha1(), b.alpha2()});
                     parameterised[i] = true;
                     parameterised[j] = true;
-                    fitLimit[i] = Math.min(fitLimit[i], b.maxMolality());
-                    fitLimit[j] = Math.min(fitLimit[j], b.maxMolality());
+                    limits.add(b.ionicStrengthLimit(z[i], z[j]));
+                    unsloped.add(!b.hasSlopes() && dt != 0);
                 }
             }
             pairs = pairList.size();
+            pairLimit = limits.stream().mapToDouble(Double::doubleValue).toArray();
+            extrapolated = new boolean[pairs];
+            for (int p = 0; p < pairs; p++) {
+                extrapolated[p] = unsloped.get(p);
+            }
             cation = new int[pairs];
             anion = new int[pairs];
             beta0 = new double[pairs];
@@ -272,6 +288,16 @@ public final class Pitzer {
         /** Whether the ion at this index has cation–anion parameters with some other ion of the list. */
         public boolean parameterised(int ion) {
             return parameterised[ion];
+        }
+
+        /** The same ions with each pair that has no published slopes at the edge of what they allow here. */
+        Mixture bounded() {
+            return new Mixture(ions, kelvin, true);
+        }
+
+        /** "Na+–HPO4-2": the ions of a pair, for messages. */
+        String pairName(int pair) {
+            return ions.get(cation[pair]).name() + "–" + ions.get(anion[pair]).name();
         }
 
         /** ln γ of every ion (0 for neutral solutes) at these molalities, into {@code out}. */

@@ -3,6 +3,8 @@ package org.protolyte.chemistry;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
+import java.util.TreeSet;
 
 /**
  * Where a solved condition stops being trustworthy: below the freezing point, outside water's range, constants used
@@ -26,6 +28,15 @@ final class ValidityJudge {
      * of H2PO4- and HPO4-2 differ by 3 (log aH = log Ka + log(m_acid/m_base) + Δz²·f, derived from the mass-action law).
      */
     private static final int PHOSPHATE_CHARGE_SQUARES = 3;
+    /** A form carries buffering when it is at least this fraction of its component (chosen). */
+    private static final double PRESENT = 0.05;
+    /**
+     * An ion is covered by Pitzer's parameters when its pairs cover at least this share of the charge of opposite sign
+     * around it (chosen: a tenth of the interactions missing is within the model's own uncertainty at 1 mol/kg).
+     */
+    static final double COVERED = 0.9;
+    /** How far from 25 °C (K) a pair's 25 °C values pass without a warning (within the ±). */
+    private static final double SLOPELESS_SPAN = 10;
 
     private ValidityJudge() {
     }
@@ -58,30 +69,107 @@ final class ValidityJudge {
     }
 
     /**
-     * Above the warning limit the pH keeps the activity model: the buffer ions have no Pitzer parameters here. The
-     * error to expect is derived from the two models where both exist: Δ = |log10 γ±(model) − log10 γ±(Pitzer, NaCl)|
-     * at this ionic strength, taken as the error per unit z² of a single-ion log γ; a step whose forms differ by Δz² in
-     * squared charge is then off by about Δz²·Δ in pH.
+     * Above the warning limit the pH keeps the activity model: with Davies alone, the buffer ions have no Pitzer
+     * parameters. The error to expect is derived from the two models where both exist: Δ = |log10 γ±(Davies) −
+     * log10 γ±(Pitzer, NaCl)| at this ionic strength, taken as the error per unit z² of a single-ion log γ; a step whose
+     * forms differ by Δz² in squared charge is then off by about Δz²·Δ in pH. With Pitzer's equations
+     * ({@link Interactions}) the same limits hold for the ions that carry buffering without parameters, and every
+     * pair of the ions that make up the solution is held to the range where its parameters are used.
      */
-    static List<Caveat> ionicStrength(PreparedProblem p, double i) {
+    static List<Caveat> ionicStrength(Workspace ws, double pH, double i) {
+        PreparedProblem p = ws.p;
+        if (p.interactions == null) {
+            return daviesLimits(p, i, "the buffer ions have no Pitzer parameters here, so the pH keeps the "
+                    + p.activity.name() + " equation");
+        }
         List<Caveat> out = new ArrayList<>();
-        ActivityModel activity = p.activity;
-        if (i > activity.indeterminateAbove()) {
-            out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
-                    "ionic strength %.3f mol/kg is above %.1f mol/kg, where the %s equation cannot be trusted",
-                    i, activity.indeterminateAbove(), activity.name())));
-        } else if (i > activity.warnAbove()) {
-            double t = Pitzer.VALIDITY.contains(p.kelvin) ? p.kelvin : Thermo.T_REF;
-            double delta = Math.abs(activity.log10Gamma(1, i, p.debyeHuckelA)
-                    - Math.log10(Pitzer.sodiumChlorideMeanActivityCoefficient(i, t)));
-            out.add(Caveat.warning("ionic-strength-high", String.format(Locale.ROOT,
-                    "ionic strength %.3f mol/kg is above %.1f mol/kg: the buffer ions have no Pitzer parameters here, so "
-                            + "the pH keeps the %s equation; at this ionic strength it differs from Pitzer by %.3f in "
-                            + "log γ± of sodium chloride, so expect an error of about %.2f pH where a step between "
-                            + "charges −1 and −2 carries the buffering (H2PO4-/HPO4-2), more for higher charges",
-                    i, activity.warnAbove(), activity.name(), delta, PHOSPHATE_CHARGE_SQUARES * delta)));
+        if (!(i > IonInteraction.FROM)) {
+            return out;
+        }
+        Interactions x = p.interactions;
+        double[] share = bufferShares(ws, pH);
+        double[] ionM = ws.ionMolality;
+        x.ionMolalities(ws.m, ws.hydrogen(pH), ws.hydroxide(pH), ionM);
+        Set<String> bare = new TreeSet<>();
+        boolean[] matters = new boolean[x.ions];       // carries buffering, or a real share of its sign's charge
+        for (int q = 0; q < x.ions; q++) {
+            matters[q] = x.significant(q, ionM);
+        }
+        for (int s = 0; s < p.n; s++) {
+            int j = p.comp[s];
+            int ion = x.speciesIon[s];
+            boolean carries = ion >= 0 && p.complexParts[s] == null && share[j] * EXTRAPOLATION_ERROR >= MINOR_PH_EFFECT
+                    && ws.m[s] >= PRESENT * ws.total[j];
+            if (carries) {
+                matters[ion] = true;
+                if (x.coveredShare(ion, ionM) < COVERED) {
+                    bare.add(p.sp[s].name());
+                }
+            }
+        }
+        if (!bare.isEmpty()) {
+            out.addAll(daviesLimits(p, i, String.join(", ", bare) + " carr" + (bare.size() == 1 ? "ies" : "y")
+                    + " the buffering without Pitzer parameters against most of the ions of opposite charge here, so "
+                    + (bare.size() == 1 ? "it keeps" : "they keep") + " the Davies equation"));
+        }
+        Pitzer.Mixture mix = x.mixture;
+        Set<String> extrapolated = new TreeSet<>();
+        for (int q = 0; q < mix.pairs; q++) {
+            if (!matters[mix.cation[q]] || !matters[mix.anion[q]]) {
+                continue;
+            }
+            if (i > mix.pairLimit[q]) {
+                out.add(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
+                        "ionic strength %.3f mol/kg is above %.2f mol/kg, the pure salt's at the highest molality where "
+                                + "the Pitzer parameters of %s are used", i, mix.pairLimit[q], mix.pairName(q))));
+            }
+            if (mix.extrapolated[q] && Math.abs(p.kelvin - Thermo.T_REF) > SLOPELESS_SPAN) {
+                extrapolated.add(mix.pairName(q));
+            }
+        }
+        if (!extrapolated.isEmpty()) {
+            out.add(Caveat.warning("pitzer-parameters-extrapolated", String.format(Locale.ROOT,
+                    "%.1f °C is more than %.0f K from 25 °C, and the Pitzer parameters of %s have no published "
+                            + "temperature derivatives: their 25 °C values are used, with an uncertainty bounded by the "
+                            + "largest derivatives published for these salts, which the ± includes",
+                    p.kelvin - Thermo.KELVIN_OFFSET, SLOPELESS_SPAN, String.join(", ", extrapolated))));
         }
         return out;
+    }
+
+    /** Davies' own limits: a warning with the error to expect, then no result. */
+    private static List<Caveat> daviesLimits(PreparedProblem p, double i, String why) {
+        ActivityModel activity = p.activity;
+        if (i > activity.indeterminateAbove()) {
+            return List.of(Caveat.indeterminate("ionic-strength-out-of-range", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg, where the Davies equation cannot be trusted: %s",
+                    i, activity.indeterminateAbove(), why)));
+        }
+        if (i > activity.warnAbove()) {
+            double delta = IonInteraction.daviesDisagreement(i);
+            return List.of(Caveat.warning("ionic-strength-high", String.format(Locale.ROOT,
+                    "ionic strength %.3f mol/kg is above %.1f mol/kg: %s; at this ionic strength it differs from "
+                            + "Pitzer by %.3f in log γ± of sodium chloride, so expect an error of about %.2f pH where a "
+                            + "step between charges −1 and −2 carries the buffering (H2PO4-/HPO4-2), more for higher "
+                            + "charges",
+                    i, activity.warnAbove(), why, delta, PHOSPHATE_CHARGE_SQUARES * delta)));
+        }
+        return List.of();
+    }
+
+    /** Each component's share of the buffer capacity at this pH: 1 for an open one. Refills the molalities. */
+    private static double[] bufferShares(Workspace ws, double pH) {
+        PreparedProblem p = ws.p;
+        p.speciation.molalities(ws, pH);
+        double beta = p.speciation.bufferSum(ws, pH);
+        if (p.complexes) {
+            BufferCapacity.componentTerms(ws);
+        }
+        double[] share = new double[p.components.length];
+        for (int j = 0; j < share.length; j++) {
+            share[j] = p.open(j) ? 1 : Math.abs(ws.term[j]) / beta;
+        }
+        return share;
     }
 
     /**
@@ -97,7 +185,7 @@ final class ValidityJudge {
         List<String> minor = new ArrayList<>();
         double t = p.kelvin - Thermo.KELVIN_OFFSET;
         boolean[] reported = new boolean[p.components.length];
-        double beta = -1;
+        double[] shares = null;
         for (int i = 0; i < p.n; i++) {
             int j = p.comp[i];
             TemperatureRange v = p.sp[i].formation().validity();
@@ -111,14 +199,10 @@ final class ValidityJudge {
                 continue;
             }
             reported[j] = true;
-            if (beta < 0) {
-                p.speciation.molalities(ws, pH);
-                beta = p.speciation.bufferSum(ws, pH);
-                if (p.complexes) {
-                    BufferCapacity.componentTerms(ws);
-                }
+            if (shares == null) {
+                shares = bufferShares(ws, pH);
             }
-            double share = p.open(j) ? 1 : Math.abs(ws.term[j]) / beta;
+            double share = shares[j];
             if (share * EXTRAPOLATION_ERROR < MINOR_PH_EFFECT) {
                 if (describeMinor) {
                     minor.add(String.format(Locale.ROOT, "%s (%s, %.2g %% of β)", p.sp[i].name(), v, 100 * share));

@@ -12,7 +12,7 @@ import java.util.concurrent.Callable;
 import org.protolyte.Protolyte;
 import org.protolyte.analysis.RecipeConflict;
 import org.protolyte.analysis.Robustness;
-import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.IonInteraction;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Formulation;
@@ -92,7 +92,7 @@ public final class RobustnessCommand implements Callable<Integer> {
         Robustness.Settings settings = new Robustness.Settings(samples, seed, tolerancePercent / 100, meter);
         Robustness.Result result;
         try {
-            result = new Robustness(new Equilibrium(Davies.INSTANCE)).run(recipe, settings, done -> {
+            result = new Robustness(new Equilibrium(IonInteraction.INSTANCE)).run(recipe, settings, done -> {
                 if (terminal && done % Math.max(500, samples / 20) == 0) {
                     err.printf(Locale.ROOT, "\r%d of %d samples", done, samples);
                     err.flush();

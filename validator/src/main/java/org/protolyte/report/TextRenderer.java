@@ -201,8 +201,9 @@ public final class TextRenderer {
             b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
         }
         if (a.conditions().stream().anyMatch(c -> c.uncertainty().isPresent())) {
-            b.append("  ± is the standard uncertainty from the published pKa and pKw values, not batch-to-batch "
-                    + "variation; where a titrant is dosed to a pH, the meter removes it at that condition").append(NL);
+            b.append("  ± is the standard uncertainty from the published pKa and pKw values and the activity model, not "
+                    + "batch-to-batch variation; where a titrant is dosed to a pH, the meter removes it at that condition")
+                    .append(NL);
         }
         b.append("  assumed: ").append(p(String.join("; ", a.assumptions()))).append(NL);
     }

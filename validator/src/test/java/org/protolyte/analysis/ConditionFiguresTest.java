@@ -198,7 +198,7 @@ class ConditionFiguresTest {
 
     /**
      * Every constant in the uncertainty budget has an uncertainty and belongs to a system the recipe holds, or is pKw:
-     * phosphate's steps only, no CO2 system for a closed recipe.
+     * phosphate's steps only, no CO2 system for a closed recipe; and the activity model.
      */
     @Test
     void theUncertaintyBudgetListsOnlyTheConstantsThatApply() {
@@ -208,7 +208,8 @@ class ConditionFiguresTest {
         assertFalse(u.contributions().isEmpty());
         for (Uncertainty.Contribution c : u.contributions()) {
             assertTrue(c.standardUncertainty() > 0, c::toString);
-            assertTrue(c.constant().startsWith("phosphate ") || c.constant().equals("pKw"), c::toString);
+            assertTrue(c.constant().startsWith("phosphate ") || c.constant().equals("pKw")
+                    || c.constant().startsWith("activity model"), c::toString);
         }
         for (int i = 1; i < u.contributions().size(); i++) {
             assertTrue(Math.abs(u.contributions().get(i - 1).pHChange()) >= Math.abs(u.contributions().get(i).pHChange()));

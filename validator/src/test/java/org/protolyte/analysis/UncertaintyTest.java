@@ -27,15 +27,17 @@ class UncertaintyTest {
 
     /**
      * Equimolal phosphate: by Henderson–Hasselbalch ∂pH/∂pKa2 = 1 (derived), so pKa2's uncertainty (0.002 in the
-     * library) passes to the pH one for one and dominates; pKa1 and pKa3, far away, hardly count.
+     * library) passes to the pH one for one and dominates the constants; pKa1 and pKa3, far away, hardly count. (At
+     * I = 0.1 mol/kg the activity model's share is larger still.)
      */
     @Test
     void aBufferPassesOnTheUncertaintyOfItsPKa() {
         ConditionResult c = condition("{\"substance\": \"potassium dihydrogen phosphate\", \"amount\": \"25 mmol/kg\"},"
                 + "{\"substance\": \"disodium hydrogen phosphate anhydrous\", \"amount\": \"25 mmol/kg\"}", "", "use");
         Uncertainty u = c.uncertainty().orElseThrow();
-        Uncertainty.Contribution main = u.contributions().get(0);
-        assertEquals("phosphate pKa2", main.constant());
+        Uncertainty.Contribution main = u.contributions().stream().filter(x -> !x.constant().startsWith("activity"))
+                .findFirst().orElseThrow();
+        assertEquals("phosphate pKa2", main.constant(), "the largest of the constants");
         assertEquals(main.standardUncertainty(), main.pHChange(), 0.05 * main.standardUncertainty());
         assertEquals(Math.sqrt(u.contributions().stream().mapToDouble(x -> x.pHChange() * x.pHChange()).sum()), u.pH(),
                 1e-12);
