@@ -14,6 +14,8 @@ import org.protolyte.chemistry.Derivatives;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.IndeterminateException;
+import org.protolyte.chemistry.IonInteraction;
+import org.protolyte.chemistry.Pitzer;
 import org.protolyte.chemistry.Species;
 import org.protolyte.recipe.Recipe;
 import org.protolyte.recipe.Solution;
@@ -45,8 +47,13 @@ final class ConstantsPropagation {
         Derivatives.Response at(Derivatives d, double kelvin);
 
         /** The standard uncertainty reported with the change: the constant's own unless it depends on the state. */
-        default double u(Derivatives d, double nominal) {
+        default double u(Derivatives d, double kelvin, double nominal) {
             return nominal;
+        }
+
+        /** Whether it is left out of a condition's budget where it moves nothing (it does not apply there). */
+        default boolean onlyWhereItMoves() {
+            return false;
         }
     }
 
@@ -59,7 +66,7 @@ final class ConstantsPropagation {
 
         /** To two significant digits: the solver's last digits are not the model's. */
         @Override
-        public double u(Derivatives d, double nominal) {
+        public double u(Derivatives d, double kelvin, double nominal) {
             double u = d.activityModelUncertainty();
             return u > 0 ? new java.math.BigDecimal(u).round(new java.math.MathContext(2)).doubleValue() : 0;
         }
@@ -68,8 +75,31 @@ final class ConstantsPropagation {
     record Perturbation(String name, double u, Move move, int pair, double correlation) {
     }
 
-    /** The constants whose uncertainties count for this recipe, in a fixed order (systems by name). */
-    static List<Perturbation> perturbations(Recipe recipe, Solution solution) {
+    /** A Pitzer pair without temperature terms: its β moved to their bound at the state's temperature. */
+    private static Move pitzerPair(String cation, String anion) {
+        return new Move() {
+            @Override
+            public Derivatives.Response at(Derivatives d, double kelvin) {
+                return d.pitzerPair(cation, anion);
+            }
+
+            @Override
+            public double u(Derivatives d, double kelvin, double nominal) {
+                return Pitzer.betaOneBound(kelvin);
+            }
+
+            @Override
+            public boolean onlyWhereItMoves() {
+                return true;
+            }
+        };
+    }
+
+    /**
+     * The constants whose uncertainties count for this recipe, in a fixed order (systems by name); with Pitzer's
+     * equations ({@code pitzer}), each pair of the recipe's ions whose parameters have no temperature terms.
+     */
+    static List<Perturbation> perturbations(Recipe recipe, Solution solution, boolean pitzer) {
         List<Perturbation> out = new ArrayList<>();
         boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
         Optional<AcidBaseSystem> carbonDioxide = recipe.library().carbonDioxide();
@@ -106,6 +136,21 @@ final class ConstantsPropagation {
         out.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
                 (d, kelvin) -> scaled(d.pKw(), Equilibrium.PKW_UNCERTAINTY), -1, 0));
         out.add(new Perturbation("activity model (log10 γ per z²)", 0, ACTIVITY_MODEL, -1, 0));
+        if (pitzer) {
+            java.util.Set<Pitzer.Ion> ions = new java.util.LinkedHashSet<>();
+            for (Species s : solution.species()) {
+                if (s.charge() != 0) {
+                    ions.add(new Pitzer.Ion(s.name(), s.charge()));
+                }
+            }
+            ions.add(new Pitzer.Ion("H+", 1));
+            ions.add(new Pitzer.Ion("OH-", -1));
+            for (String pair : Pitzer.pairsWithoutTemperatureTerms(List.copyOf(ions))) {
+                String[] two = pair.split("–");
+                out.add(new Perturbation("Pitzer " + pair + " (25 °C values; β¹ kg/mol)", 0,
+                        pitzerPair(two[0], two[1]), -1, 0));
+            }
+        }
         return out;
     }
 
@@ -143,7 +188,8 @@ final class ConstantsPropagation {
     List<ConditionResult> apply(Recipe recipe, Solution concentrate, List<ConditionResult> results,
                                 List<Solution> solutions, List<Optional<Derivatives>> derivatives,
                                 List<TitrantResult> titrants) {
-        List<Perturbation> perturbations = perturbations(recipe, concentrate);
+        List<Perturbation> perturbations = perturbations(recipe, concentrate,
+                analyzer.equilibrium().activityModel() instanceof IonInteraction);
         Optional<TitrantResult> dosed = titrants.stream()
                 .filter(t -> t.used() && t.unreachable().isEmpty() && t.moles() > 0).findFirst();
         int n = results.size();
@@ -224,7 +270,9 @@ final class ConstantsPropagation {
                 pH2 += 2 * p.correlation() * dpH * dpHs[p.pair()];
                 beta2 += 2 * p.correlation() * dBeta * dBetas[p.pair()];
             }
-            parts.add(new Uncertainty.Contribution(p.name(), p.move().u(c.d(), p.u()), dpH));
+            if (!p.move().onlyWhereItMoves() || dpH != 0 || dBeta != 0) {
+                parts.add(new Uncertainty.Contribution(p.name(), p.move().u(c.d(), c.kelvin(), p.u()), dpH));
+            }
         }
         parts.sort(Comparator.comparingDouble((Uncertainty.Contribution x) -> -Math.abs(x.pHChange())));
         return Optional.of(new Uncertainty(Math.sqrt(Math.max(0, pH2)), Math.sqrt(Math.max(0, beta2)), parts));

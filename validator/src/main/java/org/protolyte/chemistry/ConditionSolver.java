@@ -114,7 +114,7 @@ final class ConditionSolver {
             if (!(Math.abs(nextPH - pH) < 1) || !(nextI > 0)) {
                 return null;
             }
-            double moved = ws.updateSpecific(nextPH);
+            double moved = ws.updateSpecific(nextPH, nextI);
             // the last step's error is a few per cent of the step before (the I coupling converges linearly), so a
             // step of 1e-8 leaves under 1e-9: enough for a study's q.s. (met to 1e-7) and its spread (1e-3 and up)
             boolean settled = Math.abs(nextPH - pH) < COUPLED_PH_STEP && moved < COUPLED_PH_STEP
@@ -149,7 +149,7 @@ final class ConditionSolver {
             }
             double next = ionicStrength(pH);
             double step = next - ionicStrength;
-            double moved = ws.updateSpecific(pH);
+            double moved = ws.updateSpecific(pH, next);
             if (Math.abs(step) <= I_ABSOLUTE + I_RELATIVE * ionicStrength && moved <= SPECIFIC_SETTLED) {
                 return new double[] {pH, next};
             }

@@ -141,7 +141,27 @@ public final class Derivatives {
         return respond(g, new double[nc], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
     }
 
-    /** The standard uncertainty of log10 γ per unit z² behind {@link #activityModel}: the largest of any ion here. */
+    /**
+     * The response to one Pitzer pair without published temperature terms moved to the edge of what their bound allows
+     * at this temperature ({@link Interactions#pairShift}); none where the pair is not used here.
+     */
+    public Response pitzerPair(String cation, String anion) {
+        int nc = total.length;
+        double[] us = new double[p.n];
+        double[] uc = new double[nc];
+        double[] uw = new double[2];
+        if (p.interactions == null
+                || !p.interactions.pairShift(cation, anion, m, mH, mOH, ionM, ionLn, us, uc, uw)) {
+            return new Response(0, 0, 0);
+        }
+        double[] g = new double[p.n];
+        for (int i = 0; i < p.n; i++) {
+            g[i] = Thermo.LN10 * (p.overParts(i, uc) - us[i]);
+        }
+        return respond(g, new double[nc], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
+    }
+
+    /** The standard uncertainty of log10 γ per unit z² behind {@link #activityModel}, of the ions with parameters. */
     public double activityModelUncertainty() {
         return activityUncertainty(new double[p.n], new double[total.length], new double[2]);
     }
@@ -188,8 +208,8 @@ public final class Derivatives {
      */
     private Response respond(double[] g, double[] dT, double dLnH, double dLnOH, double dLnFixed) {
         Move move = response(tangent(g, dT, dLnH, dLnOH, dLnFixed));
-        if (p.interactions == null) {
-            return move.response();
+        if (p.interactions == null || ionicStrength <= IonInteraction.FROM) {
+            return move.response();     // no composition terms below the hand-over, nor a slope of them
         }
         int nc = total.length;
         double[] ds = new double[p.n];

@@ -25,8 +25,6 @@ final class Interactions {
     static final double SIGNIFICANT = 0.05;
 
     final Pitzer.Mixture mixture;
-    /** The same with each pair lacking published slopes moved by their bound: for the uncertainty that leaves. */
-    private final Pitzer.Mixture bounded;
     private final double debyeHuckelA;
     final int ions;
     final int[] speciesIon;      // −1 for a neutral species
@@ -52,11 +50,6 @@ final class Interactions {
         ions = list.size();
         charge = list.stream().mapToInt(Pitzer.Ion::charge).toArray();
         mixture = new Pitzer.Mixture(list, p.kelvin);
-        boolean any = false;
-        for (boolean e : mixture.extrapolated) {
-            any |= e;
-        }
-        bounded = any ? mixture.bounded() : null;
         debyeHuckelA = p.debyeHuckelA;
     }
 
@@ -154,29 +147,23 @@ final class Interactions {
 
     /**
      * The standard uncertainty of log10 γ of every species, component basis and {H+, OH-} at these molalities, into
-     * the last three arrays: for an ion with parameters z²[(1 − w)·Davies' disagreement + w·{@link #PITZER_UNCERTAINTY}] plus w times the change of
-     * its log γ with its pairs' missing slopes at their bound; for one without, z² times Davies' disagreement. All
-     * move together: one systematic error of the model. Returns the largest per unit z².
+     * the last three arrays: for an ion with parameters z²[(1 − w)·Davies' disagreement + w·{@link #PITZER_UNCERTAINTY}];
+     * for one without, z² times Davies' disagreement. All move together: one systematic error of the model (the
+     * missing temperature terms of a pair are constants of their own, {@link #pairShift}). Returns the one per unit
+     * z² of the ions with parameters.
      */
     double uncertainty(double[] m, double mH, double mOH, double[] ionM, double[] ionLn, double[] species,
                        double[] component, double[] water) {
         double ionic = ionMolalities(m, mH, mOH, ionM);
         double[] u = new double[ions];
-        double largest = 0;
+        double perZ2 = 0;
         if (ionic > 0) {
             double w = IonInteraction.weight(ionic);
             double d = IonInteraction.daviesDisagreement(ionic);
-            double[] moved = new double[ions];
-            if (bounded != null) {
-                mixture.lnGamma(ionM, ionLn);
-                bounded.lnGamma(ionM, moved);
-            }
+            perZ2 = (1 - w) * d + w * PITZER_UNCERTAINTY;
             for (int q = 0; q < ions; q++) {
                 double zz = charge[q] * charge[q];
-                u[q] = covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY)
-                        + (bounded == null ? 0 : w * Math.abs(moved[q] - ionLn[q]) / Thermo.LN10)
-                        : zz * d;
-                largest = Math.max(largest, u[q] / zz);
+                u[q] = covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY) : zz * d;
             }
         }
         for (int i = 0; i < species.length; i++) {
@@ -187,7 +174,43 @@ final class Interactions {
         }
         water[0] = u[hydrogenIon];
         water[1] = u[hydroxideIon];
-        return largest;
+        return perZ2;
+    }
+
+    /**
+     * The change of w·log10 γ of every species, component basis and {H+, OH-} at these molalities when the pair of
+     * these ions, which has no published temperature terms, is moved to the edge of what {@link
+     * PitzerParameters#SLOPE_BOUND} allows here, into the last three arrays; false (and zeros) where the pair is not
+     * used here or this is 25 °C.
+     */
+    boolean pairShift(String cation, String anion, double[] m, double mH, double mOH, double[] ionM, double[] ionLn,
+                      double[] species, double[] component, double[] water) {
+        java.util.Arrays.fill(species, 0);
+        java.util.Arrays.fill(component, 0);
+        water[0] = 0;
+        water[1] = 0;
+        int pair = mixture.pair(cation, anion);
+        double w = IonInteraction.weight(ionMolalities(m, mH, mOH, ionM));
+        if (pair < 0 || !mixture.extrapolated[pair] || w == 0) {
+            return false;
+        }
+        double[] moved = new double[ions];
+        mixture.lnGamma(ionM, ionLn);
+        mixture.bounded(pair).lnGamma(ionM, moved);
+        double k = w / Thermo.LN10;
+        double[] d = new double[ions];
+        for (int q = 0; q < ions; q++) {
+            d[q] = covered(q) ? k * (moved[q] - ionLn[q]) : 0;
+        }
+        for (int i = 0; i < species.length; i++) {
+            species[i] = speciesIon[i] < 0 ? 0 : d[speciesIon[i]];
+        }
+        for (int j = 0; j < component.length; j++) {
+            component[j] = componentIon[j] < 0 ? 0 : d[componentIon[j]];
+        }
+        water[0] = d[hydrogenIon];
+        water[1] = d[hydroxideIon];
+        return true;
     }
 
     /** w(I)·Σ m (φ − 1) of Pitzer's equations, mol/kg: its share of the osmolality. */

@@ -35,12 +35,18 @@ public final class Pitzer {
     private static final double J3 = 0.0120;
     private static final double J4 = 0.528;
 
+    /** Sodium chloride at 25 °C, where Davies is compared with Pitzer. */
+    private static final Mixture SODIUM_CHLORIDE_25 = salt("Na+", "Cl-", Thermo.T_REF);
+
     private Pitzer() {
     }
 
     /** Mean activity coefficient of a single salt of these two ions at molality m of the salt. */
     public static double meanActivityCoefficient(String cation, String anion, double m, double kelvin) {
-        Mixture x = salt(cation, anion, kelvin);
+        return meanActivityCoefficient(salt(cation, anion, kelvin), m);
+    }
+
+    private static double meanActivityCoefficient(Mixture x, double m) {
         double[] mol = x.saltMolalities(m);
         double[] ln = new double[2];
         x.lnGamma(mol, ln);
@@ -55,7 +61,8 @@ public final class Pitzer {
 
     /** Mean activity coefficient of sodium chloride at molality m: the reference electrolyte of saline solutions. */
     public static double sodiumChlorideMeanActivityCoefficient(double m, double kelvin) {
-        return meanActivityCoefficient("Na+", "Cl-", m, kelvin);
+        return kelvin == Thermo.T_REF ? meanActivityCoefficient(SODIUM_CHLORIDE_25, m)
+                : meanActivityCoefficient("Na+", "Cl-", m, kelvin);
     }
 
     /** Osmotic coefficient of a single salt of these two ions at molality m of the salt. */
@@ -75,6 +82,29 @@ public final class Pitzer {
         }
         Mixture x = new Mixture(List.of(new Ion("Na+", 1), new Ion("K+", 1), new Ion("Cl-", -1)), kelvin);
         return OptionalDouble.of(1 + x.osmoticExcess(new double[] {na, k, cl}) / (na + k + cl));
+    }
+
+    /**
+     * The cation–anion pairs among these ions whose parameters have no published temperature terms, as "Na+–HPO4-2":
+     * their uncertainty away from 25 °C is a constant of its own in the uncertainty budget.
+     */
+    public static List<String> pairsWithoutTemperatureTerms(List<Ion> ions) {
+        List<String> out = new ArrayList<>();
+        for (Ion c : ions) {
+            for (Ion a : ions) {
+                PitzerParameters.Binary b = c.charge() > 0 && a.charge() < 0
+                        ? PitzerParameters.binary(c.name(), a.name()) : null;
+                if (b != null && !b.hasSlopes()) {
+                    out.add(c.name() + "–" + a.name());
+                }
+            }
+        }
+        return out;
+    }
+
+    /** How far β¹ of a pair without temperature terms may be off at this temperature (kg/mol; see SLOPE_BOUND). */
+    public static double betaOneBound(double kelvin) {
+        return PitzerParameters.SLOPE_BOUND[1] * Math.abs(kelvin - Thermo.T_REF);
     }
 
     /** Where a free ion sits in {@link #osmoticCoefficient}'s arguments: 0 Na+, 1 K+, 2 Cl-; −1 if not covered. */
@@ -155,11 +185,11 @@ public final class Pitzer {
         private final int nuAnion;
 
         public Mixture(List<Ion> ions, double kelvin) {
-            this(ions, kelvin, false);
+            this(ions, kelvin, -1);
         }
 
-        /** @param bounded each pair without published slopes moved by {@link PitzerParameters#SLOPE_BOUND} */
-        private Mixture(List<Ion> ions, double kelvin, boolean bounded) {
+        /** @param bounded the pair (by its index here) moved by {@link PitzerParameters#SLOPE_BOUND}, or −1 */
+        private Mixture(List<Ion> ions, double kelvin, int bounded) {
             this.ions = List.copyOf(ions);
             this.kelvin = kelvin;
             n = ions.size();
@@ -182,7 +212,7 @@ public final class Pitzer {
                     if (b == null || !PitzerParameters.RANGE.contains(kelvin)) {
                         continue;
                     }
-                    double[] at = bounded ? b.bounded(dt) : b.at(dt);
+                    double[] at = pairList.size() == bounded ? b.bounded(dt) : b.at(dt);
                     pairList.add(new double[] {i, j, at[0], at[1], at[2],
                             at[3] / (2 * Math.sqrt(Math.abs(z[i] * z[j]))), b.alpha1(), b.alpha2()});
                     parameterised[i] = true;
@@ -290,9 +320,19 @@ public final class Pitzer {
             return parameterised[ion];
         }
 
-        /** The same ions with each pair that has no published slopes at the edge of what they allow here. */
-        Mixture bounded() {
-            return new Mixture(ions, kelvin, true);
+        /** The same ions with one pair that has no published slopes at the edge of what they allow here. */
+        Mixture bounded(int pair) {
+            return new Mixture(ions, kelvin, pair);
+        }
+
+        /** The index of the pair of these two ions, or −1. */
+        int pair(String cationName, String anionName) {
+            for (int q = 0; q < pairs; q++) {
+                if (ions.get(cation[q]).name().equals(cationName) && ions.get(anion[q]).name().equals(anionName)) {
+                    return q;
+                }
+            }
+            return -1;
         }
 
         /** "Na+–HPO4-2": the ions of a pair, for messages. */

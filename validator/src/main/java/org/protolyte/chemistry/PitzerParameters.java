@@ -21,11 +21,12 @@ final class PitzerParameters {
     static final double[] SLOPE_BOUND = {7.159e-4, 28.60e-4, -18.94e-5};
     /**
      * Where the range of a fit is not given with the values read: the data compiled for the salt by May, Rowland,
-     * Hefter and Königsberger, J. Chem. Eng. Data 56 (2011) 5066 ("Max_C", read in pyEQL's pitzer_activity.tsv), but
-     * not beyond this cap (mol/kg; chosen: the fits here are older than those data), and {@link #NO_RANGE} for a salt
-     * not in that compilation (chosen: the lowest range of the fits here, KHCO3's).
+     * Hefter and Königsberger, J. Chem. Eng. Data 56 (2011) 5066 ("Max_C", read in pyEQL's pitzer_activity.tsv), and
+     * {@link #NO_RANGE} for a salt not in that compilation (chosen: the lowest range of the fits here, KHCO3's). No
+     * pair is used beyond the ionic strength {@link #RANGE_CAP} (mol/kg): the widest range of a fit read here, NaCl's
+     * 6.0 mol/kg (Pitzer 1991, ch. 3, Table 12).
      */
-    static final double RANGE_CAP = 3;
+    static final double RANGE_CAP = 6.0;
     static final double NO_RANGE = 1;
 
     /**
@@ -59,15 +60,14 @@ final class PitzerParameters {
             return v;
         }
 
-        /** The ionic strength of the pure salt of charges zc, za at its highest molality, mol/kg. */
+        /** The ionic strength of the pure salt of charges zc, za at its highest molality, at most RANGE_CAP, mol/kg. */
         double ionicStrengthLimit(int zc, int za) {
             int g = gcd(zc, -za);
-            return 0.5 * maxMolality * ((double) -za / g * zc * zc + (double) zc / g * za * za);
+            return Math.min(RANGE_CAP, 0.5 * maxMolality * ((double) -za / g * zc * zc + (double) zc / g * za * za));
         }
     }
 
     private static final double NONE = Double.NaN;
-    private static final double CAPPED = RANGE_CAP;
 
     static final Map<String, Binary> BINARY;
     private static final Map<String, Double> THETA;
@@ -88,21 +88,21 @@ final class PitzerParameters {
         binary(b, "H+", "Cl-", 0.1775, 0.2945, 0.0008, NONE, NONE, NONE, 4.5,
                 "PM73 Table I (the sign of dCφ/dT differs between reproductions: no slopes used)");
         binary(b, "Na+", "OH-", 0.0864, 0.253, 0.0044, 7.000e-4, 1.340e-4, -18.94e-5, 4.2, "PM73 Table I; slopes P91 Table 12");
-        binary(b, "K+", "OH-", 0.1298, 0.32, 0.0041, NONE, NONE, NONE, CAPPED, "PM73 Table I; range capped (May11 14)");
-        binary(b, "Na+", "H2PO4-", -0.0533, 0.0396, 0.00795, NONE, NONE, NONE, CAPPED, "PM73 Table I; range capped (May11 6.5)");
+        binary(b, "K+", "OH-", 0.1298, 0.32, 0.0041, NONE, NONE, NONE, 14, "PM73 Table I; range May11");
+        binary(b, "Na+", "H2PO4-", -0.0533, 0.0396, 0.00795, NONE, NONE, NONE, 6.5, "PM73 Table I; range May11");
         binary(b, "K+", "H2PO4-", -0.0678, -0.1042, 0.0, 6.045e-4, 28.60e-4, -10.11e-5, 1.8, "PM73 Table I; slopes P91 Table 12");
         binary(b, "Na+", "HPO4-2", -0.0777 * 0.75, 1.954 * 0.75, 0.0554 * 3 / Math.pow(2, 2.5), NONE, NONE, NONE, 2.0,
                 "PM73 Table VI, printed −0.0777, 1.954, 0.0554, unscaled; range May11");
-        binary(b, "K+", "HPO4-2", 0.0330 * 0.75, 1.699 * 0.75, 0.0309 * 3 / Math.pow(2, 2.5), NONE, NONE, NONE, CAPPED,
-                "PM73 Table VI, printed 0.0330, 1.699, 0.0309, unscaled; range capped (May11 7)");
-        binary(b, "Na+", "CH3COO-", 0.1426, 0.3237, -0.00629, NONE, NONE, NONE, CAPPED, "PM73 Table II; range capped (May11 4.5)");
-        binary(b, "K+", "CH3COO-", 0.1587, 0.3251, -0.00660, NONE, NONE, NONE, CAPPED, "PM73 Table II; range capped (May11 3.5)");
+        binary(b, "K+", "HPO4-2", 0.0330 * 0.75, 1.699 * 0.75, 0.0309 * 3 / Math.pow(2, 2.5), NONE, NONE, NONE, 7,
+                "PM73 Table VI, printed 0.0330, 1.699, 0.0309, unscaled; range May11");
+        binary(b, "Na+", "CH3COO-", 0.1426, 0.3237, -0.00629, NONE, NONE, NONE, 4.5, "PM73 Table II; range May11");
+        binary(b, "K+", "CH3COO-", 0.1587, 0.3251, -0.00660, NONE, NONE, NONE, 3.5, "PM73 Table II; range May11");
         binary(b, "Na+", "SO4-2", 0.01958, 1.113, 0.00497, NONE, NONE, NONE, 3.0, "HMW84 (PM73 Table VI unscaled)");
         binary(b, "K+", "SO4-2", 0.04995, 0.7793, 0.0, NONE, NONE, NONE, 2.0, "HMW84 (PM73 Table VI unscaled); range May11");
         binary(b, "Na+", "HCO3-", 0.0277, 0.0411, 0.0, NONE, NONE, NONE, 1.3, "HMW84; range May11");
         binary(b, "K+", "HCO3-", 0.0296, -0.013, -0.008, NONE, NONE, NONE, 1.0, "HMW84; range May11");
-        binary(b, "Na+", "CO3-2", 0.0399, 1.389, 0.0044, NONE, NONE, NONE, CAPPED, "HMW84; range capped (May11 3.115)");
-        binary(b, "K+", "CO3-2", 0.1488, 1.43, -0.0015, NONE, NONE, NONE, CAPPED, "HMW84; range capped (May11 8.102)");
+        binary(b, "Na+", "CO3-2", 0.0399, 1.389, 0.0044, NONE, NONE, NONE, 3.115, "HMW84; range May11");
+        binary(b, "K+", "CO3-2", 0.1488, 1.43, -0.0015, NONE, NONE, NONE, 8.102, "HMW84; range May11");
         binary(b, "Na+", "B(OH)4-", -0.0427, 0.089, 0.0114, NONE, NONE, NONE, NO_RANGE, "FW86; no range known");
         binary(b, "K+", "B(OH)4-", 0.035, 0.14, 0.0, NONE, NONE, NONE, NO_RANGE, "FW86; no range known");
         binary(b, "TrisH+", "Cl-", 0.04181, 0.16024, -0.00132, NONE, NONE, NONE, NO_RANGE, "GT17 Table S6; no range known");

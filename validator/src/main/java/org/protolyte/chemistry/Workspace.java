@@ -92,9 +92,9 @@ final class Workspace {
     }
 
     /** The composition terms from the molalities at this pH and the current coefficients; returns the largest change. */
-    double updateSpecific(double pH) {
-        if (p.interactions == null) {
-            return 0;
+    double updateSpecific(double pH, double ionicStrength) {
+        if (p.interactions == null || !specificOn && ionicStrength <= IonInteraction.FROM) {
+            return 0;           // Davies' own below the hand-over (w and its slope vanish there)
         }
         double[] mm = p.speciation.molalities(this, pH);
         double w = p.interactions.specific(mm, hydrogen(pH), hydroxide(pH), ionMolality, ionLn, nextSpecific,

@@ -18,6 +18,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 import org.protolyte.Protolyte;
 import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.IonInteraction;
 import org.protolyte.analysis.Analyzer;
 import org.protolyte.chemistry.Equilibrium;
 import org.protolyte.chemistry.EquilibriumState;
@@ -32,9 +33,10 @@ import org.protolyte.substance.LibraryLoader;
 import org.protolyte.substance.SubstanceLibrary;
 
 /**
- * The in-process figures for the 8-component HEPES medium and the 30-component basal medium: one equilibrium solve
- * (from scratch, and prepared with a warm start as a study makes them), reading and validation, the analysis, and one
- * whole check (the rules are the rest).
+ * The in-process figures for the 8-component HEPES medium and the 30-component basal medium (or any sample given with
+ * -p sample=): one equilibrium solve (from scratch, and prepared with a warm start as a study makes them), reading and
+ * validation, the analysis, and one whole check (the rules are the rest); the solves and the analysis with either
+ * activity model.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -46,6 +48,10 @@ public class EngineBenchmark {
 
     @Param({"cell-culture-hepes-basal-medium.json", "cell-culture-complete-basal-medium.json"})
     public String sample;
+
+    /** The activity model of the solves and the analysis (a whole check takes the tool's own). */
+    @Param({"IonInteraction", "Davies"})
+    public String model;
 
     private byte[] medium;
     private Recipe recipe;
@@ -69,7 +75,7 @@ public class EngineBenchmark {
         reader = new FormulationReader(schemas);
         recipe = new RecipeResolver(library).resolve(reader.read(new JsonReader().read("m", medium)));
         solution = recipe.solution(Map.of());
-        equilibrium = new Equilibrium(Davies.INSTANCE);
+        equilibrium = new Equilibrium(model.equals("Davies") ? Davies.INSTANCE : IonInteraction.INSTANCE);
         analyzer = new Analyzer(equilibrium);
         prepared = equilibrium.prepare(solution.species(), solution.totals().keySet(), 310.15, Map.of());
         warm = prepared.point(solution.totals(), null);
