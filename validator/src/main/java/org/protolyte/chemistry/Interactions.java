@@ -24,7 +24,10 @@ final class Interactions {
     /** The share of its sign's charge from which an ion's pairs are held to their range (chosen). */
     static final double SIGNIFICANT = 0.05;
 
-    final Pitzer.Mixture mixture;
+    /** Built on first use: below the hand-over a solve never needs it. */
+    private volatile Pitzer.Mixture mixture;
+    private final List<Pitzer.Ion> ionList;
+    private final double kelvin;
     private final double debyeHuckelA;
     final int ions;
     final int[] speciesIon;      // −1 for a neutral species
@@ -49,7 +52,8 @@ final class Interactions {
         hydroxideIon = index("OH-", -1, at, list);
         ions = list.size();
         charge = list.stream().mapToInt(Pitzer.Ion::charge).toArray();
-        mixture = new Pitzer.Mixture(list, p.kelvin);
+        ionList = List.copyOf(list);
+        kelvin = p.kelvin;
         debyeHuckelA = p.debyeHuckelA;
     }
 
@@ -65,7 +69,7 @@ final class Interactions {
                 all += Math.abs(charge[q]) * ionM[q];
             }
         }
-        Pitzer.Mixture x = mixture;
+        Pitzer.Mixture x = mixture();
         for (int q = 0; q < x.pairs; q++) {
             int other = x.cation[q] == ion ? x.anion[q] : x.anion[q] == ion ? x.cation[q] : -1;
             if (other >= 0) {
@@ -86,9 +90,19 @@ final class Interactions {
         return Math.abs(charge[ion]) * ionM[ion] >= SIGNIFICANT * all;
     }
 
+    /** Pitzer's equations for these ions at this temperature (a benign race at most builds it twice). */
+    Pitzer.Mixture mixture() {
+        Pitzer.Mixture m = mixture;
+        if (m == null) {
+            m = new Pitzer.Mixture(ionList, kelvin);
+            mixture = m;
+        }
+        return m;
+    }
+
     /** Whether the ion at this index has Pitzer parameters here; if not, it keeps Davies' γ. */
     boolean covered(int ion) {
-        return mixture.parameterised(ion);
+        return mixture().parameterised(ion);
     }
 
     private static int index(String name, int charge, Map<String, Integer> at, List<Pitzer.Ion> list) {
@@ -124,7 +138,7 @@ final class Interactions {
         double ionic = ionMolalities(m, mH, mOH, ionM);
         double w = IonInteraction.weight(ionic);
         if (w > 0) {
-            mixture.lnGamma(ionM, ionLn);
+            mixture().lnGamma(ionM, ionLn);
             for (int q = 0; q < ions; q++) {
                 if (!covered(q)) {
                     ionLn[q] = Thermo.LN10 * Davies.INSTANCE.log10Gamma(charge[q], ionic, debyeHuckelA);
@@ -163,7 +177,7 @@ final class Interactions {
             perZ2 = (1 - w) * d + w * PITZER_UNCERTAINTY;
             for (int q = 0; q < ions; q++) {
                 double zz = charge[q] * charge[q];
-                u[q] = covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY) : zz * d;
+                u[q] = w > 0 && covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY) : zz * d;
             }
         }
         for (int i = 0; i < species.length; i++) {
@@ -189,14 +203,14 @@ final class Interactions {
         java.util.Arrays.fill(component, 0);
         water[0] = 0;
         water[1] = 0;
-        int pair = mixture.pair(cation, anion);
         double w = IonInteraction.weight(ionMolalities(m, mH, mOH, ionM));
-        if (pair < 0 || !mixture.extrapolated[pair] || w == 0) {
+        int pair = w == 0 ? -1 : mixture().pair(cation, anion);
+        if (pair < 0 || !mixture().extrapolated[pair]) {
             return false;
         }
         double[] moved = new double[ions];
-        mixture.lnGamma(ionM, ionLn);
-        mixture.bounded(pair).lnGamma(ionM, moved);
+        mixture().lnGamma(ionM, ionLn);
+        mixture().bounded(pair).lnGamma(ionM, moved);
         double k = w / Thermo.LN10;
         double[] d = new double[ions];
         for (int q = 0; q < ions; q++) {
@@ -216,6 +230,6 @@ final class Interactions {
     /** w(I)·Σ m (φ − 1) of Pitzer's equations, mol/kg: its share of the osmolality. */
     double osmoticExcess(double[] m, double mH, double mOH, double[] ionM) {
         double w = IonInteraction.weight(ionMolalities(m, mH, mOH, ionM));
-        return w > 0 ? w * mixture.osmoticExcess(ionM) : 0;
+        return w > 0 ? w * mixture().osmoticExcess(ionM) : 0;
     }
 }

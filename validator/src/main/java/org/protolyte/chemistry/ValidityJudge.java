@@ -112,7 +112,7 @@ final class ValidityJudge {
                     + " the buffering without Pitzer parameters against most of the ions of opposite charge here, so "
                     + (bare.size() == 1 ? "it keeps" : "they keep") + " the Davies equation"));
         }
-        Pitzer.Mixture mix = x.mixture;
+        Pitzer.Mixture mix = x.mixture();
         Set<String> extrapolated = new TreeSet<>();
         for (int q = 0; q < mix.pairs; q++) {
             if (!matters[mix.cation[q]] || !matters[mix.anion[q]]) {

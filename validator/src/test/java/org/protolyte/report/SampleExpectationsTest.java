@@ -74,4 +74,25 @@ class SampleExpectationsTest {
         assertEquals(e.status(), r.status().code(), () -> e.file() + ": " + r.findings() + r.diagnostics());
         assertEquals(e.findings(), actual, e.file());
     }
+
+    /**
+     * Every condition of every sample that analyses has a pH, its working solution's too, unless it is below the
+     * solution's freezing point: concentrates included (Pitzer's equations carry them).
+     */
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("expectations")
+    void everyConditionAboveFreezingHasAPh(Expectation e) throws IOException {
+        SchemaCatalog schemas = new SchemaCatalog();
+        Path site = SAMPLES.resolve("site-library/site-substances.json");
+        var library = new LibraryLoader(schemas).addShipped().add(site.toString(), Files.readAllBytes(site), true).build();
+        DocumentReport r = new Protolyte(schemas, library).check(SAMPLES.resolve(e.file()));
+        r.analysis().ifPresent(a -> {
+            List<org.protolyte.analysis.ConditionResult> all = new ArrayList<>(a.conditions());
+            a.working().ifPresent(w -> all.addAll(w.conditions()));
+            for (var c : all) {
+                assertTrue(c.determinate() || c.caveats().stream().anyMatch(x -> x.code().equals("below-freezing-point")),
+                        () -> e.file() + " " + c.condition().name() + ": " + c.caveats());
+            }
+        });
+    }
 }
