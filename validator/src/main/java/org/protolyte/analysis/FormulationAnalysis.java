@@ -27,6 +27,21 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
         }
     }
 
+    /**
+     * The pH change at condition i from the concentrate to its working solution (empty where either has no pH). With
+     * no ion pairs as separate species (Pitzer's parameters hold them), its cause is the activity coefficients' change
+     * with ionic strength, plus the water's and the weak acids' own dilution.
+     */
+    public java.util.OptionalDouble dilutionShift(int i) {
+        if (working.isEmpty() || i >= conditions.size() || i >= working.get().conditions().size()) {
+            return java.util.OptionalDouble.empty();
+        }
+        var c = conditions.get(i).state();
+        var w = working.get().conditions().get(i).state();
+        return c.isPresent() && w.isPresent() ? java.util.OptionalDouble.of(w.get().pH() - c.get().pH())
+                : java.util.OptionalDouble.empty();
+    }
+
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
                 drifts, titratableAcidity, Optional.of(r), working);

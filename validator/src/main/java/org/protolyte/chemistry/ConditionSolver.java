@@ -241,11 +241,10 @@ final class ConditionSolver {
             }
         }
         double total = particles + mH + mOH;
-        OsmoticModel.Osmolality osmolality = p.interactions == null
-                ? OsmoticModel.SALINE.osmolality(p, m, total, ionicStrength)
-                : new OsmoticModel.Osmolality(total + p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA)
-                        + p.interactions.osmoticExcess(m, mH, mOH, ws.ionMolality), p.activity.name());
+        // osmolality = Σ m + Σ m(φ − 1) of the same activity model (Gibbs–Duhem consistent with its γ)
+        double osmolality = total + p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA)
+                + (p.interactions == null ? 0 : p.interactions.osmoticExcess(m, mH, mOH, ws.ionMolality));
         return new EquilibriumState(p.kelvin, pH, ionicStrength, beta, -Math.log10(p.kw), mH, mOH,
-                total, osmolality.value(), osmolality.model(), out, caveats, byComponent, openSet);
+                total, osmolality, p.activity.name(), out, caveats, byComponent, openSet);
     }
 }

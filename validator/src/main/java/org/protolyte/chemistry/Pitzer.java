@@ -2,7 +2,6 @@ package org.protolyte.chemistry;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.OptionalDouble;
 
 /**
  * Pitzer's ion-interaction equations for a mixture of electrolytes, in the form of Harvie, Møller and Weare,
@@ -21,12 +20,6 @@ import java.util.OptionalDouble;
  * (no λ terms: their γ is 1). The parameters are in {@link PitzerParameters}.
  */
 public final class Pitzer {
-
-    /**
-     * Where the saline osmotic coefficient ({@link #osmoticCoefficient(double, double, double, double)}) is given:
-     * within 10 K of 25 °C, where its tests hold it to published tables (none at other temperatures was reachable).
-     */
-    public static final TemperatureRange VALIDITY = TemperatureRange.celsius(15, 35);
 
     static final double B = 1.2;
     /** J(x) of Pitzer (1975), eq. 47: J ≈ x/(4 + C1 x^−C2 exp(−C3 x^C4)); constants from memory. */
@@ -73,18 +66,6 @@ public final class Pitzer {
     }
 
     /**
-     * Osmotic coefficient of a solution of Na+, K+ and Cl- (mol/kg); empty outside {@link #VALIDITY}, where the
-     * parameters of sodium and potassium chloride are not used.
-     */
-    public static OptionalDouble osmoticCoefficient(double na, double k, double cl, double kelvin) {
-        if (!VALIDITY.contains(kelvin)) {
-            return OptionalDouble.empty();
-        }
-        Mixture x = new Mixture(List.of(new Ion("Na+", 1), new Ion("K+", 1), new Ion("Cl-", -1)), kelvin);
-        return OptionalDouble.of(1 + x.osmoticExcess(new double[] {na, k, cl}) / (na + k + cl));
-    }
-
-    /**
      * The cation–anion pairs among these ions whose parameters have no published temperature terms, as "Na+–HPO4-2":
      * their uncertainty away from 25 °C is a constant of its own in the uncertainty budget.
      */
@@ -105,16 +86,6 @@ public final class Pitzer {
     /** How far β¹ of a pair without temperature terms may be off at this temperature (kg/mol; see SLOPE_BOUND). */
     public static double betaOneBound(double kelvin) {
         return PitzerParameters.SLOPE_BOUND[1] * Math.abs(kelvin - Thermo.T_REF);
-    }
-
-    /** Where a free ion sits in {@link #osmoticCoefficient}'s arguments: 0 Na+, 1 K+, 2 Cl-; −1 if not covered. */
-    public static int salineIndex(String ion) {
-        return switch (ion) {
-            case "Na+" -> 0;
-            case "K+" -> 1;
-            case "Cl-" -> 2;
-            default -> -1;
-        };
     }
 
     private static Mixture salt(String cation, String anion, double kelvin) {

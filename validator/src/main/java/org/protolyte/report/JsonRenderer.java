@@ -212,6 +212,14 @@ public final class JsonRenderer {
             o.put("diluent", w.dilution().diluent());
             ArrayNode cs = o.putArray("conditions");
             w.conditions().forEach(c -> cs.add(condition(c, systems, false, w.solution().waterKg())));
+            ArrayNode shifts = o.putArray("pHShiftOnDilution");
+            for (int i = 0; i < a.conditions().size(); i++) {
+                int at = i;
+                a.dilutionShift(i).ifPresent(x -> shifts.addObject()
+                        .put("condition", a.conditions().get(at).condition().name())
+                        .put("change", Numbers.decimals(x, 3))
+                        .put("cause", "the activity coefficients' change with ionic strength"));
+            }
         });
         ArrayNode titrants = n.putArray("titrants");
         for (TitrantResult t : a.titrants()) {

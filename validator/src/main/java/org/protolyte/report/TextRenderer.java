@@ -167,11 +167,20 @@ public final class TextRenderer {
         conditionTable(b, a.conditions(), systems);
         solids(b, a.conditions());
         a.working().ifPresent(w -> {
-            b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s (pH change is from ionic "
-                    + "strength and dilution):%n", Numbers.significant(w.dilution().factor(), 4).toPlainString(),
-                    p(w.dilution().diluent())));
+            b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s:%n",
+                    Numbers.significant(w.dilution().factor(), 4).toPlainString(), p(w.dilution().diluent())));
             conditionTable(b, w.conditions(), systems);
             solids(b, w.conditions());
+            List<String> shifts = new ArrayList<>();
+            for (int i = 0; i < a.conditions().size(); i++) {
+                int at = i;
+                a.dilutionShift(i).ifPresent(x -> shifts.add(String.format(Locale.ROOT, "%s %+.2f",
+                        p(a.conditions().get(at).condition().name()), x)));
+            }
+            if (!shifts.isEmpty()) {
+                b.append("  pH shift on dilution: ").append(String.join(", ", shifts))
+                        .append(" (the activity coefficients' change with ionic strength)").append(NL);
+            }
         });
         for (var d : a.drifts()) {
             String cause = d.co2Change().map(x -> ", mostly the change of " + p(x)).orElseGet(() -> d.system()

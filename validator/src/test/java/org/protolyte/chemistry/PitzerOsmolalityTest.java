@@ -13,8 +13,8 @@ import org.junit.jupiter.api.Test;
  * Pitzer's osmotic coefficient for a mixture of NaCl and KCl, written out term by term from Harvie, Møller and Weare,
  * Geochim. Cosmochim. Acta 48 (1984) 723 (α = 2, b = 1.2; β⁰, β¹, Cφ of Pitzer and Mayorga 1973, Table I, with their
  * temperature derivatives from Pitzer 1991, ch. 3, Table 12, θ(Na,K) = −0.012 and ψ(Na,K,Cl) = −0.0018 of HMW84, all
- * read in the reproduction of those tables in pytzer, mvdh7/pytzer pytzer/tables.py and parameters.py), and where
- * the equilibrium takes it for the osmolality: above Davies' warning limit, with Na+, K+ and Cl- carrying at least three quarters of I, within 15–35 °C.
+ * read in the reproduction of those tables in pytzer, mvdh7/pytzer pytzer/tables.py and parameters.py), and the
+ * osmolality the equilibrium takes from it once Pitzer carries the solution.
  */
 class PitzerOsmolalityTest {
 
@@ -22,8 +22,7 @@ class PitzerOsmolalityTest {
     private static final Component K = new Component("K+", 1);
     private static final Component CL = new Component("Cl-", -1);
     private static final Component SUGAR = new Component("sucrose", 0);
-    private static final Component MG = new Component("Mg+2", 2);
-    private static final Equilibrium DAVIES = new Equilibrium(Davies.INSTANCE);
+    private static final Equilibrium PITZER = new Equilibrium(IonInteraction.INSTANCE);
 
     /** φ − 1 = (2/Σm)[−Aφ I^1.5/(1 + b√I) + Σ m_c m_a (Bφ + Z C) + m_Na m_K (θ + m_Cl ψ)], C = Cφ/2, Z = Σ m|z|. */
     private static double phi(double na, double k, double cl, double kelvin) {
@@ -41,64 +40,52 @@ class PitzerOsmolalityTest {
         return 1 + 2 * sum / (na + k + cl);
     }
 
+    private static final List<Pitzer.Ion> SALINE = List.of(new Pitzer.Ion("Na+", 1), new Pitzer.Ion("K+", 1),
+            new Pitzer.Ion("Cl-", -1));
+
+    private static double mixturePhi(double na, double k, double cl, double kelvin) {
+        return 1 + new Pitzer.Mixture(SALINE, kelvin).osmoticExcess(new double[] {na, k, cl}) / (na + k + cl);
+    }
+
     @Test
     void aMixtureOfSodiumAndPotassiumChloridesTakesTheMixingTerms() {
         for (double[] m : new double[][] {{0.5, 0.5, 1.0}, {1.5, 0.3, 1.8}, {0.2, 1.0, 1.2}}) {
-            assertEquals(phi(m[0], m[1], m[2], 298.15), Pitzer.osmoticCoefficient(m[0], m[1], m[2], 298.15).orElseThrow(),
-                    1e-12);
+            assertEquals(phi(m[0], m[1], m[2], 298.15), mixturePhi(m[0], m[1], m[2], 298.15), 1e-12);
         }
-        assertEquals(phi(0.6, 0.4, 1.0, 308.15), Pitzer.osmoticCoefficient(0.6, 0.4, 1.0, 308.15).orElseThrow(), 1e-12);
+        assertEquals(phi(0.6, 0.4, 1.0, 308.15), mixturePhi(0.6, 0.4, 1.0, 308.15), 1e-12);
+        assertEquals(phi(0.6, 0.4, 1.0, 278.15), mixturePhi(0.6, 0.4, 1.0, 278.15), 1e-12);
     }
 
-    @Test
-    void theParametersHoldFrom15To35Celsius() {
-        assertTrue(Pitzer.osmoticCoefficient(1, 0, 1, 288.15).isPresent());
-        assertTrue(Pitzer.osmoticCoefficient(1, 0, 1, 308.15).isPresent());
-        assertTrue(Pitzer.osmoticCoefficient(1, 0, 1, 288.0).isEmpty());
-        assertTrue(Pitzer.osmoticCoefficient(1, 0, 1, 308.3).isEmpty());
-    }
-
-    private static EquilibriumState saline(double na, double k, double mg, double sugar, double kelvin) {
-        List<Species> species = List.of(Species.free(NA), Species.free(K), Species.free(CL), Species.free(SUGAR),
-                Species.free(MG));
+    private static EquilibriumState saline(double na, double k, double sugar, double kelvin) {
+        List<Species> species = List.of(Species.free(NA), Species.free(K), Species.free(CL), Species.free(SUGAR));
         Map<Component, Double> totals = new LinkedHashMap<>();
         totals.put(NA, na);
         totals.put(K, k);
-        totals.put(MG, mg);
-        totals.put(CL, na + k + 2 * mg);
+        totals.put(CL, na + k);
         totals.put(SUGAR, sugar);
-        return DAVIES.solve(species, totals, kelvin);
-    }
-
-    /** Osmolality = φ·(m_Na + m_K + m_Cl) + the other particles counted as ideal (EquilibriumState). */
-    @Test
-    void aSalineConcentrateCountsItsSaltWithPitzersCoefficientAndTheRestAsIdeal() {
-        EquilibriumState s = saline(0.4, 0.1, 0, 0.1, 298.15);
-        double strong = 0.4 + 0.1 + 0.5;
-        double expected = phi(0.4, 0.1, 0.5, 298.15) * strong + 0.1 + s.hydrogenMolality() + s.hydroxideMolality();
-        assertEquals(expected, s.osmolality(), 1e-12);
-        assertTrue(s.osmolalityModel().startsWith("Pitzer"), s.osmolalityModel());
-    }
-
-    /** Below 0.2 mol/kg the Davies term stands; outside 15–35 °C too. */
-    @Test
-    void belowTheWarningLimitOrOutsideItsTemperaturesDaviesStands() {
-        EquilibriumState dilute = saline(0.15, 0.04, 0, 0.1, 298.15);
-        assertEquals("Davies", dilute.osmolalityModel());
-        assertEquals(dilute.particleMolality()
-                + Davies.INSTANCE.osmoticExcess(dilute.ionicStrength(), Water.debyeHuckelA(298.15)),
-                dilute.osmolality(), 1e-12);
-        assertEquals("Davies", saline(0.4, 0.1, 0, 0.1, 310.15).osmolalityModel());
+        return PITZER.solve(species, totals, kelvin);
     }
 
     /**
-     * Magnesium at 0.05 mol/kg with 0.2 NaCl (Cl- 0.3): I = ½(0.2 + 4·0.05 + 0.3) = 0.35 and Na+ with Cl- carry
-     * ½(0.2 + 0.3)/0.35 = 71 % of it — under three quarters, so no Pitzer; at 0.02 mol/kg Mg with 0.3 NaCl
-     * (Cl- 0.34), I = 0.36 and the share is ½(0.3 + 0.34)/0.36 = 89 %.
+     * From I = 0.3 mol/kg the osmolality is Pitzer's alone: φ·(m_Na + m_K + m_Cl) + the neutral solute, whose γ is 1
+     * (and H+ and OH-, of 1e-7 mol/kg); at 5 °C and 37 °C too, with the chlorides' temperature terms.
      */
     @Test
-    void pitzerTakesOverOnlyWhereSodiumPotassiumAndChlorideCarryThreeQuartersOfTheIonicStrength() {
-        assertEquals("Davies", saline(0.2, 0, 0.05, 0, 298.15).osmolalityModel());
-        assertTrue(saline(0.3, 0, 0.02, 0, 298.15).osmolalityModel().startsWith("Pitzer"));
+    void aSalineConcentrateCountsItsSaltWithPitzersCoefficient() {
+        for (double kelvin : new double[] {278.15, 298.15, 310.15}) {
+            EquilibriumState s = saline(0.4, 0.1, 0.1, kelvin);
+            double expected = phi(0.4, 0.1, 0.5, kelvin) * 1.0 + 0.1;
+            assertEquals(expected, s.osmolality(), 1e-6, () -> kelvin + " K");
+            assertTrue(s.osmolalityModel().contains("Pitzer"), s.osmolalityModel());
+        }
+    }
+
+    /** Below I = 0.1 mol/kg the osmotic term is Davies' own. */
+    @Test
+    void belowTheHandOverDaviesStands() {
+        EquilibriumState dilute = saline(0.06, 0.02, 0.1, 298.15);
+        assertEquals(dilute.particleMolality()
+                + Davies.INSTANCE.osmoticExcess(dilute.ionicStrength(), Water.debyeHuckelA(298.15)),
+                dilute.osmolality(), 1e-12);
     }
 }
