@@ -126,7 +126,7 @@ public final class Derivatives {
     /**
      * The activity model's systematic error: the response to raising log10 γ of every ion by its standard uncertainty
      * ({@link Interactions#uncertainty}; with Davies alone, z² times its disagreement with Pitzer,
-     * {@link IonInteraction#daviesDisagreement}). d ln m_s = ln10 (Σ_j ν_sj u_j − u_s), d ln mH = −ln10 u_H (pH is −log a_H).
+     * {@link IonInteraction#daviesDisagreement}).
      */
     public Response activityModel() {
         int nc = total.length;
@@ -134,11 +134,19 @@ public final class Derivatives {
         double[] uc = new double[nc];
         double[] uw = new double[2];
         activityUncertainty(us, uc, uw);
+        return gammaRaised(us, uc, uw);
+    }
+
+    /**
+     * The response to raising log10 γ of the species, the components' free bases and {H+, OH-} by these amounts:
+     * d ln m_s = ln10 (Σ_j ν_sj u_j − u_s), d ln mH = −ln10 u_H (pH is −log a_H), d ln mOH = −ln10 u_OH.
+     */
+    private Response gammaRaised(double[] us, double[] uc, double[] uw) {
         double[] g = new double[p.n];
         for (int i = 0; i < p.n; i++) {
             g[i] = Thermo.LN10 * (p.overParts(i, uc) - us[i]);
         }
-        return respond(g, new double[nc], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
+        return respond(g, new double[total.length], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
     }
 
     /**
@@ -154,11 +162,7 @@ public final class Derivatives {
                 || !p.interactions.pairShift(cation, anion, m, mH, mOH, ionM, ionLn, us, uc, uw)) {
             return new Response(0, 0, 0);
         }
-        double[] g = new double[p.n];
-        for (int i = 0; i < p.n; i++) {
-            g[i] = Thermo.LN10 * (p.overParts(i, uc) - us[i]);
-        }
-        return respond(g, new double[nc], -Thermo.LN10 * uw[0], -Thermo.LN10 * uw[1], 0);
+        return gammaRaised(us, uc, uw);
     }
 
     /** The standard uncertainty of log10 γ per unit z² behind {@link #activityModel}, of the ions with parameters. */

@@ -147,16 +147,20 @@ final class Interactions {
         } else {
             java.util.Arrays.fill(ionLn, 0);
         }
-        double k = w / Thermo.LN10;
+        spread(ionLn, w / Thermo.LN10, species, component, water);
+        return w;
+    }
+
+    /** k times a value per ion, onto the species (0 for neutrals), each component's free basis and {H+, OH-}. */
+    private void spread(double[] perIon, double k, double[] species, double[] component, double[] water) {
         for (int i = 0; i < species.length; i++) {
-            species[i] = speciesIon[i] < 0 ? 0 : k * ionLn[speciesIon[i]];
+            species[i] = speciesIon[i] < 0 ? 0 : k * perIon[speciesIon[i]];
         }
         for (int j = 0; j < component.length; j++) {
-            component[j] = componentIon[j] < 0 ? 0 : k * ionLn[componentIon[j]];
+            component[j] = componentIon[j] < 0 ? 0 : k * perIon[componentIon[j]];
         }
-        water[0] = k * ionLn[hydrogenIon];
-        water[1] = k * ionLn[hydroxideIon];
-        return w;
+        water[0] = k * perIon[hydrogenIon];
+        water[1] = k * perIon[hydroxideIon];
     }
 
     /**
@@ -180,14 +184,7 @@ final class Interactions {
                 u[q] = w > 0 && covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY) : zz * d;
             }
         }
-        for (int i = 0; i < species.length; i++) {
-            species[i] = speciesIon[i] < 0 ? 0 : u[speciesIon[i]];
-        }
-        for (int j = 0; j < component.length; j++) {
-            component[j] = componentIon[j] < 0 ? 0 : u[componentIon[j]];
-        }
-        water[0] = u[hydrogenIon];
-        water[1] = u[hydroxideIon];
+        spread(u, 1, species, component, water);
         return perZ2;
     }
 
@@ -199,31 +196,19 @@ final class Interactions {
      */
     boolean pairShift(String cation, String anion, double[] m, double mH, double mOH, double[] ionM, double[] ionLn,
                       double[] species, double[] component, double[] water) {
-        java.util.Arrays.fill(species, 0);
-        java.util.Arrays.fill(component, 0);
-        water[0] = 0;
-        water[1] = 0;
         double w = IonInteraction.weight(ionMolalities(m, mH, mOH, ionM));
         int pair = w == 0 ? -1 : mixture().pair(cation, anion);
         if (pair < 0 || !mixture().extrapolated[pair]) {
+            spread(new double[ions], 0, species, component, water);
             return false;
         }
         double[] moved = new double[ions];
         mixture().lnGamma(ionM, ionLn);
         mixture().bounded(pair).lnGamma(ionM, moved);
-        double k = w / Thermo.LN10;
-        double[] d = new double[ions];
         for (int q = 0; q < ions; q++) {
-            d[q] = covered(q) ? k * (moved[q] - ionLn[q]) : 0;
+            moved[q] = covered(q) ? moved[q] - ionLn[q] : 0;
         }
-        for (int i = 0; i < species.length; i++) {
-            species[i] = speciesIon[i] < 0 ? 0 : d[speciesIon[i]];
-        }
-        for (int j = 0; j < component.length; j++) {
-            component[j] = componentIon[j] < 0 ? 0 : d[componentIon[j]];
-        }
-        water[0] = d[hydrogenIon];
-        water[1] = d[hydroxideIon];
+        spread(moved, w / Thermo.LN10, species, component, water);
         return true;
     }
 

@@ -36,7 +36,7 @@ public final class IonInteraction implements ActivityModel {
      */
     public static double daviesDisagreement(double ionicStrength) {
         return Math.abs(Davies.INSTANCE.log10Gamma(1, ionicStrength, Water.debyeHuckelA(Thermo.T_REF))
-                - Math.log10(Pitzer.sodiumChlorideMeanActivityCoefficient(ionicStrength, Thermo.T_REF)));
+                - Math.log10(Pitzer.sodiumChlorideMeanActivityCoefficient(ionicStrength)));
     }
 
     @Override

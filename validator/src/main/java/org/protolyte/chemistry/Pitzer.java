@@ -52,10 +52,9 @@ public final class Pitzer {
         return meanActivityCoefficient(cation, "Cl-", m, kelvin);
     }
 
-    /** Mean activity coefficient of sodium chloride at molality m: the reference electrolyte of saline solutions. */
-    public static double sodiumChlorideMeanActivityCoefficient(double m, double kelvin) {
-        return kelvin == Thermo.T_REF ? meanActivityCoefficient(SODIUM_CHLORIDE_25, m)
-                : meanActivityCoefficient("Na+", "Cl-", m, kelvin);
+    /** Mean activity coefficient of sodium chloride at molality m and 25 °C: the reference electrolyte. */
+    public static double sodiumChlorideMeanActivityCoefficient(double m) {
+        return meanActivityCoefficient(SODIUM_CHLORIDE_25, m);
     }
 
     /** Osmotic coefficient of a single salt of these two ions at molality m of the salt. */

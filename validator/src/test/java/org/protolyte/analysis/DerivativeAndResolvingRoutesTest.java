@@ -17,8 +17,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.protolyte.chemistry.AcidBaseSystem;
-import org.protolyte.chemistry.ActivityModel;
-import org.protolyte.chemistry.IonInteraction;
+import org.protolyte.chemistry.ShiftedDavies;
 import org.protolyte.chemistry.Davies;
 import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.Equilibrium;
@@ -98,48 +97,6 @@ class DerivativeAndResolvingRoutesTest {
         out.add(new Move("activity model", new Equilibrium(new ShiftedDavies(fraction)),
                 new Equilibrium(new ShiftedDavies(-fraction)), -1, 0));
         return out;
-    }
-
-    /**
-     * Davies' equation with every log10 γ raised by {@code delta} times its standard uncertainty, z² times Davies'
-     * disagreement with Pitzer: the activity model moved as the budget moves it, solved again.
-     */
-    record ShiftedDavies(double delta) implements ActivityModel {
-        private static double u(double i) {
-            return IonInteraction.daviesDisagreement(i);
-        }
-
-        @Override
-        public double log10Gamma(int charge, double i, double a) {
-            return Davies.INSTANCE.log10Gamma(charge, i, a) + delta * charge * charge * u(i);
-        }
-
-        @Override
-        public double log10GammaSlope(int charge, double i, double a) {
-            double h = 1e-6 * Math.max(i, 1e-3);
-            return Davies.INSTANCE.log10GammaSlope(charge, i, a)
-                    + delta * charge * charge * (u(i + h) - u(i - h)) / (2 * h);
-        }
-
-        @Override
-        public double osmoticExcess(double i, double a) {
-            return Davies.INSTANCE.osmoticExcess(i, a);
-        }
-
-        @Override
-        public double warnAbove() {
-            return Davies.INSTANCE.warnAbove();
-        }
-
-        @Override
-        public double indeterminateAbove() {
-            return Davies.INSTANCE.indeterminateAbove();
-        }
-
-        @Override
-        public String name() {
-            return "Davies, shifted";
-        }
     }
 
     /** {pH[], β per litre[]} of every condition (then the working solution's) with the q.s. dosed again; null if not. */

@@ -81,4 +81,29 @@ class PitzerValidityTest {
         EquilibriumState dilute = solve(both, 0.08, 0.04, 298.15);
         assertTrue(dilute.caveats().isEmpty(), dilute.caveats()::toString);
     }
+
+    /**
+     * Davies' equation with every log10 γ raised by δ·z²·d(I), d its disagreement with Pitzer: solved at ±δ, the pH
+     * moves as {@link Derivatives#activityModel} says (first order, central difference; derived). A phosphate buffer in
+     * 0.15 mol/kg NaCl, where d ≈ 0.003.
+     */
+    @Test
+    void daviesAloneMovesEveryIonByItsChargeSquaredTimesItsDisagreement() {
+        AcidBaseSystem phosphate = LIBRARY.system("phosphate").orElseThrow();
+        List<Species> species = new ArrayList<>(phosphate.species());
+        species.add(Species.free(NA));
+        species.add(Species.free(CL));
+        Map<Component, Double> totals = Map.of(phosphate.basis(), 0.02, NA, 0.18, CL, 0.15);
+        Equilibrium.Prepared p = new Equilibrium(Davies.INSTANCE).prepare(species, totals.keySet(), 298.15, Map.of());
+        p.point(totals, null);
+        Derivatives.Response r = p.derivatives().activityModel();
+        double delta = 1e-3;
+        double up = new Equilibrium(new ShiftedDavies(delta)).solve(species, totals, 298.15).pH();
+        double down = new Equilibrium(new ShiftedDavies(-delta)).solve(species, totals, 298.15).pH();
+        double expected = (up - down) / (2 * delta);
+        assertTrue(expected > 0.005, "the pH rises with the γ of the more charged base form: " + expected);
+        org.junit.jupiter.api.Assertions.assertEquals(expected, r.pH(), 1e-3 * expected);
+        org.junit.jupiter.api.Assertions.assertEquals(IonInteraction.daviesDisagreement(
+                p.point(totals, null).ionicStrength()), p.derivatives().activityModelUncertainty(), 1e-15);
+    }
 }

@@ -98,7 +98,8 @@ class ConcentratedSolutionsTest {
     void theActivityModelsUncertaintyIsInThePlusMinus() {
         ConditionResult c = phosphateIn(1.0, 25);
         Uncertainty.Contribution a = activityModel(c);
-        assertEquals(3 * 0.0054, Math.abs(a.pHChange()), 0.1 * 3 * 0.0054);
+        // raising log γ by z²u: a_H = Ka·m_A γ_A/(m_B γ_B) falls by (4 − 1)u, so the pH rises
+        assertEquals(3 * 0.0054, a.pHChange(), 0.1 * 3 * 0.0054);
         assertTrue(c.uncertainty().orElseThrow().pH() >= Math.abs(a.pHChange()));
     }
 
@@ -124,8 +125,13 @@ class ConcentratedSolutionsTest {
                 .filter(x -> x.constant().startsWith("Pitzer Na+–HPO4-2")).findFirst()
                 .orElseThrow(() -> new AssertionError(away.uncertainty().toString()));
         assertEquals(0.057, hydrogenPhosphate.standardUncertainty(), 0.001);
-        assertTrue(Math.abs(hydrogenPhosphate.pHChange()) > 0.005 && Math.abs(hydrogenPhosphate.pHChange()) < 0.03,
+        // a larger β of Na+–HPO4-2 raises ln γ of the base form (2 m_Na ΔB > 0), so the pH rises; the same move of
+        // Na+–H2PO4- raises ln γ of the acid form, so it falls
+        assertTrue(hydrogenPhosphate.pHChange() > 0.005 && hydrogenPhosphate.pHChange() < 0.03,
                 hydrogenPhosphate::toString);
+        Uncertainty.Contribution dihydrogenPhosphate = away.uncertainty().orElseThrow().contributions().stream()
+                .filter(x -> x.constant().startsWith("Pitzer Na+–H2PO4-")).findFirst().orElseThrow();
+        assertTrue(dihydrogenPhosphate.pHChange() < -0.005, dihydrogenPhosphate::toString);
         assertTrue(away.uncertainty().orElseThrow().pH() > at25.uncertainty().orElseThrow().pH(),
                 () -> away.uncertainty() + " against " + at25.uncertainty());
     }

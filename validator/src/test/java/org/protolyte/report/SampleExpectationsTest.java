@@ -62,13 +62,18 @@ class SampleExpectationsTest {
         assertTrue(expectations().stream().filter(e -> e.status().equals("fail")).count() >= 2);
     }
 
-    @ParameterizedTest(name = "{0}")
-    @MethodSource("expectations")
-    void sampleGivesTheFindingsItsEntrySays(Expectation e) throws IOException {
+    /** The sample checked with the shipped library and the samples' site library. */
+    private static DocumentReport check(Expectation e) throws IOException {
         SchemaCatalog schemas = new SchemaCatalog();
         Path site = SAMPLES.resolve("site-library/site-substances.json");
         var library = new LibraryLoader(schemas).addShipped().add(site.toString(), Files.readAllBytes(site), true).build();
-        DocumentReport r = new Protolyte(schemas, library).check(SAMPLES.resolve(e.file()));
+        return new Protolyte(schemas, library).check(SAMPLES.resolve(e.file()));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("expectations")
+    void sampleGivesTheFindingsItsEntrySays(Expectation e) throws IOException {
+        DocumentReport r = check(e);
         Set<String> actual = new TreeSet<>();
         r.findings().forEach(f -> actual.add(f.rule() + " (" + f.severity().code() + ")"));
         assertEquals(e.status(), r.status().code(), () -> e.file() + ": " + r.findings() + r.diagnostics());
@@ -82,10 +87,7 @@ class SampleExpectationsTest {
     @ParameterizedTest(name = "{0}")
     @MethodSource("expectations")
     void everyConditionAboveFreezingHasAPh(Expectation e) throws IOException {
-        SchemaCatalog schemas = new SchemaCatalog();
-        Path site = SAMPLES.resolve("site-library/site-substances.json");
-        var library = new LibraryLoader(schemas).addShipped().add(site.toString(), Files.readAllBytes(site), true).build();
-        DocumentReport r = new Protolyte(schemas, library).check(SAMPLES.resolve(e.file()));
+        DocumentReport r = check(e);
         r.analysis().ifPresent(a -> {
             List<org.protolyte.analysis.ConditionResult> all = new ArrayList<>(a.conditions());
             a.working().ifPresent(w -> all.addAll(w.conditions()));
