@@ -325,10 +325,6 @@ public final class JsonRenderer {
             o.putNull("pH");
             o.putNull("bufferCapacity");
             o.putNull("ionicStrength");
-            c.state().filter(s -> s.osmolalityModel().startsWith("Pitzer")).ifPresent(s -> {
-                o.put("osmolality", Numbers.significant(s.osmolality() * 1000, 4));
-                o.put("osmolalityModel", s.osmolalityModel());
-            });
             o.putArray("species");
         }
         return o;

@@ -292,11 +292,8 @@ public final class TextRenderer {
                         Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
                         speciation(s, systems)));
             } else {
-                // a saline concentrate's osmolality stands where its pH cannot (Pitzer holds to several mol/kg)
-                String osmolality = c.state().filter(s -> s.osmolalityModel().startsWith("Pitzer"))
-                        .map(s -> String.format(Locale.ROOT, "%.0f", s.osmolality() * 1000)).orElse("—");
                 b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
-                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—", osmolality));
+                        Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));
             }
         }
     }
