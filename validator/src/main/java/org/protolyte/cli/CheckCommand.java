@@ -46,6 +46,13 @@ public final class CheckCommand implements Callable<Integer> {
     @Option(names = "--format", paramLabel = "FORMAT", description = "text (default), json, or sarif (SARIF 2.1.0, for code-review platforms).")
     Format format = Format.text;
 
+    @Option(names = "--species", paramLabel = "WHICH",
+            description = "Forms per condition in the text report: main (default: the systems that carry 95 % of the "
+                    + "buffer capacity, two forms each) or all.")
+    SpeciesShown species = SpeciesShown.main;
+
+    enum SpeciesShown { main, all }
+
     @Option(names = "--fail-on", paramLabel = "SEVERITY",
             description = "Lowest finding severity that fails a document: error (default), warning or note.")
     Severity failOn = Severity.ERROR;
@@ -159,7 +166,7 @@ public final class CheckCommand implements Callable<Integer> {
                 sarif.end(summary);
             }
             case text -> {
-                TextRenderer text = new TextRenderer();
+                TextRenderer text = new TextRenderer(species == SpeciesShown.all);
                 out.write(text.header(summary.toolVersion(), summary.asOf()));
                 protolyte.stream(inputs, summary, r -> write(() -> out.write(text.document(r))));
                 out.write(text.footer(summary.skipped(), summary.documents(), summary::count));

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import org.protolyte.analysis.BufferContribution;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.TitrantResult;
@@ -22,6 +23,22 @@ import org.protolyte.rules.Finding;
 public final class TextRenderer {
 
     private static final String NL = System.lineSeparator();
+    /** The systems shown per condition carry this share of the buffer capacity; the rest behind "--species all". */
+    private static final double SHOWN_SHARE = 0.95;
+    /** Forms shown per system, the largest first. */
+    private static final int SHOWN_FORMS = 2;
+
+    private final boolean allSpecies;
+
+    /** The main forms only: the systems that carry 95 % of β, at most two forms each. */
+    public TextRenderer() {
+        this(false);
+    }
+
+    /** @param allSpecies every system and every form of at least 5 % */
+    public TextRenderer(boolean allSpecies) {
+        this.allSpecies = allSpecies;
+    }
 
     public String render(RunReport run) {
         StringBuilder b = new StringBuilder();
@@ -164,12 +181,12 @@ public final class TextRenderer {
                     "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
         Systems systems = new Systems(a.recipe().library());
-        conditionTable(b, a.conditions(), systems);
+        conditionTable(b, a.conditions(), systems, allSpecies);
         solids(b, a.conditions());
         a.working().ifPresent(w -> {
             b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s:%n",
                     Numbers.significant(w.dilution().factor(), 4).toPlainString(), p(w.dilution().diluent())));
-            conditionTable(b, w.conditions(), systems);
+            conditionTable(b, w.conditions(), systems, allSpecies);
             solids(b, w.conditions());
             List<String> shifts = new ArrayList<>();
             for (int i = 0; i < a.conditions().size(); i++) {
@@ -230,25 +247,53 @@ public final class TextRenderer {
                 : String.format(Locale.ROOT, "%.3g mmol/L of strong %s", mmol.getAsDouble(), what);
     }
 
-    /** The main forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %". */
-    private static String speciation(EquilibriumState s, Systems systems) {
-        Map<String, List<String>> bySystem = new LinkedHashMap<>();
+    /**
+     * The forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %": unless all are
+     * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
+     * the rest.
+     */
+    private static String speciation(ConditionResult c, EquilibriumState s, Systems systems, boolean all) {
+        Map<String, List<SpeciesAmount>> bySystem = new LinkedHashMap<>();
         for (SpeciesAmount sp : s.species()) {
             if (systems.isSystem(sp.component()) && sp.fractionOfComponent() >= 0.05) {
-                bySystem.computeIfAbsent(p(systems.of(sp.component())), k -> new ArrayList<>())
-                        .add(String.format(Locale.ROOT, "%s %.0f %%", p(sp.species().name()),
-                                sp.fractionOfComponent() * 100));
+                bySystem.computeIfAbsent(systems.of(sp.component()), k -> new ArrayList<>()).add(sp);
+            }
+        }
+        List<String> shown = new ArrayList<>(bySystem.keySet());
+        if (!all) {
+            shown.clear();
+            double carried = 0;
+            for (BufferContribution x : c.buffers()) {     // largest first
+                if (carried >= SHOWN_SHARE) {
+                    break;
+                }
+                if (bySystem.containsKey(x.system())) {
+                    shown.add(x.system());
+                }
+                carried += x.share();
             }
         }
         List<String> parts = new ArrayList<>();
-        bySystem.forEach((k, v) -> parts.add(k + ": " + String.join(", ", v)));
+        for (String system : shown) {
+            List<SpeciesAmount> forms = new ArrayList<>(bySystem.get(system));
+            if (!all) {
+                forms.sort(java.util.Comparator.comparingDouble(SpeciesAmount::fractionOfComponent).reversed());
+                forms = forms.subList(0, Math.min(SHOWN_FORMS, forms.size()));
+            }
+            parts.add(p(system) + ": " + String.join(", ", forms.stream().map(sp -> String.format(Locale.ROOT,
+                    "%s %.0f %%", p(sp.species().name()), sp.fractionOfComponent() * 100)).toList()));
+        }
+        int hidden = bySystem.size() - shown.size();
+        if (hidden > 0) {
+            parts.add(String.format(Locale.ROOT, "+%d system%s (--species all)", hidden, hidden == 1 ? "" : "s"));
+        }
         Map<Component, Double> totals = Complexes.totals(s);
         java.util.Set<Component> bound = new java.util.HashSet<>();
         s.species().stream().filter(x -> x.species().isComplex()).forEach(x -> bound.addAll(x.species().components().keySet()));
         for (SpeciesAmount sp : s.species()) {      // a metal or polyol that complexes bind: its free share
-            Component c = sp.component();
-            if (!systems.isSystem(c) && bound.contains(c) && !sp.species().isComplex()) {
-                parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", p(c.name()), 100 * sp.molality() / totals.get(c)));
+            Component m = sp.component();
+            if (!systems.isSystem(m) && bound.contains(m) && !sp.species().isComplex()) {
+                parts.add(String.format(Locale.ROOT, "%s: %.0f %% free", p(m.name()), 100 * sp.molality() / totals.get(m)));
             }
         }
         return String.join("; ", parts);
@@ -277,7 +322,8 @@ public final class TextRenderer {
     }
 
     /** One row per condition: temperature, pH with its uncertainty, β, I, osmolality and the main forms. */
-    private static void conditionTable(StringBuilder b, List<ConditionResult> conditions, Systems systems) {
+    private static void conditionTable(StringBuilder b, List<ConditionResult> conditions, Systems systems,
+                                       boolean allSpecies) {
         b.append(String.format(Locale.ROOT, "  %-14s %8s %13s %14s %11s %9s%n", "condition", "T (°C)", "pH",
                 "β (mmol/L/pH)", "I (mol/kg)", "mOsm/kg"));
         for (ConditionResult c : conditions) {
@@ -290,7 +336,7 @@ public final class TextRenderer {
                         Numbers.celsius(c.condition().kelvin()), pH,
                         Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
                         Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
-                        speciation(s, systems)));
+                        speciation(c, s, systems, allSpecies)));
             } else {
                 b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
                         Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));

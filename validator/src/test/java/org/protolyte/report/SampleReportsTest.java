@@ -57,4 +57,22 @@ class SampleReportsTest {
         r.analysis().orElseThrow().conditions().forEach(c -> assertTrue(text.contains(c.condition().name())));
         assertTrue(text.contains("decision aid"));
     }
+
+    /**
+     * The basal medium's condition lines name the systems that carry 95 % of β (carbonate, HEPES, and phosphate where
+     * it counts), two forms each, and count the rest; --species all lists every system, the amino acids too.
+     */
+    @org.junit.jupiter.api.Test
+    void theTextReportShowsTheMainSystemsUnlessAllAreAskedFor() {
+        RunReport run = PROTOLYTE.check(List.of(Path.of(System.getProperty("protolyte.projectRoot", ".."),
+                "sample-formulations", "cell-culture-complete-basal-medium.json")));
+        String main = new TextRenderer().render(run);
+        String all = new TextRenderer(true).render(run);
+        String preparation = main.lines().filter(l -> l.startsWith("  preparation ")).findFirst().orElseThrow();
+        assertTrue(preparation.contains("carbonate: HCO3- 85 %, CO2(aq) 14 %"), preparation);
+        assertTrue(preparation.matches(".*; \\+\\d+ systems \\(--species all\\);.*"), preparation);
+        assertTrue(!preparation.contains("lysine"), preparation);
+        String everything = all.lines().filter(l -> l.startsWith("  preparation ")).findFirst().orElseThrow();
+        assertTrue(everything.contains("lysine: H2Lys+ 99 %") && !everything.contains("--species all"), everything);
+    }
 }
