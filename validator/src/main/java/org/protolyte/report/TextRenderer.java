@@ -199,7 +199,11 @@ public final class TextRenderer {
                         .append(" (the activity coefficients' change with ionic strength)").append(NL);
             }
         });
+        String first = a.conditions().isEmpty() ? "" : a.conditions().get(0).condition().name();
         for (var d : a.drifts()) {
+            if (!d.from().equals(first)) {
+                continue;       // the first condition (where it is made) to each other; every pair is in JSON
+            }
             String cause = d.co2Change().map(x -> ", mostly the change of " + p(x)).orElseGet(() -> d.system()
                     .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", p(x), d.dpKadT())).orElse(""));
             b.append(String.format(Locale.ROOT, "  drift %s → %s: %+.2f pH%s%n", p(d.from()), p(d.to()), d.change(), cause));

@@ -75,4 +75,15 @@ class SampleReportsTest {
         String everything = all.lines().filter(l -> l.startsWith("  preparation ")).findFirst().orElseThrow();
         assertTrue(everything.contains("lysine: H2Lys+ 99 %") && !everything.contains("--species all"), everything);
     }
+
+    /** Drift from the first condition (where it is made) to each other one in text; every pair stays in JSON. */
+    @org.junit.jupiter.api.Test
+    void theTextReportGivesTheDriftFromTheFirstCondition() {
+        RunReport run = PROTOLYTE.check(List.of(Path.of(System.getProperty("protolyte.projectRoot", ".."),
+                "sample-formulations", "ophthalmic-borate-mannitol-drops.json")));
+        String text = new TextRenderer().render(run);
+        assertTrue(text.contains("drift preparation → storage") && text.contains("drift preparation → use"), text);
+        assertTrue(!text.contains("drift storage → use"), text);
+        assertTrue(new JsonRenderer().render(run).contains("\"from\" : \"storage\""));
+    }
 }
