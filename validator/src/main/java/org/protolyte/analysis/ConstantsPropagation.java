@@ -57,7 +57,7 @@ final class ConstantsPropagation {
         }
     }
 
-    /** The activity model's systematic error, reported per unit z² of log10 γ (the largest of any ion). */
+    /** The activity model's systematic error, reported per unit z² of log10 γ of the ions with parameters. */
     private static final Move ACTIVITY_MODEL = new Move() {
         @Override
         public Derivatives.Response at(Derivatives d, double kelvin) {
