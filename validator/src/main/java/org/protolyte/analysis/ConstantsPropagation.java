@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.ActivityModel;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.Derivatives;
@@ -76,11 +77,11 @@ final class ConstantsPropagation {
     }
 
     /** A Pitzer pair without temperature terms: its β moved to their bound at the state's temperature. */
-    private static Move pitzerPair(String cation, String anion) {
+    private static Move pitzerPair(Pitzer.Pair pair) {
         return new Move() {
             @Override
             public Derivatives.Response at(Derivatives d, double kelvin) {
-                return d.pitzerPair(cation, anion);
+                return d.pitzerPair(pair.cation(), pair.anion());
             }
 
             @Override
@@ -97,9 +98,9 @@ final class ConstantsPropagation {
 
     /**
      * The constants whose uncertainties count for this recipe, in a fixed order (systems by name); with Pitzer's
-     * equations ({@code pitzer}), each pair of the recipe's ions whose parameters have no temperature terms.
+     * equations ({@link IonInteraction}), each pair of the recipe's ions whose parameters have no temperature terms.
      */
-    static List<Perturbation> perturbations(Recipe recipe, Solution solution, boolean pitzer) {
+    static List<Perturbation> perturbations(Recipe recipe, Solution solution, ActivityModel activity) {
         List<Perturbation> out = new ArrayList<>();
         boolean anyCo2 = recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent());
         Optional<AcidBaseSystem> carbonDioxide = recipe.library().carbonDioxide();
@@ -136,7 +137,7 @@ final class ConstantsPropagation {
         out.add(new Perturbation("pKw", Equilibrium.PKW_UNCERTAINTY,
                 (d, kelvin) -> scaled(d.pKw(), Equilibrium.PKW_UNCERTAINTY), -1, 0));
         out.add(new Perturbation("activity model (log10 γ per z²)", 0, ACTIVITY_MODEL, -1, 0));
-        if (pitzer) {
+        if (activity instanceof IonInteraction) {
             java.util.Set<Pitzer.Ion> ions = new java.util.LinkedHashSet<>();
             for (Species s : solution.species()) {
                 if (s.charge() != 0) {
@@ -145,10 +146,9 @@ final class ConstantsPropagation {
             }
             ions.add(new Pitzer.Ion("H+", 1));
             ions.add(new Pitzer.Ion("OH-", -1));
-            for (String pair : Pitzer.pairsWithoutTemperatureTerms(List.copyOf(ions))) {
-                String[] two = pair.split("–");
-                out.add(new Perturbation("Pitzer " + pair + " (25 °C values; β¹ kg/mol)", 0,
-                        pitzerPair(two[0], two[1]), -1, 0));
+            for (Pitzer.Pair pair : Pitzer.pairsWithoutTemperatureTerms(List.copyOf(ions))) {
+                out.add(new Perturbation("Pitzer " + pair.name() + " (25 °C values; β¹ kg/mol)", 0, pitzerPair(pair),
+                        -1, 0));
             }
         }
         return out;
@@ -188,8 +188,7 @@ final class ConstantsPropagation {
     List<ConditionResult> apply(Recipe recipe, Solution concentrate, List<ConditionResult> results,
                                 List<Solution> solutions, List<Optional<Derivatives>> derivatives,
                                 List<TitrantResult> titrants) {
-        List<Perturbation> perturbations = perturbations(recipe, concentrate,
-                analyzer.equilibrium().activityModel() instanceof IonInteraction);
+        List<Perturbation> perturbations = perturbations(recipe, concentrate, analyzer.equilibrium().activityModel());
         Optional<TitrantResult> dosed = titrants.stream()
                 .filter(t -> t.used() && t.unreachable().isEmpty() && t.moles() > 0).findFirst();
         int n = results.size();

@@ -11,8 +11,8 @@ import java.util.function.IntConsumer;
 import org.apache.commons.math3.random.RandomGenerator;
 import org.apache.commons.math3.random.Well19937c;
 import org.apache.commons.math3.stat.descriptive.DescriptiveStatistics;
+import org.protolyte.chemistry.ActivityModel;
 import org.protolyte.chemistry.Equilibrium;
-import org.protolyte.chemistry.IonInteraction;
 import org.protolyte.chemistry.IndeterminateException;
 import org.protolyte.document.Formulation;
 import org.protolyte.analysis.BatchSampler.Nominal;
@@ -113,7 +113,7 @@ public final class Robustness {
         DescriptiveStatistics[] systematic;
         try {
             systematic = systematic(recipe, settings, random, n, sampler, nominalDose,
-                    analyzer.equilibrium().activityModel() instanceof IonInteraction);
+                    analyzer.equilibrium().activityModel());
         } catch (IndeterminateException e) {
             // caught: the systematic band is not shown (NaN), and the reason is the study's first failure
             systematic = stats(n);
@@ -168,9 +168,10 @@ public final class Robustness {
      * prediction itself. Linear in the constants, as the report's uncertainty budget is.
      */
     private static DescriptiveStatistics[] systematic(Recipe recipe, Settings settings, RandomGenerator random, int n,
-                                                      BatchSampler sampler, Nominal nominalDose, boolean pitzer) {
+                                                      BatchSampler sampler, Nominal nominalDose,
+                                                      ActivityModel activity) {
         List<ConstantsPropagation.Perturbation> constants = ConstantsPropagation.perturbations(recipe,
-                recipe.solution(nominalDose.doses(recipe)), pitzer);
+                recipe.solution(nominalDose.doses(recipe)), activity);
         double[][] response = sampler.responses(constants);     // throws where the nominal batch is unsolved
         double[] nominal = ((BatchSampler.Solved) sampler.nominal()).pH();
         DescriptiveStatistics[] out = stats(n);

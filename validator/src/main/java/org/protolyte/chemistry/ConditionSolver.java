@@ -194,10 +194,14 @@ final class ConditionSolver {
         for (int i = 0; i < p.n; i++) {
             particles += m[i];
         }
-        double excess = p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA) + (p.interactions == null ? 0
-                : p.interactions.osmoticExcess(m, ws.hydrogen(pH), ws.hydroxide(pH), ws.ionMolality));
         return new Equilibrium.Point(pH, ionicStrength, Thermo.LN10 * p.speciation.bufferSum(ws, pH),
-                particles + excess);
+                particles + osmoticExcess(m, ws.hydrogen(pH), ws.hydroxide(pH), ionicStrength));
+    }
+
+    /** Σ m(φ − 1) of the activity model, Gibbs–Duhem consistent with its γ: osmolality = Σ m + this. */
+    private double osmoticExcess(double[] m, double mH, double mOH, double ionicStrength) {
+        return p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA)
+                + (p.interactions == null ? 0 : p.interactions.osmoticExcess(m, mH, mOH, ws.ionMolality));
     }
 
     private EquilibriumState state(double pH, double ionicStrength, List<Caveat> caveats) {
@@ -241,9 +245,7 @@ final class ConditionSolver {
             }
         }
         double total = particles + mH + mOH;
-        // osmolality = Σ m + Σ m(φ − 1) of the same activity model (Gibbs–Duhem consistent with its γ)
-        double osmolality = total + p.activity.osmoticExcess(ionicStrength, p.debyeHuckelA)
-                + (p.interactions == null ? 0 : p.interactions.osmoticExcess(m, mH, mOH, ws.ionMolality));
+        double osmolality = total + osmoticExcess(m, mH, mOH, ionicStrength);
         return new EquilibriumState(p.kelvin, pH, ionicStrength, beta, -Math.log10(p.kw), mH, mOH,
                 total, osmolality, p.activity.name(), out, caveats, byComponent, openSet);
     }

@@ -62,13 +62,8 @@ final class Interactions {
      * parameters with, at these ion molalities; 1 where there is none.
      */
     double coveredShare(int ion, double[] ionM) {
-        double all = 0;
+        double all = chargeOfSign(-Integer.signum(charge[ion]), ionM);
         double with = 0;
-        for (int q = 0; q < ions; q++) {
-            if (charge[q] * charge[ion] < 0) {
-                all += Math.abs(charge[q]) * ionM[q];
-            }
-        }
         Pitzer.Mixture x = mixture();
         for (int q = 0; q < x.pairs; q++) {
             int other = x.cation[q] == ion ? x.anion[q] : x.anion[q] == ion ? x.cation[q] : -1;
@@ -81,13 +76,18 @@ final class Interactions {
 
     /** Whether an ion carries at least {@link #SIGNIFICANT} of the charge of its sign. */
     boolean significant(int ion, double[] ionM) {
-        double all = 0;
+        return Math.abs(charge[ion]) * ionM[ion] >= SIGNIFICANT * chargeOfSign(Integer.signum(charge[ion]), ionM);
+    }
+
+    /** Σ |z| m of the ions of this sign (+1 or −1). */
+    private double chargeOfSign(int sign, double[] ionM) {
+        double sum = 0;
         for (int q = 0; q < ions; q++) {
-            if (charge[q] * charge[ion] > 0) {
-                all += Math.abs(charge[q]) * ionM[q];
+            if (Integer.signum(charge[q]) == sign) {
+                sum += Math.abs(charge[q]) * ionM[q];
             }
         }
-        return Math.abs(charge[ion]) * ionM[ion] >= SIGNIFICANT * all;
+        return sum;
     }
 
     /** Pitzer's equations for these ions at this temperature (a benign race at most builds it twice). */
@@ -181,7 +181,7 @@ final class Interactions {
             perZ2 = (1 - w) * d + w * PITZER_UNCERTAINTY;
             for (int q = 0; q < ions; q++) {
                 double zz = charge[q] * charge[q];
-                u[q] = w > 0 && covered(q) ? zz * ((1 - w) * d + w * PITZER_UNCERTAINTY) : zz * d;
+                u[q] = zz * (w > 0 && covered(q) ? perZ2 : d);
             }
         }
         spread(u, 1, species, component, water);

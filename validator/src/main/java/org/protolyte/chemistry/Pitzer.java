@@ -64,18 +64,26 @@ public final class Pitzer {
         return 1 + x.osmoticExcess(mol) / (mol[0] + mol[1]);
     }
 
+    /** A cation and an anion, by their names in the substance library. */
+    public record Pair(String cation, String anion) {
+        /** "Na+–HPO4-2". */
+        public String name() {
+            return cation + "–" + anion;
+        }
+    }
+
     /**
-     * The cation–anion pairs among these ions whose parameters have no published temperature terms, as "Na+–HPO4-2":
-     * their uncertainty away from 25 °C is a constant of its own in the uncertainty budget.
+     * The cation–anion pairs among these ions whose parameters have no published temperature terms: their uncertainty
+     * away from 25 °C is a constant of its own in the uncertainty budget.
      */
-    public static List<String> pairsWithoutTemperatureTerms(List<Ion> ions) {
-        List<String> out = new ArrayList<>();
+    public static List<Pair> pairsWithoutTemperatureTerms(List<Ion> ions) {
+        List<Pair> out = new ArrayList<>();
         for (Ion c : ions) {
             for (Ion a : ions) {
                 PitzerParameters.Binary b = c.charge() > 0 && a.charge() < 0
                         ? PitzerParameters.binary(c.name(), a.name()) : null;
                 if (b != null && !b.hasSlopes()) {
-                    out.add(c.name() + "–" + a.name());
+                    out.add(new Pair(c.name(), a.name()));
                 }
             }
         }
@@ -307,7 +315,7 @@ public final class Pitzer {
 
         /** "Na+–HPO4-2": the ions of a pair, for messages. */
         String pairName(int pair) {
-            return ions.get(cation[pair]).name() + "–" + ions.get(anion[pair]).name();
+            return new Pair(ions.get(cation[pair]).name(), ions.get(anion[pair]).name()).name();
         }
 
         /** ln γ of every ion (0 for neutral solutes) at these molalities, into {@code out}. */

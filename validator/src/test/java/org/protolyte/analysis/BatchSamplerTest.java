@@ -57,7 +57,8 @@ class BatchSamplerTest {
             return;     // a sample whose batches cannot be solved has no systematic band (RobustnessOnSamplesTest)
         }
         var solution = recipe.solution(dose.doses(recipe));
-        List<ConstantsPropagation.Perturbation> constants = ConstantsPropagation.perturbations(recipe, solution, false);
+        List<ConstantsPropagation.Perturbation> constants = ConstantsPropagation.perturbations(recipe, solution,
+                e.activityModel());
         List<DerivativeAndResolvingRoutesTest.Move> moves = DerivativeAndResolvingRoutesTest.moves(e, recipe, solution,
                 FRACTION);
         assertEquals(moves.size(), constants.size(), "the same constants, in the same order");
