@@ -278,7 +278,7 @@ public final class BatchRecordReader {
                                      Optional<Plausible> range, Dimension... allowed) {
         try {
             Quantity q = n.isString() ? Quantity.parse(n.asString())
-                    : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
+                    : Quantity.of(n.get("value").asDouble(), JsonReader.written(n.get("value")), n.get("unit").asString());
             String what = "a " + pointer.substring(pointer.lastIndexOf('/') + 1);
             Dimension d = q.require(what, allowed).dimension();
             Optional<String> outside = range.orElse(Plausible.of(d)).check(what, q);

@@ -124,7 +124,7 @@ public final class FormulationReader {
         private Optional<Quantity> quantity(JsonNode n, String pointer, String what, Dimension... allowed) {
             try {
                 Quantity q = n.isString() ? Quantity.parse(n.asString())
-                        : Quantity.of(n.get("value").asDouble(), n.get("unit").asString());
+                        : Quantity.of(n.get("value").asDouble(), JsonReader.written(n.get("value")), n.get("unit").asString());
                 return within(Optional.of(q.require(what, allowed)), pointer, what, Plausible.of(q.dimension()));
             } catch (UnitException e) {
                 problems.add(doc.problem(pointer, e.getMessage()));

@@ -47,7 +47,13 @@ public final class JsonReader {
                 .build();
         mapper = JsonMapper.builder(factory)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+                .enable(tools.jackson.databind.cfg.JsonNodeFeature.USE_BIG_DECIMAL_FOR_FLOATS)  // keeps "40.0" as written
                 .build();
+    }
+
+    /** A JSON number as the document writes it, digit for digit ("40.0" stays "40.0"; an exponent may be expanded). */
+    public static String written(JsonNode number) {
+        return number.isBigDecimal() ? number.decimalValue().toString() : number.asString();
     }
 
     public SourceDocument read(String source, byte[] content) {

@@ -2,13 +2,23 @@ package org.protolyte.units;
 
 import org.protolyte.text.Excerpt;
 
-/** A number with its unit, as written in a document. Conversion to base happens once, at the boundary. */
-public record Quantity(double value, Unit unit) {
+/**
+ * A number with its unit, as written in a document. Conversion to base happens once, at the boundary.
+ *
+ * @param written the number as the document gives it, digit for digit ("40.0" stays "40.0"): a recorded figure is
+ *                printed as recorded
+ */
+public record Quantity(double value, Unit unit, String written) {
 
     public Quantity {
         if (!Double.isFinite(value)) {
             throw new UnitException("the number is not finite");
         }
+    }
+
+    /** A quantity the tool computed, not read: written in the shortest form that gives the value back. */
+    public Quantity(double value, Unit unit) {
+        this(value, unit, format(value));
     }
 
     public Dimension dimension() {
@@ -64,7 +74,8 @@ public record Quantity(double value, Unit unit) {
         if (mantissa == 0 || unit == end) {
             throw new UnitException("'" + Excerpt.of(text) + "' is not of the form \"<number> <unit>\", e.g. \"20 mmol/L\"");
         }
-        return of(Double.parseDouble(text.substring(start, i)), text.substring(unit, end));
+        String number = text.substring(start, i);
+        return of(Double.parseDouble(number), number, text.substring(unit, end));
     }
 
     /** The number of ASCII digits from {@code from}, up to {@code end}. */
@@ -82,9 +93,14 @@ public record Quantity(double value, Unit unit) {
     }
 
     public static Quantity of(double value, String code) {
+        return of(value, format(value), code);
+    }
+
+    /** A quantity read from a document: its value, its number as written, and its unit's code. */
+    public static Quantity of(double value, String written, String code) {
         Unit u = Unit.ofCode(code).orElseThrow(() -> new UnitException(
                 "unknown unit '" + Excerpt.of(code) + "'; accepted: " + Unit.codesOf(java.util.List.of(Unit.values()))));
-        return new Quantity(value, u);
+        return new Quantity(value, u, written);
     }
 
     /** Checks that this quantity measures one of the given dimensions, naming what was expected. */
@@ -107,9 +123,10 @@ public record Quantity(double value, Unit unit) {
                 + "; accepted: " + accepted);
     }
 
+    /** As written: the document's digits and the unit's code. */
     @Override
     public String toString() {
-        return format(value) + " " + unit.code();
+        return written + " " + unit.code();
     }
 
     private static String format(double v) {
