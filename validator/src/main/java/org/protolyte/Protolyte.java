@@ -119,6 +119,7 @@ public final class Protolyte {
 
     private final Waivers waivers;
     private final Optional<Robustness.Settings> robustness;
+    private final boolean curves;
 
     /** Judged by the shipped packs that apply to each document's intended use; errors fail; no waivers. */
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library) {
@@ -131,12 +132,13 @@ public final class Protolyte {
 
     public Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn,
                      Waivers waivers) {
-        this(schemas, library, checker, failOn, waivers, Optional.empty());
+        this(schemas, library, checker, failOn, waivers, Optional.empty(), false);
     }
 
     private Protolyte(SchemaCatalog schemas, SubstanceLibrary library, Checker checker, Severity failOn,
-                      Waivers waivers, Optional<Robustness.Settings> robustness) {
+                      Waivers waivers, Optional<Robustness.Settings> robustness, boolean curves) {
         this.robustness = robustness;
+        this.curves = curves;
         this.reader = new FormulationReader(schemas);
         this.resolver = new RecipeResolver(library);
         this.checker = checker;
@@ -250,7 +252,12 @@ public final class Protolyte {
 
     /** Runs a robustness study on every formulation too, so that rules can judge the batch-to-batch risk. */
     public Protolyte withRobustness(Robustness.Settings settings) {
-        return new Protolyte(schemas, library, checker, failOn, waivers, Optional.of(settings));
+        return new Protolyte(schemas, library, checker, failOn, waivers, Optional.of(settings), curves);
+    }
+
+    /** Traces the points behind the report's plots for every formulation too (for HTML and --curves). */
+    public Protolyte withCurves() {
+        return new Protolyte(schemas, library, checker, failOn, waivers, robustness, true);
     }
 
     /** A new run's summary: the tool version, now, and the library files with their hashes. */
@@ -436,6 +443,9 @@ public final class Protolyte {
             analysis = analysis.withRobustness(new Robustness(new Equilibrium(IonInteraction.INSTANCE))
                     .run(recipe, robustness.get(), done -> { }));
         }
+        if (curves) {
+            analysis = analysis.withCurves(analyzer.curves(analysis));
+        }
         Checker.Verdict verdict;
         try {
             verdict = checker.check(analysis);
@@ -450,7 +460,10 @@ public final class Protolyte {
     /** A batch record: read with its master, compared, recomputed, judged by the batch rules. */
     private DocumentReport batch(SourceDocument doc, String sha256, Optional<Path> file, Optional<Path> root) {
         BatchRecord record = batchReader.read(doc, file, root);
-        BatchAnalysis b = batchAnalyzer.analyze(record);
+        BatchAnalysis made = batchAnalyzer.analyze(record);
+        BatchAnalysis b = curves ? new BatchAnalysis(made.record(), made.master(), made.scale(), made.additions(),
+                made.observations(), made.candidates(), made.specifiedPh(),
+                made.asMade().map(a -> a.withCurves(analyzer.curves(a))), made.caveats()) : made;
         Checker.Verdict verdict;
         try {
             verdict = checker.check(b);

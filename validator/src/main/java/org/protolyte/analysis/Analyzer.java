@@ -95,6 +95,11 @@ public final class Analyzer {
                 sensitivities(recipe, doses, solution, own, derivatives), Drifts.of(recipe, own), acidity, Optional.empty(), diluted);
     }
 
+    /** The points behind a report's plots: the titration, β and the forms against pH, and pH from 0 to 50 °C. */
+    public Curves curves(FormulationAnalysis a) {
+        return new CurveTracer(this, searches).trace(a);
+    }
+
     /**
      * What a recipe gives without its uncertainties: the q.s. dose of each titrant (mol per basis; empty where its
      * goal cannot be reached) and each condition's equilibrium (empty where it is indeterminate), with the reasons of

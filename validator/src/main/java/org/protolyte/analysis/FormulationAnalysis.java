@@ -12,13 +12,23 @@ import org.protolyte.recipe.Solution;
 /**
  * Everything computed for one formulation: per condition, the q.s. titrants, what was assumed, and the
  * sensitivity of the pH at the target's temperature to each component (largest first), and a robustness
- * study where one was asked for.
+ * study and the points behind the report's plots where they were asked for.
  */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
                                   Optional<TitratableAcidity> titratableAcidity,
-                                  Optional<Robustness.Result> robustness, Optional<WorkingSolution> working) {
+                                  Optional<Robustness.Result> robustness, Optional<WorkingSolution> working,
+                                  Optional<Curves> curves) {
+
+    public FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
+                               List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
+                               List<Sensitivity> targetSensitivities, List<Drift> drifts,
+                               Optional<TitratableAcidity> titratableAcidity, Optional<Robustness.Result> robustness,
+                               Optional<WorkingSolution> working) {
+        this(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities, drifts,
+                titratableAcidity, robustness, working, Optional.empty());
+    }
 
     /** A concentrate's working solution: the dilution and every condition again (rules judge the document itself). */
     public record WorkingSolution(Formulation.Dilution dilution, Solution solution, List<ConditionResult> conditions) {
@@ -44,7 +54,12 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
 
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, Optional.of(r), working);
+                drifts, titratableAcidity, Optional.of(r), working, curves);
+    }
+
+    public FormulationAnalysis withCurves(Curves c) {
+        return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
+                drifts, titratableAcidity, robustness, working, Optional.of(c));
     }
 
     public FormulationAnalysis {

@@ -51,7 +51,7 @@ final class TargetSearches {
      * temperature to {@code goal}: added sodium or chloride (the strong ions of NaOH, HCl), found by the root finder
      * with dpH/dC from the derivatives, up to {@link Analyzer#MAX_TITRANT_MOLALITY}.
      */
-    private double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
+    double load(Recipe recipe, Solution solution, double kelvin, OptionalDouble co2, double goal) {
         Component sodium = recipe.library().ion("Na+").orElseThrow();
         Component chloride = recipe.library().ion("Cl-").orElseThrow();
         Equilibrium.Prepared problem = analyzer.prepare(recipe, solution, kelvin, co2, java.util.Set.of(sodium, chloride));

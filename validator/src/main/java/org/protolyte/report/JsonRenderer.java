@@ -25,6 +25,17 @@ public final class JsonRenderer {
     /** Streaming writes several values to one writer: the mapper must not close it after each. */
     private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT)
             .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
+    private final Optional<org.protolyte.units.Quantity> batchSize;
+
+    /** Weigh sheets per the document's basis only. */
+    public JsonRenderer() {
+        this(Optional.empty());
+    }
+
+    /** @param batchSize the batch the weigh sheets also give amounts for (--batch-size) */
+    public JsonRenderer(Optional<org.protolyte.units.Quantity> batchSize) {
+        this.batchSize = batchSize;
+    }
 
     public String render(RunReport run) {
         return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
@@ -124,7 +135,8 @@ public final class JsonRenderer {
             x.put("match", c.match().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'));
             c.expected().ifPresent(s -> x.put("master", s.name()));
             c.used().ifPresent(s -> x.put("used", s.name()));
-            c.addition().ifPresent(a -> x.put("step", a.step()).put("pointer", a.pointer()));
+            c.addition().ifPresent(a -> x.put("step", a.step()).put("pointer", a.pointer())
+                    .put("recorded", a.amount().toString()));
             if (Double.isFinite(c.expectedMoles())) {
                 x.put("expectedMmol", Numbers.significant(c.expectedMoles() * 1000, 5));
             }
@@ -167,6 +179,10 @@ public final class JsonRenderer {
         r.packs().forEach(p -> packs.addObject().put("name", p.name()).put("version", p.version())
                 .put("source", p.document().source()).put("sha256", p.sha256()));
         r.analysis().ifPresent(a -> analysis(n, a));
+        if (r.batch().isEmpty()) {
+            r.analysis().ifPresent(a -> weighSheet(n.putObject("weighSheet"), WeighSheet.of(a, batchSize)));
+        }
+        r.analysis().flatMap(FormulationAnalysis::curves).ifPresent(c -> curves(n.putObject("curves"), c));
         r.batch().ifPresent(b -> batch(n.putObject("batch"), b));
         ArrayNode findings = n.putArray("findings");
         r.findings().forEach(f -> findings.add(finding(f)));
@@ -356,6 +372,79 @@ public final class JsonRenderer {
             o.put("reachablePH", Numbers.decimals(u.reachablePH(), 2));
         });
         return o;
+    }
+
+    private static void weighSheet(ObjectNode o, WeighSheet w) {
+        o.put("basis", w.basis());
+        w.batch().ifPresent(b -> o.putObject("batch").put("size", b.size()).put("factor", Numbers.significant(b.factor(), 6)));
+        ArrayNode lines = o.putArray("lines");
+        for (WeighSheet.Line l : w.lines()) {
+            ObjectNode x = lines.addObject().put("pointer", l.pointer()).put("substance", l.substance())
+                    .put("recorded", l.recorded());
+            l.stock().ifPresent(s -> x.put("stock", s));
+            l.mmol().ifPresent(v -> x.put("mmol", v));
+            l.grams().ifPresent(v -> x.put("grams", v));
+            l.stockMillilitres().ifPresent(v -> x.put("stockMillilitres", v));
+            l.batchMmol().ifPresent(v -> x.put("batchMmol", v));
+            l.batchGrams().ifPresent(v -> x.put("batchGrams", v));
+            l.batchStockMillilitres().ifPresent(v -> x.put("batchStockMillilitres", v));
+        }
+        ArrayNode notes = o.putArray("notes");
+        w.notes().forEach(notes::add);
+    }
+
+    /** The points behind each plot, named as the HTML report's plots are. */
+    private static void curves(ObjectNode o, org.protolyte.analysis.Curves c) {
+        ObjectNode t = o.putObject("titration").put("temperature", Numbers.decimals(Numbers.celsius(c.titrationKelvin()), 2));
+        c.qsAdded().ifPresent(x -> t.put("qsAdded", Numbers.significant(x, 5)));
+        c.qsPH().ifPresent(x -> t.put("qsPH", Numbers.decimals(x, 3)));
+        ArrayNode tp = t.putArray("points");
+        ObjectNode cap = o.putObject("capacity");
+        ArrayNode cp = cap.putArray("points");
+        ObjectNode sp = o.putObject("speciation");
+        ArrayNode forms = sp.putArray("forms");
+        c.forms().forEach(forms::add);
+        ArrayNode spp = sp.putArray("points");
+        for (var p : c.titration()) {
+            tp.addObject().put("added", Numbers.significant(p.added(), 5)).put("pH", Numbers.decimals(p.pH(), 3));
+            cp.addObject().put("pH", Numbers.decimals(p.pH(), 3)).put("bufferCapacity", Numbers.significant(p.bufferCapacity(), 4));
+            ArrayNode f = spp.addObject().put("pH", Numbers.decimals(p.pH(), 3)).putArray("fractions");
+            p.fractions().forEach(x -> f.add(Numbers.decimals(x, 4)));
+        }
+        if (c.forms().isEmpty()) {
+            o.remove("speciation");
+        }
+        ObjectNode temp = o.putObject("temperature");
+        if (Double.isFinite(c.validToKelvin())) {
+            temp.putObject("constantsRange").put("from", Numbers.decimals(Numbers.celsius(c.validFromKelvin()), 1))
+                    .put("to", Numbers.decimals(Numbers.celsius(c.validToKelvin()), 1));
+        }
+        ArrayNode pts = temp.putArray("points");
+        for (var p : c.temperature()) {
+            ObjectNode x = pts.addObject().put("temperature", Numbers.decimals(Numbers.celsius(p.kelvin()), 2));
+            if (Double.isNaN(p.pH())) {
+                x.putNull("pH");
+            } else {
+                x.put("pH", Numbers.decimals(p.pH(), 3));
+            }
+        }
+        if (!c.solids().isEmpty()) {
+            ObjectNode sat = o.putObject("saturation");
+            ArrayNode names = sat.putArray("solids");
+            c.solids().forEach(names::add);
+            ArrayNode sps = sat.putArray("points");
+            for (var p : c.temperature()) {
+                ArrayNode si = sps.addObject().put("temperature", Numbers.decimals(Numbers.celsius(p.kelvin()), 2))
+                        .putArray("saturationIndex");
+                p.saturationIndex().forEach(x -> {
+                    if (Double.isNaN(x)) {
+                        si.addNull();
+                    } else {
+                        si.add(Numbers.decimals(x, 3));
+                    }
+                });
+            }
+        }
     }
 
     private ObjectNode finding(Finding f) {
