@@ -28,7 +28,11 @@ public final class TextRenderer {
     /** Forms shown per system, the largest first. */
     private static final int SHOWN_FORMS = 2;
 
+    /** Columns of a terminal line: prose wraps here; only a name or a number longer than a line runs past it. */
+    static final int WIDTH = 100;
+
     private final boolean allSpecies;
+    private final Optional<org.protolyte.units.Quantity> batchSize;
 
     /** The main forms only: the systems that carry 95 % of β, at most two forms each. */
     public TextRenderer() {
@@ -37,7 +41,41 @@ public final class TextRenderer {
 
     /** @param allSpecies every system and every form of at least 5 % */
     public TextRenderer(boolean allSpecies) {
+        this(allSpecies, Optional.empty());
+    }
+
+    /** @param batchSize the batch the weigh sheet also gives amounts for (--batch-size) */
+    public TextRenderer(boolean allSpecies, Optional<org.protolyte.units.Quantity> batchSize) {
         this.allSpecies = allSpecies;
+        this.batchSize = batchSize;
+    }
+
+    /**
+     * {@code text} broken at spaces into lines of at most {@link #WIDTH} columns, the first after {@code first}, the
+     * others after {@code rest}; each line ends with a line separator.
+     */
+    static String wrap(String first, String rest, String text) {
+        StringBuilder b = new StringBuilder(first);
+        int column = first.length();
+        boolean empty = true;
+        for (String word : text.split(" ")) {
+            if (word.isEmpty()) {
+                continue;
+            }
+            if (!empty && column + 1 + word.length() > WIDTH) {
+                b.append(NL).append(rest);
+                column = rest.length();
+                empty = true;
+            }
+            if (!empty) {
+                b.append(' ');
+                column++;
+            }
+            b.append(word);
+            column += word.length();
+            empty = false;
+        }
+        return b.append(NL).toString();
     }
 
     public String render(RunReport run) {
@@ -69,11 +107,11 @@ public final class TextRenderer {
 
     public String footer(List<Skipped> skippedFiles, int documents, java.util.function.ToLongFunction<Status> count) {
         StringBuilder b = new StringBuilder();
-        for (Skipped skipped : skippedFiles) {
-            b.append(NL).append("skipped ").append(p(skipped.source())).append(": ").append(p(skipped.reason()));
-        }
         if (!skippedFiles.isEmpty()) {
             b.append(NL);
+        }
+        for (Skipped skipped : skippedFiles) {
+            b.append(wrap("skipped ", "  ", p(skipped.source()) + ": " + p(skipped.reason())));
         }
         b.append(NL).append(String.format(Locale.ROOT, "%d document(s): %d pass, %d fail, %d invalid, %d indeterminate",
                 documents, count.applyAsLong(Status.PASS), count.applyAsLong(Status.FAIL),
@@ -81,16 +119,16 @@ public final class TextRenderer {
         if (count.applyAsLong(Status.FAULT) > 0) {
             b.append(", ").append(count.applyAsLong(Status.FAULT)).append(" internal fault(s)");
         }
-        b.append(NL).append(RunReport.CAUTION).append(NL);
+        b.append(NL).append(wrap("", "", RunReport.CAUTION));
         return b.toString();
     }
 
     private void document(StringBuilder b, DocumentReport r) {
-        b.append("== ").append(p(r.source()));
-        r.id().ifPresent(id -> b.append("  [").append(p(id)).append("]"));
-        b.append("  ").append(r.status().code().toUpperCase(Locale.ROOT)).append(NL);
+        String head = "== " + p(r.source());
+        String tail = r.id().map(id -> "  [" + p(id) + "]").orElse("") + "  " + r.status().code().toUpperCase(Locale.ROOT);
+        b.append(head).append(head.length() + tail.length() > WIDTH ? NL + " " : "").append(tail).append(NL);
         r.batch().ifPresent(x -> batch(b, x));
-        r.analysis().ifPresent(a -> analysis(b, a));
+        r.analysis().ifPresent(a -> analysis(b, a, r.batch().isEmpty()));
         if (!r.findings().isEmpty()) {
             b.append("  findings:").append(NL);
             for (Finding f : r.findings()) {
@@ -98,13 +136,13 @@ public final class TextRenderer {
                 f.pointer().ifPresent(x -> b.append("  ").append(x.isEmpty() ? "(document)" : p(x)));
                 f.location().ifPresent(l -> b.append(" (line ").append(l.line()).append(", column ")
                         .append(l.column()).append(")"));
-                b.append(NL).append("      ").append(p(f.message())).append(NL);
-                f.waivedBy().ifPresent(w -> b.append("      WAIVED by ").append(p(w.approver()))
-                        .append(w.authorGranted() ? " (granted in the document by its author)" : "")
-                        .append(" until ").append(w.expires()).append(": ").append(p(w.reason())).append(NL));
+                b.append(NL).append(wrap("      ", "      ", p(f.message())));
+                f.waivedBy().ifPresent(w -> b.append(wrap("      ", "        ", "WAIVED by " + p(w.approver())
+                        + (w.authorGranted() ? " (granted in the document by its author)" : "")
+                        + " until " + w.expires() + ": " + p(w.reason()))));
                 f.definition().filter(d -> f.severity() != org.protolyte.rules.Severity.NOTE)
                         .flatMap(org.protolyte.rules.Rule::remedy)
-                        .ifPresent(rem -> b.append("      what to do: ").append(p(rem)).append(NL));
+                        .ifPresent(rem -> b.append(wrap("      what to do: ", "        ", p(rem))));
             }
         }
         if (!r.diagnostics().isEmpty()) {
@@ -112,51 +150,57 @@ public final class TextRenderer {
             for (Diagnostic d : r.diagnostics()) {
                 b.append("    ").append(d.severity().name().toLowerCase(Locale.ROOT)).append(" ").append(p(d.code()));
                 d.condition().ifPresent(c -> b.append(" [").append(p(c)).append("]"));
-                b.append(NL).append("      ").append(p(d.message())).append(NL);
+                b.append(NL).append(wrap("      ", "      ", p(d.message())));
             }
         }
     }
+
+    /** step, addition, recorded, mmol, master mmol, Δ: 90 columns. */
+    private static final String BATCH_ROW = "  %-5s %-36s %-14s %10s %11s %8s%n";
 
     /** A batch record: master and size, each addition against the master, each measurement against prediction. */
     private static void batch(StringBuilder b, BatchAnalysis x) {
         var m = x.record().master();
         b.append(String.format(Locale.ROOT, "  batch %s of %s%s, %s × the master's basis%n", p(x.record().batch()), p(m.id()),
                 m.revision().map(r -> " revision " + p(r)).orElse(""), Numbers.significant(x.scale(), 4).toPlainString()));
-        b.append(String.format(Locale.ROOT, "  %-5s %-44s %-14s %12s %12s %8s%n", "step", "addition", "recorded",
-                "mmol", "master mmol", "Δ"));
+        b.append(String.format(Locale.ROOT, BATCH_ROW, "step", "addition", "recorded", "mmol", "master mmol", "Δ"));
         for (BatchAnalysis.AdditionCheck c : x.additions()) {
             String step = c.addition().map(a -> String.valueOf(a.step())).orElse("—");
-            String name = c.used().or(() -> c.expected()).map(s -> p(s.name())).orElse("?")
-                    + switch (c.match()) {
-                        case MISSING -> " (missing)";
-                        case EXTRA -> " (not in the master)";
-                        case OTHER_FORM -> " (master: " + p(c.expected().orElseThrow().name()) + ")";
-                        case TITRANT -> " (q.s.)";
-                        default -> "";
-                    };
+            String name = c.used().or(() -> c.expected()).map(s -> p(s.name())).orElse("?");
+            String note = switch (c.match()) {
+                case MISSING -> "missing";
+                case EXTRA -> "not in the master";
+                case OTHER_FORM -> "master: " + p(c.expected().orElseThrow().name());
+                case TITRANT -> "q.s.";
+                default -> "";
+            };
             String recorded = c.addition().map(a -> p(a.amount().toString())).orElse("—");
             String expected = Double.isFinite(c.expectedMoles()) ? Numbers.significant(c.expectedMoles() * 1000, 5)
                     .toPlainString() : "—";
             String dev = Double.isFinite(c.deviation()) ? String.format(Locale.ROOT, "%+.1f %%", 100 * c.deviation()) : "";
-            b.append(String.format(Locale.ROOT, "  %-5s %-44s %-14s %12s %12s %8s%n", step, name, recorded,
+            b.append(String.format(Locale.ROOT, BATCH_ROW, step, name, recorded,
                     Numbers.significant(c.actualMoles() * 1000, 5).toPlainString(), expected, dev));
+            if (!note.isEmpty()) {
+                b.append(wrap("         (", "          ", note + ")"));     // under the name: the row stays aligned
+            }
         }
         if (!x.observations().isEmpty()) {
             b.append("  measured, and predicted from the additions as recorded:").append(NL);
             for (BatchAnalysis.Observation o : x.observations()) {
-                b.append(String.format(Locale.ROOT, "    %-44s %12s %12s%n", p(o.label()), o.kind().text(o.measured()),
+                b.append(String.format(Locale.ROOT, "    %-50s %14s %14s%n", p(o.label()), o.kind().text(o.measured()),
                         o.kind().text(o.predicted())));
             }
         }
     }
 
-    private void analysis(StringBuilder b, FormulationAnalysis a) {
+    /** @param formulation a formulation's own analysis (a batch as made has its additions table instead of a weigh sheet) */
+    private void analysis(StringBuilder b, FormulationAnalysis a, boolean formulation) {
         Formulation f = a.recipe().formulation();
-        f.title().ifPresent(t -> b.append("  ").append(p(t)));
-        f.revision().ifPresent(rev -> b.append(" (revision ").append(p(rev)).append(")"));
-        f.intendedUse().ifPresent(u -> b.append(" — ").append(p(u)));
-        if (f.title().isPresent() || f.revision().isPresent() || f.intendedUse().isPresent()) {
-            b.append(NL);
+        String title = f.title().map(Printable::text).orElse("")
+                + f.revision().map(rev -> " (revision " + p(rev) + ")").orElse("")
+                + f.intendedUse().map(u -> " — " + p(u)).orElse("");
+        if (!title.isEmpty()) {
+            b.append(wrap("  ", "    ", title.strip()));
         }
         String basis = f.basis().finalVolume()
                 ? String.format(Locale.ROOT, "per %s L of solution", Numbers.significant(f.basis().amount(), 6))
@@ -165,27 +209,29 @@ public final class TextRenderer {
             if (!t.used() || t.unreachable().isPresent()) {
                 continue;
             }
-            b.append(String.format(Locale.ROOT, "  q.s. %s: %s mmol %s", p(t.ingredient().substance().name()),
-                    Numbers.significant(t.moles() * 1000, 4).toPlainString(), basis));
-            t.stockMillilitres().ifPresent(ml -> b.append(String.format(Locale.ROOT, " = %s mL of stock",
-                    Numbers.significant(ml, 4).toPlainString())));
-            b.append(NL);
+            b.append(wrap("  ", "    ", String.format(Locale.ROOT, "q.s. %s: %s mmol %s", p(t.ingredient().substance().name()),
+                    Numbers.significant(t.moles() * 1000, 4).toPlainString(), basis) + (t.stockMillilitres().isPresent()
+                    ? String.format(Locale.ROOT, " = %s mL of stock", Numbers.significant(t.stockMillilitres()
+                            .getAsDouble(), 4).toPlainString()) : "")));
             boolean explicit = t.ingredient().line().adjustTo().map(x -> x.pH().isPresent()).orElse(false);
             String part = t.atVolume() < 1 ? String.format(Locale.ROOT, " at %.0f %% of the final volume", t.atVolume() * 100)
                     : "";
-            t.setpointPH().ifPresent(sp -> b.append(String.format(Locale.ROOT,
-                    "  SETPOINT: adjust to pH %.2f on the meter at %.1f °C%s%s%n", sp, Numbers.celsius(t.adjustKelvin()),
+            t.setpointPH().ifPresent(sp -> b.append(wrap("  ", "    ", String.format(Locale.ROOT,
+                    "SETPOINT: adjust to pH %.2f on the meter at %.1f °C%s%s", sp, Numbers.celsius(t.adjustKelvin()),
                     part, explicit ? " (as the document states)" : String.format(Locale.ROOT, " (gives pH %.2f at %.1f °C)",
-                            t.goalPH(), Numbers.celsius(t.goalKelvin())))));
+                            t.goalPH(), Numbers.celsius(t.goalKelvin()))))));
             t.pHAfterMakingUp().ifPresent(x -> b.append(String.format(Locale.ROOT,
                     "  after making up to volume: pH %.2f at %.1f °C%n", x, Numbers.celsius(t.adjustKelvin()))));
         }
         Systems systems = new Systems(a.recipe().library());
+        if (formulation) {
+            weighSheet(b, WeighSheet.of(a, batchSize));
+        }
         conditionTable(b, a.conditions(), systems, allSpecies);
         solids(b, a.conditions());
         a.working().ifPresent(w -> {
-            b.append(String.format(Locale.ROOT, "  working solution, diluted %s-fold with %s:%n",
-                    Numbers.significant(w.dilution().factor(), 4).toPlainString(), p(w.dilution().diluent())));
+            b.append(wrap("  ", "    ", String.format(Locale.ROOT, "working solution, diluted %s-fold with %s:",
+                    Numbers.significant(w.dilution().factor(), 4).toPlainString(), p(w.dilution().diluent()))));
             conditionTable(b, w.conditions(), systems, allSpecies);
             solids(b, w.conditions());
             List<String> shifts = new ArrayList<>();
@@ -195,8 +241,8 @@ public final class TextRenderer {
                         p(a.conditions().get(at).condition().name()), x)));
             }
             if (!shifts.isEmpty()) {
-                b.append("  pH shift on dilution: ").append(String.join(", ", shifts))
-                        .append(" (the activity coefficients' change with ionic strength)").append(NL);
+                b.append(wrap("  pH shift on dilution: ", "    ", String.join(", ", shifts)
+                        + " (the activity coefficients' change with ionic strength)"));
             }
         });
         String first = a.conditions().isEmpty() ? "" : a.conditions().get(0).condition().name();
@@ -206,7 +252,8 @@ public final class TextRenderer {
             }
             String cause = d.co2Change().map(x -> ", mostly the change of " + p(x)).orElseGet(() -> d.system()
                     .map(x -> String.format(Locale.ROOT, ", mostly %s (dpKa/dT %+.4f per K)", p(x), d.dpKadT())).orElse(""));
-            b.append(String.format(Locale.ROOT, "  drift %s → %s: %+.2f pH%s%n", p(d.from()), p(d.to()), d.change(), cause));
+            b.append(wrap("  ", "    ", String.format(Locale.ROOT, "drift %s → %s: %+.2f pH%s", p(d.from()), p(d.to()),
+                    d.change(), cause)));
         }
         for (ConditionResult c : a.conditions()) {
             List<String> extra = new ArrayList<>();
@@ -220,7 +267,7 @@ public final class TextRenderer {
                         c.co2ForTarget().getAsDouble() / 1000));
             }
             if (!extra.isEmpty()) {
-                b.append("  ").append(p(c.condition().name())).append(": ").append(String.join("; ", extra)).append(NL);
+                b.append(wrap("  ", "    ", p(c.condition().name()) + ": " + String.join("; ", extra)));
             }
         }
         a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
@@ -231,11 +278,11 @@ public final class TextRenderer {
             b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
         }
         if (a.conditions().stream().anyMatch(c -> c.uncertainty().isPresent())) {
-            b.append("  ± is the standard uncertainty from the published pKa and pKw values and the activity model, not "
-                    + "batch-to-batch variation; where a titrant is dosed to a pH, the meter removes it at that condition")
-                    .append(NL);
+            b.append(wrap("  ", "    ", "± is the standard uncertainty from the published pKa and pKw values and the "
+                    + "activity model, not batch-to-batch variation; where a titrant is dosed to a pH, the meter removes "
+                    + "it at that condition"));
         }
-        b.append("  assumed: ").append(p(String.join("; ", a.assumptions()))).append(NL);
+        b.append(wrap("  assumed: ", "    ", p(String.join("; ", a.assumptions()))));
     }
 
     /** Text from the document, a library or a file name, escaped for the terminal. */
@@ -317,12 +364,43 @@ public final class TextRenderer {
             return;
         }
         b.append("  saturation index (> 0: the solid can form):").append(NL);
-        int width = rows.keySet().stream().mapToInt(String::length).max().orElse(0);
-        rows.forEach((k, v) -> b.append("    ").append(k).append(" ".repeat(width + 2 - k.length()))
-                .append(String.join("   ", v)).append(NL));
+        rows.forEach((k, v) -> b.append(wrap("    ", "      ", k + ": " + String.join(", ", v))));
         if (conditions.stream().flatMap(c -> c.saturation().stream()).anyMatch(x -> !x.inRange())) {
             b.append("    † Ksp extrapolated beyond the temperatures of its data").append(NL);
         }
+    }
+
+    /**
+     * Every component line as written, what it resolved to in mmol, and what to weigh (g) or measure (mL of stock),
+     * per the basis and, where a batch size is given, for the batch.
+     */
+    private static void weighSheet(StringBuilder b, WeighSheet w) {
+        boolean batch = w.batch().isPresent();
+        b.append(wrap("  weigh sheet, per ", "    ", w.basis() + w.batch().map(x -> " and for a batch of " + p(x.size()))
+                .orElse("") + ":"));
+        String row = batch ? "    %-28s %-12s %10s %12s %11s %13s%n" : "    %-28s %-12s %10s %12s%n";
+        b.append(String.format(Locale.ROOT, row, "component", "as written", "mmol", "to weigh", "batch mmol",
+                "batch weigh"));
+        for (WeighSheet.Line l : w.lines()) {
+            String name = p(l.substance());
+            if (name.length() > 28) {       // a long name on a line of its own keeps the columns aligned
+                b.append(wrap("    ", "      ", name));
+                name = "";
+            }
+            b.append(String.format(Locale.ROOT, row, name, p(l.recorded()), plain(l.mmol()),
+                    measure(l.grams(), l.stockMillilitres()), plain(l.batchMmol()),
+                    measure(l.batchGrams(), l.batchStockMillilitres())));
+            l.stock().ifPresent(x -> b.append(wrap("      (", "        ", "of a " + p(x) + " stock)")));
+        }
+        w.notes().forEach(n -> b.append(wrap("    ", "      ", p(n))));
+    }
+
+    private static String plain(Optional<java.math.BigDecimal> x) {
+        return x.map(java.math.BigDecimal::toPlainString).orElse("—");
+    }
+
+    private static String measure(Optional<java.math.BigDecimal> grams, Optional<java.math.BigDecimal> ml) {
+        return grams.map(g -> g.toPlainString() + " g").or(() -> ml.map(v -> v.toPlainString() + " mL")).orElse("—");
     }
 
     /** One row per condition: temperature, pH with its uncertainty, β, I, osmolality and the main forms. */
@@ -336,13 +414,16 @@ public final class TextRenderer {
                 EquilibriumState s = c.state().orElseThrow();
                 String pH = c.uncertainty().map(u -> String.format(Locale.ROOT, "%.2f ± %.2f", s.pH(), u.pH()))
                         .orElse(String.format(Locale.ROOT, "%.2f", s.pH()));
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9.0f   %s%n", name,
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9.0f%n", name,
                         Numbers.celsius(c.condition().kelvin()), pH,
                         Numbers.significant(c.bufferCapacityPerLitre() * 1000, 3).toPlainString(),
-                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000,
-                        speciation(c, s, systems, allSpecies)));
+                        Numbers.significant(s.ionicStrength(), 3).toPlainString(), s.osmolality() * 1000));
+                String forms = speciation(c, s, systems, allSpecies);
+                if (!forms.isEmpty()) {
+                    b.append(wrap("      ", "        ", forms));
+                }
             } else {
-                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s   (see diagnostics)%n", name,
+                b.append(String.format(Locale.ROOT, "  %-14s %8.1f %13s %14s %11s %9s  (see diagnostics)%n", name,
                         Numbers.celsius(c.condition().kelvin()), "—", "—", "—", "—"));
             }
         }

@@ -68,12 +68,39 @@ class SampleReportsTest {
                 "sample-formulations", "cell-culture-complete-basal-medium.json")));
         String main = new TextRenderer().render(run);
         String all = new TextRenderer(true).render(run);
-        String preparation = main.lines().filter(l -> l.startsWith("  preparation ")).findFirst().orElseThrow();
+        String preparation = forms(main, "preparation");
         assertTrue(preparation.contains("carbonate: HCO3- 85 %, CO2(aq) 14 %"), preparation);
         assertTrue(preparation.matches(".*; \\+\\d+ systems \\(--species all\\);.*"), preparation);
         assertTrue(!preparation.contains("lysine"), preparation);
-        String everything = all.lines().filter(l -> l.startsWith("  preparation ")).findFirst().orElseThrow();
+        String everything = forms(all, "preparation");
         assertTrue(everything.contains("lysine: H2Lys+ 99 %") && !everything.contains("--species all"), everything);
+    }
+
+    /** The forms under a condition's row of the first condition table: the indented lines that follow it, joined. */
+    private static String forms(String text, String condition) {
+        List<String> lines = text.lines().toList();
+        int row = lines.indexOf(lines.stream().filter(l -> l.startsWith("  " + condition + " ")).findFirst().orElseThrow());
+        StringBuilder b = new StringBuilder();
+        for (int i = row + 1; i < lines.size() && lines.get(i).startsWith("      "); i++) {
+            b.append(' ').append(lines.get(i).strip());
+        }
+        return b.toString().strip();
+    }
+
+    /** Every line of the text report of every sample fits a terminal 100 columns wide. */
+    @org.junit.jupiter.api.Test
+    void everySamplesTextReportFitsOneHundredColumns() throws java.io.IOException {
+        Path samples = Path.of(System.getProperty("protolyte.projectRoot", ".."), "sample-formulations");
+        List<Path> files = new java.util.ArrayList<>();
+        try (var s = java.nio.file.Files.walk(samples)) {
+            s.filter(p -> p.toString().endsWith(".json") && !p.toString().contains("site-library")).sorted()
+                    .forEach(files::add);
+        }
+        String text = new TextRenderer(true, java.util.Optional.of(org.protolyte.units.Quantity.parse("250 L")))
+                .render(PROTOLYTE.check(files));
+        assertTrue(text.lines().count() > 400, "all samples reported");
+        text.lines().forEach(l -> assertTrue(l.codePointCount(0, l.length()) <= TextRenderer.WIDTH,
+                () -> l.codePointCount(0, l.length()) + " columns: " + l));
     }
 
     /** Drift from the first condition (where it is made) to each other one in text; every pair stays in JSON. */
