@@ -13,6 +13,7 @@ import java.util.concurrent.Callable;
 
 import org.protolyte.Protolyte;
 import org.protolyte.analysis.Robustness;
+import org.protolyte.report.HtmlRenderer;
 import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunSummary;
 import org.protolyte.report.SarifRenderer;
@@ -37,14 +38,40 @@ import picocli.CommandLine.Parameters;
                 + "with several files, the highest.")
 public final class CheckCommand implements Callable<Integer> {
 
-    enum Format { text, json, sarif }
+    enum Format { text, json, sarif, html }
 
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "Formulation documents or batch records (JSON), "
             + "folders, or '-' for standard input.")
     List<Path> files = new ArrayList<>();
 
-    @Option(names = "--format", paramLabel = "FORMAT", description = "text (default), json, or sarif (SARIF 2.1.0, for code-review platforms).")
+    @Option(names = "--format", paramLabel = "FORMAT", description = "text (default), json, sarif (SARIF 2.1.0, for "
+            + "code-review platforms), or html (one self-contained file with the weigh sheet and plots, to print or attach).")
     Format format = Format.text;
+
+    @Option(names = "--batch-size", paramLabel = "SIZE", converter = BatchSize.class,
+            description = "Also give the weigh sheet's amounts for a batch of SIZE, e.g. 250L (a final-volume basis) or "
+                    + "50kg (of water, for a water-mass basis).")
+    org.protolyte.units.Quantity batchSize;
+
+    @Option(names = "--curves", description = "With --format json: also the points behind each plot of the HTML report.")
+    boolean curves;
+
+    /** A volume or mass with its unit, e.g. 250L or 2.5 kg; anything else is a usage error that says so. */
+    static final class BatchSize implements CommandLine.ITypeConverter<org.protolyte.units.Quantity> {
+        @Override
+        public org.protolyte.units.Quantity convert(String text) {
+            try {
+                org.protolyte.units.Quantity q = org.protolyte.units.Quantity.parse(text).require("a batch size",
+                        org.protolyte.units.Dimension.VOLUME, org.protolyte.units.Dimension.MASS);
+                if (!(q.value() > 0)) {
+                    throw new CommandLine.TypeConversionException("a batch size must be more than zero, not '" + text + "'");
+                }
+                return q;
+            } catch (org.protolyte.units.UnitException e) {
+                throw new CommandLine.TypeConversionException(e.getMessage());
+            }
+        }
+    }
 
     @Option(names = "--species", paramLabel = "WHICH",
             description = "Forms per condition in the text report: main (default: the systems that carry 95 % of the "
@@ -117,6 +144,9 @@ public final class CheckCommand implements Callable<Integer> {
                 protolyte = protolyte.withRobustness(new Robustness.Settings(robustnessSamples, d.seed(),
                         d.defaultTolerance(), d.meterStandardUncertainty()));
             }
+            if (curves || format == Format.html) {
+                protolyte = protolyte.withCurves();
+            }
             found = Inputs.expand(files, excludes, System.in);
             target = output == null ? Optional.empty() : Optional.of(ReportFile.of(output, readBy(found)));
         } catch (Setup.UsageException e) {
@@ -156,7 +186,7 @@ public final class CheckCommand implements Callable<Integer> {
         List<Protolyte.Input> inputs = found.inputs();
         switch (format) {
             case json -> {
-                JsonRenderer.Stream json = new JsonRenderer().begin(out, summary);
+                JsonRenderer.Stream json = new JsonRenderer(Optional.ofNullable(batchSize)).begin(out, summary);
                 protolyte.stream(inputs, summary, r -> write(() -> json.document(r)));
                 json.end(summary);
             }
@@ -165,8 +195,13 @@ public final class CheckCommand implements Callable<Integer> {
                 protolyte.stream(inputs, summary, r -> write(() -> sarif.document(r)));
                 sarif.end(summary);
             }
+            case html -> {
+                HtmlRenderer.Page page = new HtmlRenderer(Optional.ofNullable(batchSize)).begin(out, summary);
+                protolyte.stream(inputs, summary, r -> write(() -> page.document(r)));
+                page.end(summary);
+            }
             case text -> {
-                TextRenderer text = new TextRenderer(species == SpeciesShown.all);
+                TextRenderer text = new TextRenderer(species == SpeciesShown.all, Optional.ofNullable(batchSize));
                 out.write(text.header(summary.toolVersion(), summary.asOf()));
                 protolyte.stream(inputs, summary, r -> write(() -> out.write(text.document(r))));
                 out.write(text.footer(summary.skipped(), summary.documents(), summary::count));

@@ -53,6 +53,11 @@ public final class Plot {
                 Objects.requireNonNull(y, "y"), List.of(), List.of(), List.of(), List.of());
     }
 
+    /** The plot's title, as given: the SVG's accessible name; the page shows it in the figure's caption. */
+    public String title() {
+        return title;
+    }
+
     /** A line through (xs[i], ys[i]) in the order given. */
     public Plot line(String name, double[] xs, double[] ys, Stroke stroke) {
         if (xs.length != ys.length) {
