@@ -39,6 +39,24 @@ public final class HtmlRenderer {
         this.batchSize = batchSize;
     }
 
+    /** The page of a whole run at once. */
+    public String render(RunReport run) {
+        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        run.reports().forEach(summary::add);
+        run.skipped().forEach(summary::skip);
+        java.io.StringWriter out = new java.io.StringWriter();
+        try {
+            Page page = begin(out, summary);
+            for (DocumentReport r : run.reports()) {
+                page.document(r);
+            }
+            page.end(summary);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);     // a StringWriter does not throw
+        }
+        return out.toString();
+    }
+
     /** A page written as it goes: {@link #begin}, then {@link Page#document} per report, then {@link Page#end}. */
     public Page begin(Writer out, RunSummary run) throws IOException {
         out.write("<!DOCTYPE html>" + NL + "<html lang=\"en\">" + NL + "<head>" + NL + "<meta charset=\"utf-8\">" + NL
