@@ -162,11 +162,12 @@ public final class HtmlRenderer {
                     .append(": ").append(esc(u.reason())).append("</p>").append(NL));
         }
         b.append("<h3>Conditions</h3>").append(NL);
-        conditions(b, a.conditions());
+        Systems systems = new Systems(a.recipe().library());
+        conditions(b, a.conditions(), systems);
         a.working().ifPresent(w -> {
             b.append("<h3>Working solution, diluted ").append(Numbers.significant(w.dilution().factor(), 4).toPlainString())
                     .append("-fold with ").append(esc(w.dilution().diluent())).append("</h3>").append(NL);
-            conditions(b, w.conditions());
+            conditions(b, w.conditions(), systems);
             List<String> shifts = new ArrayList<>();
             for (int i = 0; i < a.conditions().size(); i++) {
                 int at = i;
@@ -229,9 +230,10 @@ public final class HtmlRenderer {
     }
 
     /** One row per condition: T, pH ± u, β, I, osmolality and the main forms. */
-    private static void conditions(StringBuilder b, List<ConditionResult> conditions) {
+    private static void conditions(StringBuilder b, List<ConditionResult> conditions, Systems systems) {
         b.append("<table class=\"conditions\"><thead><tr><th>condition</th><th>T (°C)</th><th>pH</th>"
-                + "<th>β (mmol/L/pH)</th><th>I (mol/kg)</th><th>mOsm/kg</th><th>main buffering systems</th></tr></thead><tbody>");
+                + "<th>β (mmol/L/pH)</th><th>I (mol/kg)</th><th>mOsm/kg</th><th>β carried by</th><th>main forms</th>"
+                + "</tr></thead><tbody>");
         for (ConditionResult c : conditions) {
             b.append("<tr><td>").append(esc(c.condition().name())).append(c.condition().implicit() ? "*" : "")
                     .append("</td><td class=\"number\">").append(String.format(Locale.ROOT, "%.1f",
@@ -253,9 +255,11 @@ public final class HtmlRenderer {
                     main.add(String.format(Locale.ROOT, "%s %.0f %%", esc(x.system()), 100 * x.share()));
                     carried += x.share();
                 }
-                b.append(String.join(", ", main)).append("</td>");
+                b.append(String.join(", ", main)).append("</td><td>")
+                        .append(esc(TextRenderer.speciation(c, s, systems, false).replace(" (--species all)", "")))
+                        .append("</td>");
             } else {
-                b.append("<td colspan=\"5\">no result: see the diagnostics</td>");
+                b.append("<td colspan=\"6\">no result: see the diagnostics</td>");
             }
             b.append("</tr>");
         }

@@ -303,7 +303,7 @@ public final class TextRenderer {
      * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
      * the rest.
      */
-    private static String speciation(ConditionResult c, EquilibriumState s, Systems systems, boolean all) {
+    static String speciation(ConditionResult c, EquilibriumState s, Systems systems, boolean all) {
         Map<String, List<SpeciesAmount>> bySystem = new LinkedHashMap<>();
         for (SpeciesAmount sp : s.species()) {
             if (systems.isSystem(sp.component()) && sp.fractionOfComponent() >= 0.05) {
