@@ -472,24 +472,8 @@ public final class HtmlRenderer {
         b.append("</section>").append(NL);
     }
 
-    /** Text from a document, a library or a file name, safe in HTML text and attributes; control characters dropped. */
+    /** Text from a document, a library or a file name, safe in HTML text and attributes (as in the plots' SVG). */
     static String esc(String s) {
-        StringBuilder b = new StringBuilder(s.length());
-        s.codePoints().forEach(c -> {
-            switch (c) {
-                case '&' -> b.append("&amp;");
-                case '<' -> b.append("&lt;");
-                case '>' -> b.append("&gt;");
-                case '"' -> b.append("&quot;");
-                case '\'' -> b.append("&#39;");
-                default -> {
-                    if (c >= 0x20 && c != 0x7f && !(c >= 0x80 && c < 0xa0) && Character.isDefined(c)
-                            && Character.getType(c) != Character.SURROGATE) {
-                        b.appendCodePoint(c);
-                    }
-                }
-            }
-        });
-        return b.toString();
+        return org.protolyte.report.plot.Format.text(s);
     }
 }

@@ -4,9 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -37,22 +35,8 @@ class MainCommandLineTest {
 
     /** Runs the command in-process with standard output and error captured. */
     static Result run(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code;
-        try {
-            System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(err, true, StandardCharsets.UTF_8));
-            code = Main.run(args);
-            System.out.flush();
-            System.err.flush();
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
-        return new Result(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+        InProcess.Result r = InProcess.run(args);
+        return new Result(r.exitCode(), r.out(), r.err());
     }
 
     private static String doc(String name) {

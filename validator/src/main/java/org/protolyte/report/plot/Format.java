@@ -5,7 +5,7 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 
 /** Numbers and text as they go into the SVG and the table: Locale-free, escaped, never NaN. */
-final class Format {
+public final class Format {
 
     /** Digits of a number in the table: more than the constants justify, enough to read a curve back. */
     private static final MathContext TABLE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
@@ -43,7 +43,7 @@ final class Format {
      * tabs and line breaks become spaces; other control characters, bidi controls, lone surrogates and
      * non-characters are dropped, as XML forbids them or they could reorder what the reader sees.
      */
-    static String text(String s) {
+    public static String text(String s) {
         StringBuilder b = new StringBuilder(s.length() + 8);
         for (int i = 0; i < s.length(); ) {
             int c = s.codePointAt(i);
