@@ -87,7 +87,7 @@ class SampleReportsTest {
         return b.toString().strip();
     }
 
-    /** Every line of the text report of every sample fits a terminal 100 columns wide. */
+    /** Every line of the text report of every sample fits a terminal 100 columns wide, apart from long names. */
     @org.junit.jupiter.api.Test
     void everySamplesTextReportFitsOneHundredColumns() throws java.io.IOException {
         Path samples = Path.of(System.getProperty("protolyte.projectRoot", ".."), "sample-formulations");
@@ -99,7 +99,9 @@ class SampleReportsTest {
         String text = new TextRenderer(true, java.util.Optional.of(org.protolyte.units.Quantity.parse("250 L")))
                 .render(PROTOLYTE.check(files));
         assertTrue(text.lines().count() > 400, "all samples reported");
-        text.lines().forEach(l -> assertTrue(l.codePointCount(0, l.length()) <= TextRenderer.WIDTH,
+        // apart from long names: a line past the width holds one word after its indent (or a document's "== ")
+        text.lines().forEach(l -> assertTrue(l.codePointCount(0, l.length()) <= TextRenderer.WIDTH
+                        || !l.strip().replaceFirst("^== ", "").contains(" "),
                 () -> l.codePointCount(0, l.length()) + " columns: " + l));
     }
 
