@@ -358,6 +358,13 @@ public final class Protolyte {
         return check(new Input(file, false, root)).report().orElseThrow();
     }
 
+    /** Checks bytes read from a folder: a batch record's master is read from it and must stay inside it. */
+    public DocumentReport check(String source, byte[] content, Path folder) {
+        // the folder stands for the document's place: a master path is relative to it (BatchRecordReader)
+        Input in = new Input(source, Optional.of(folder), false, folder, Optional.of(content), Optional.empty());
+        return check(in).report().orElseThrow();
+    }
+
     /** Checks bytes that have no folder: a batch record among them must embed its master. */
     public DocumentReport check(String source, byte[] content) {
         return check(Input.ofBytes(source, content)).report().orElseThrow();

@@ -22,7 +22,18 @@ public final class Main implements Runnable {
     }
 
     static int run(String... args) {
+        return run(null, null, args);
+    }
+
+    /** The command with its output to {@code out} and {@code err} (standard output and error where null). */
+    static int run(java.io.PrintWriter out, java.io.PrintWriter err, String... args) {
         CommandLine cl = new CommandLine(new Main()).setCaseInsensitiveEnumValuesAllowed(true);
+        if (out != null) {
+            cl.setOut(out);
+        }
+        if (err != null) {
+            cl.setErr(err);
+        }
         cl.setExecutionExceptionHandler((ex, cmd, parsed) -> {
             cmd.getErr().println("protolyte: internal fault: " + Printable.text(ex.toString()));
             return 4;

@@ -62,7 +62,8 @@ public final class BatchRecordReader {
     }
 
     /**
-     * @param file the record's path, or empty when it was given as bytes (then only an embedded master is possible)
+     * @param file the record's path; its folder where it was given as bytes read from one; empty for bytes without a
+     *             folder (then only an embedded master is possible)
      * @param root the folder tree a master path must stay in
      */
     public BatchRecord read(SourceDocument doc, Optional<Path> file, Optional<Path> root) {
@@ -139,7 +140,9 @@ public final class BatchRecordReader {
         }
         try {
             // named as the user reaches it: beside the record as the record was named (the real path is for reading)
-            return formulations.read(json.read(file.orElseThrow().resolveSibling(text).normalize().toString(), bytes));
+            Path place = file.orElseThrow();
+            return formulations.read(json.read((Files.isDirectory(place) ? place.resolve(text) : place.resolveSibling(text))
+                    .normalize().toString(), bytes));
         } catch (DocumentException e) {
             throw new DocumentException(doc.problem("/master/path", "the master '" + text + "' is not a valid "
                     + "formulation: " + e.problems().get(0)));
@@ -169,7 +172,8 @@ public final class BatchRecordReader {
         }
         try {
             Path tree = root.get().toRealPath();
-            Path resolved = file.get().toRealPath().getParent().resolve(relative).normalize();
+            Path place = file.get().toRealPath();
+            Path resolved = (Files.isDirectory(place) ? place : place.getParent()).resolve(relative).normalize();
             if (!resolved.startsWith(tree)) {
                 throw outside(doc, text, tree);       // climbs out of the tree by its own '..'
             }

@@ -1,0 +1,272 @@
+package org.protolyte.api;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
+
+import org.protolyte.Protolyte;
+import org.protolyte.document.DocumentException;
+import org.protolyte.document.Problem;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.rules.CheckKinds;
+import org.protolyte.rules.Checker;
+import org.protolyte.rules.RuleBook;
+import org.protolyte.rules.WaiverFile;
+import org.protolyte.rules.Waivers;
+import org.protolyte.substance.LibraryLoader;
+import org.protolyte.substance.SubstanceLibrary;
+
+/**
+ * Checks formulation documents and batch records. Built once with {@link #builder()}, then immutable and safe to
+ * share between threads: a service builds one and checks every request with it.
+ *
+ * <pre>{@code
+ * Validator validator = Validator.builder().failOn(Severity.ERROR).build();
+ * Result result = validator.check(Source.of(Path.of("buffer.json")));
+ * if (result.status() != Status.PASS) {
+ *     System.out.print(result.render(Format.TEXT));
+ * }
+ * }</pre>
+ */
+public final class Validator {
+
+    private final Protolyte protolyte;
+    private final SubstanceLibrary library;
+    private final List<RuleSummary> rules;
+    private final Clock clock;
+    private final Executor executor;
+
+    private Validator(Protolyte protolyte, SubstanceLibrary library, List<RuleSummary> rules, Clock clock,
+                      Executor executor) {
+        this.protolyte = protolyte;
+        this.library = library;
+        this.rules = List.copyOf(rules);
+        this.clock = clock;
+        this.executor = executor;
+    }
+
+    public static Builder builder() {
+        return new Builder();
+    }
+
+    /** The tool's version, as the reports give it. */
+    public static String version() {
+        return Protolyte.version();
+    }
+
+    /** One rule of the packs this validator may apply. */
+    public record RuleSummary(String id, String pack, Severity severity, String summary) {
+    }
+
+    /** Every rule of the packs this validator holds, in pack order. */
+    public List<RuleSummary> rules() {
+        return rules;
+    }
+
+    /** Checks one document; never throws for what the document holds (an unusable one is {@link Status#INVALID}). */
+    public Result check(Source source) {
+        DocumentReport r = source.folder().isPresent()
+                ? protolyte.check(source.name(), source.bytes(), source.folder().get())
+                : protolyte.check(source.name(), source.bytes());
+        return new Result(r, clock.instant(), Protolyte.version(), library.files());
+    }
+
+    /** Checks several documents on the validator's executor; the results in the order of the sources. */
+    public List<Result> checkAll(List<Source> sources) {
+        List<CompletableFuture<Result>> running = new ArrayList<>();
+        for (Source s : sources) {
+            running.add(CompletableFuture.supplyAsync(() -> check(s), executor));
+        }
+        return running.stream().map(CompletableFuture::join).toList();
+    }
+
+    /** Collects a validator's configuration; {@link #build} checks all of it at once. Not thread-safe. */
+    public static final class Builder {
+
+        private record Named(String name, Optional<byte[]> content, Optional<Path> file) {
+        }
+
+        private final List<Named> libraries = new ArrayList<>();
+        private final List<Named> packs = new ArrayList<>();
+        private final List<String> onlyPacks = new ArrayList<>();
+        private Optional<Named> waivers = Optional.empty();
+        private Severity failOn = Severity.ERROR;
+        private Clock clock = Clock.systemUTC();
+        private Executor executor = Runnable::run;
+        private boolean plots;
+
+        private Builder() {
+        }
+
+        /** A site's substance library, read when the validator is built, extending the shipped one. */
+        public Builder substanceLibrary(Path file) {
+            libraries.add(new Named(file.toString(), Optional.empty(), Optional.of(file)));
+            return this;
+        }
+
+        /** A site's substance library from bytes, named as reports will name it. */
+        public Builder substanceLibrary(String name, byte[] content) {
+            libraries.add(new Named(name, Optional.of(content.clone()), Optional.empty()));
+            return this;
+        }
+
+        /** A rule pack added to the packs each document's intended use chooses. */
+        public Builder rulePack(Path file) {
+            packs.add(new Named(file.toString(), Optional.empty(), Optional.of(file)));
+            return this;
+        }
+
+        /** A rule pack from bytes, added to the packs each document's intended use chooses. */
+        public Builder rulePack(String name, byte[] content) {
+            packs.add(new Named(name, Optional.of(content.clone()), Optional.empty()));
+            return this;
+        }
+
+        /** Only these packs (shipped names, or names of packs added here) judge every document. */
+        public Builder onlyRulePacks(String... names) {
+            onlyPacks.addAll(List.of(names));
+            return this;
+        }
+
+        /** The lowest severity that fails a document (default {@link Severity#ERROR}). */
+        public Builder failOn(Severity severity) {
+            this.failOn = Objects.requireNonNull(severity);
+            return this;
+        }
+
+        /** The waiver file QA holds; approval and expiry are judged on the clock's date. */
+        public Builder waivers(Path file) {
+            this.waivers = Optional.of(new Named(file.toString(), Optional.empty(), Optional.of(file)));
+            return this;
+        }
+
+        public Builder waivers(String name, byte[] content) {
+            this.waivers = Optional.of(new Named(name, Optional.of(content.clone()), Optional.empty()));
+            return this;
+        }
+
+        /** The clock of the reports' time stamps and of the waivers' date (default: the system clock, UTC). */
+        public Builder clock(Clock clock) {
+            this.clock = Objects.requireNonNull(clock);
+            return this;
+        }
+
+        /** Where {@link Validator#checkAll} runs its checks (default: the calling thread). */
+        public Builder executor(Executor executor) {
+            this.executor = Objects.requireNonNull(executor);
+            return this;
+        }
+
+        /**
+         * Also trace the points behind the plots: HTML draws them, and JSON gives them as {@code --curves} does (a
+         * hundred more solves per document).
+         */
+        public Builder plots(boolean plots) {
+            this.plots = plots;
+            return this;
+        }
+
+        /** The validator, or one exception that names every problem of the configuration. */
+        public Validator build() throws ConfigurationException {
+            SchemaCatalog schemas = new SchemaCatalog();
+            List<String> problems = new ArrayList<>();
+            LibraryLoader loader = new LibraryLoader(schemas).addShipped();
+            for (Named l : libraries) {
+                read(l, "substance library", problems).ifPresent(bytes -> {
+                    try {
+                        loader.add(l.name(), bytes, true);
+                    } catch (DocumentException e) {
+                        describe("substance library " + l.name(), e, problems);
+                    }
+                });
+            }
+            RuleBook book = RuleBook.shipped(schemas, CheckKinds.load());
+            List<String> added = new ArrayList<>();
+            for (Named p : packs) {
+                read(p, "rule pack", problems).ifPresent(bytes -> {
+                    try {
+                        added.add(book.add(p.name(), bytes, false).name());
+                    } catch (DocumentException e) {
+                        describe("rule pack " + p.name(), e, problems);
+                    }
+                });
+            }
+            for (String name : onlyPacks) {
+                if (book.pack(name).isEmpty()) {
+                    problems.add("unknown rule pack '" + name + "': not shipped (" + String.join(", ",
+                            book.packs().keySet()) + ") and not added");
+                }
+            }
+            Waivers held = Waivers.none(LocalDate.now(clock));
+            if (waivers.isPresent()) {
+                Named w = waivers.get();
+                Optional<byte[]> bytes = read(w, "waiver file", problems);
+                if (bytes.isPresent()) {
+                    try {
+                        held = new Waivers(WaiverFile.read(schemas, w.name(), bytes.get()), LocalDate.now(clock));
+                    } catch (DocumentException e) {
+                        describe("waiver file " + w.name(), e, problems);
+                    }
+                }
+            }
+            SubstanceLibrary library = null;
+            Checker checker = null;
+            if (problems.isEmpty()) {
+                try {
+                    library = loader.build();
+                } catch (DocumentException e) {
+                    describe("substance libraries", e, problems);
+                }
+                try {
+                    checker = new Checker(book, onlyPacks, onlyPacks.isEmpty() ? added : List.of());
+                } catch (DocumentException e) {
+                    describe("rule packs", e, problems);
+                }
+            }
+            if (!problems.isEmpty()) {
+                throw new ConfigurationException(problems);
+            }
+            Protolyte p = new Protolyte(schemas, library, checker, org.protolyte.rules.Severity.valueOf(failOn.name()),
+                    held);
+            List<RuleSummary> rules = new ArrayList<>();
+            book.rules(new ArrayList<>(book.packs().keySet())).forEach(r -> rules.add(new RuleSummary(r.id(), r.pack(),
+                    Severity.valueOf(r.severity().name()), r.summary())));
+            return new Validator(plots ? p.withCurves() : p, library, rules, clock, executor);
+        }
+
+        private static Optional<byte[]> read(Named n, String what, List<String> problems) {
+            if (n.content().isPresent()) {
+                return n.content();
+            }
+            Path file = n.file().orElseThrow();
+            try {
+                if (!Files.isRegularFile(file)) {
+                    problems.add(what + " " + file + ": " + (Files.isDirectory(file) ? "is a folder, not a file"
+                            : "file not found"));
+                    return Optional.empty();
+                }
+                try (var in = Files.newInputStream(file)) {
+                    return Optional.of(Protolyte.readBounded(in));
+                }
+            } catch (IOException e) {
+                problems.add(what + " " + file + ": cannot be read: " + e.getMessage());
+                return Optional.empty();
+            }
+        }
+
+        private static void describe(String what, DocumentException e, List<String> problems) {
+            for (Problem p : e.problems()) {
+                problems.add(what + ": " + p);
+            }
+        }
+    }
+}

@@ -1,0 +1,153 @@
+package org.protolyte.api;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.Protolyte;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.report.DocumentReport;
+import org.protolyte.substance.LibraryLoader;
+
+/** The library's API: built once, immutable, thread-safe; plain records out; every configuration problem at once. */
+class ValidatorTest {
+
+    private static final Path SAMPLES = Path.of(System.getProperty("protolyte.projectRoot", "../.."),
+            "sample-formulations");
+
+    /** The README's example, word for word (ReadmeExampleTest holds the README to it). */
+    static Status readmeExample(Path file) throws ConfigurationException {
+        // README example begins
+        Validator validator = Validator.builder().failOn(Severity.ERROR).build();
+        Result result = validator.check(Source.of(file));
+        if (result.status() != Status.PASS) {
+            System.out.print(result.render(Format.TEXT));
+        }
+        // README example ends
+        return result.status();
+    }
+
+    @Test
+    void theReadmeExampleRuns() throws ConfigurationException {
+        assertEquals(Status.PASS, readmeExample(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
+        assertEquals(Status.FAIL, readmeExample(SAMPLES.resolve("parenteral-citrate-buffer-off-target.json")));
+    }
+
+    @Test
+    void theReadmeShowsTheExampleAsTheTestRunsIt() throws Exception {
+        String test = Files.readString(Path.of("src/test/java/org/protolyte/api/ValidatorTest.java"));
+        String snippet = test.substring(test.indexOf("// README example begins") + 25, test.indexOf("        // README example ends"));
+        String readme = Files.readString(SAMPLES.getParent().resolve("README.md"));
+        for (String line : snippet.lines().map(String::strip).filter(l -> !l.isEmpty()).toList()) {
+            assertTrue(readme.contains(line), "README lacks the example's line: " + line);
+        }
+    }
+
+    @Test
+    void aResultCarriesWhatTheEngineComputedAsPlainRecords() throws Exception {
+        Path file = SAMPLES.resolve("cell-culture-hepes-basal-medium.json");
+        Result r = Validator.builder().build().check(Source.of(file));
+        DocumentReport direct = new Protolyte(new SchemaCatalog(), LibraryLoader.shipped(new SchemaCatalog())).check(file);
+        assertEquals(Status.PASS, r.status());
+        assertEquals(0, r.exitCode());
+        assertEquals(direct.id(), r.id());
+        String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(file)));
+        assertEquals(sha, r.sha256().orElseThrow(), "the SHA-256 of the bytes, by the JDK's own digest");
+        List<ConditionSummary> c = r.conditions();
+        assertEquals(direct.analysis().orElseThrow().conditions().size(), c.size());
+        for (int i = 0; i < c.size(); i++) {
+            var d = direct.analysis().orElseThrow().conditions().get(i);
+            assertEquals(d.condition().name(), c.get(i).name());
+            assertEquals(d.state().orElseThrow().pH(), c.get(i).pH().orElseThrow(), 1e-12);
+            assertEquals(d.bufferCapacityPerLitre() * 1000, c.get(i).bufferCapacity().orElseThrow(), 1e-12);
+        }
+        assertEquals(direct.findings().size(), r.findings().size());
+        assertTrue(r.rulePacks().keySet().stream().anyMatch(p -> p.startsWith("cell-culture")), r.rulePacks().toString());
+    }
+
+    @Test
+    void everyConfigurationProblemComesBackInOneException() {
+        ConfigurationException e = assertThrows(ConfigurationException.class, () -> Validator.builder()
+                .substanceLibrary(Path.of("no-such-library.json"))
+                .rulePack("site-pack.json", "{\"not\": \"a pack\"}".getBytes(StandardCharsets.UTF_8))
+                .onlyRulePacks("no-such-pack")
+                .waivers("qa-waivers.json", "[]".getBytes(StandardCharsets.UTF_8))
+                .build());
+        List<String> p = e.problems();
+        assertTrue(p.stream().anyMatch(x -> x.startsWith("substance library no-such-library.json: file not found")), p::toString);
+        assertTrue(p.stream().anyMatch(x -> x.startsWith("rule pack site-pack.json")), p::toString);
+        assertTrue(p.stream().anyMatch(x -> x.startsWith("unknown rule pack 'no-such-pack'")), p::toString);
+        assertTrue(p.stream().anyMatch(x -> x.startsWith("waiver file qa-waivers.json")), p::toString);
+    }
+
+    @Test
+    void theClockStampsTheReport() throws Exception {
+        Instant at = Instant.parse("2026-06-01T08:30:00Z");
+        Validator v = Validator.builder().clock(Clock.fixed(at, ZoneOffset.UTC)).build();
+        Result r = v.check(Source.of(SAMPLES.resolve("laboratory-tris-buffer-37c.json")));
+        assertEquals(at, r.checkedAt());
+        assertTrue(r.render(Format.JSON).contains("\"generatedAt\":\"2026-06-01T08:30:00Z\"")
+                || r.render(Format.JSON).contains("\"generatedAt\" : \"2026-06-01T08:30:00Z\""), "the JSON's time stamp");
+        assertTrue(r.render(Format.HTML).contains("datetime=\"2026-06-01T08:30:00Z\""), "the HTML's time stamp");
+    }
+
+    /** One validator from many threads gives what it gives from one, for every sample. */
+    @Test
+    void oneValidatorServesManyThreads() throws Exception {
+        List<Source> sources;
+        try (Stream<Path> s = Files.list(SAMPLES)) {
+            sources = s.filter(p -> p.toString().endsWith(".json")).sorted().map(Source::of).toList();
+        }
+        Validator alone = Validator.builder().build();
+        List<String> expected = sources.stream().map(x -> alone.check(x).render(Format.JSON)).toList();
+        ExecutorService pool = Executors.newFixedThreadPool(4);
+        try {
+            Instant at = Instant.EPOCH;
+            Validator shared = Validator.builder().executor(pool).clock(Clock.fixed(at, ZoneOffset.UTC)).build();
+            Validator fixed = Validator.builder().clock(Clock.fixed(at, ZoneOffset.UTC)).build();
+            List<String> inOrder = sources.stream().map(x -> fixed.check(x).render(Format.JSON)).toList();
+            for (int round = 0; round < 3; round++) {
+                List<String> parallel = shared.checkAll(sources).stream().map(x -> x.render(Format.JSON)).toList();
+                assertEquals(inOrder, parallel, "round " + round);
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        assertEquals(sources.size(), expected.size());
+    }
+
+    @Test
+    void aBatchRecordReadsItsMasterFromTheSourcesFolderOnly() throws Exception {
+        Path record = SAMPLES.resolve("batch-records/br-clean.json");
+        Validator v = Validator.builder().build();
+        Result inFolder = v.check(Source.of(record));
+        assertEquals(Status.PASS, inFolder.status(), () -> inFolder.render(Format.TEXT));
+        Result bare = v.check(Source.of("br-clean.json", Files.readAllBytes(record)));
+        assertEquals(Status.INVALID, bare.status(), "without a folder the master cannot be read");
+        Result named = v.check(Source.of("br-clean.json", Files.readAllBytes(record), record.getParent()));
+        assertEquals(Status.PASS, named.status());
+    }
+
+    @Test
+    void aSourceNeverChanges() {
+        byte[] bytes = "{}".getBytes(StandardCharsets.UTF_8);
+        Source s = Source.of("x.json", bytes);
+        bytes[0] = 'x';
+        s.content()[1] = 'y';
+        assertEquals("{}", new String(s.content(), StandardCharsets.UTF_8));
+    }
+}
