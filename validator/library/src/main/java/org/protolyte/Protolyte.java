@@ -218,25 +218,33 @@ public final class Protolyte {
             return t;
         });
         try {
-            // a window of documents in flight, handed on in input order: parallel, yet the report reads as a list
-            Deque<Future<Outcome>> window = new ArrayDeque<>();
-            int next = 0;
-            while (next < inputs.size() || !window.isEmpty()) {
-                while (next < inputs.size() && window.size() < 4 * threads) {
-                    Input in = inputs.get(next++);
-                    window.add(pool.submit(() -> check(in)));
-                }
-                Outcome o = join(window.poll());
-                o.skipped().ifPresent(summary::skip);
-                o.report().ifPresent(r -> {
-                    summary.add(r);
-                    each.accept(r);
-                });
-            }
-            return summary;
+            return stream(inputs, summary, each, pool, 4 * threads);
         } finally {
             pool.shutdownNow();
         }
+    }
+
+    /**
+     * The same on the caller's executor, with at most {@code window} documents in flight, handed on in input order:
+     * parallel, yet the report reads as a list.
+     */
+    public RunSummary stream(List<Input> inputs, RunSummary summary, Consumer<DocumentReport> each,
+                             java.util.concurrent.Executor executor, int window) {
+        Deque<Future<Outcome>> inFlight = new ArrayDeque<>();
+        int next = 0;
+        while (next < inputs.size() || !inFlight.isEmpty()) {
+            while (next < inputs.size() && inFlight.size() < Math.max(1, window)) {
+                Input in = inputs.get(next++);
+                inFlight.add(java.util.concurrent.CompletableFuture.supplyAsync(() -> check(in), executor));
+            }
+            Outcome o = join(inFlight.poll());
+            o.skipped().ifPresent(summary::skip);
+            o.report().ifPresent(r -> {
+                summary.add(r);
+                each.accept(r);
+            });
+        }
+        return summary;
     }
 
     private static Outcome join(Future<Outcome> f) {

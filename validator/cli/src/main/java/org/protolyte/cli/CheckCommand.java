@@ -11,13 +11,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
+import org.protolyte.Inputs;
 import org.protolyte.Protolyte;
 import org.protolyte.analysis.Robustness;
-import org.protolyte.report.HtmlRenderer;
-import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunSummary;
-import org.protolyte.report.SarifRenderer;
-import org.protolyte.report.TextRenderer;
+import org.protolyte.report.RunWriter;
 import org.protolyte.rules.RuleBook;
 import org.protolyte.rules.Severity;
 import org.protolyte.report.Printable;
@@ -147,7 +145,11 @@ public final class CheckCommand implements Callable<Integer> {
             if (curves || format == Format.html) {
                 protolyte = protolyte.withCurves();
             }
-            found = Inputs.expand(files, excludes, System.in);
+            try {
+                found = Inputs.expand(files, excludes, System.in);
+            } catch (Inputs.Unusable e) {
+                throw new Setup.UsageException(e.getMessage());
+            }
             target = output == null ? Optional.empty() : Optional.of(ReportFile.of(output, readBy(found)));
         } catch (Setup.UsageException e) {
             return Setup.usage(err, e);
@@ -183,42 +185,9 @@ public final class CheckCommand implements Callable<Integer> {
     private int report(Protolyte protolyte, Inputs.Found found, Writer out) throws IOException {
         RunSummary summary = protolyte.newSummary(java.util.Optional.ofNullable(asOf));
         found.excluded().forEach(summary::skip);
-        List<Protolyte.Input> inputs = found.inputs();
-        switch (format) {
-            case json -> {
-                JsonRenderer.Stream json = new JsonRenderer(Optional.ofNullable(batchSize)).begin(out, summary);
-                protolyte.stream(inputs, summary, r -> write(() -> json.document(r)));
-                json.end(summary);
-            }
-            case sarif -> {
-                SarifRenderer.Log sarif = new SarifRenderer().begin(out);
-                protolyte.stream(inputs, summary, r -> write(() -> sarif.document(r)));
-                sarif.end(summary);
-            }
-            case html -> {
-                HtmlRenderer.Page page = new HtmlRenderer(Optional.ofNullable(batchSize)).begin(out, summary);
-                protolyte.stream(inputs, summary, r -> write(() -> page.document(r)));
-                page.end(summary);
-            }
-            case text -> {
-                TextRenderer text = new TextRenderer(species == SpeciesShown.all, Optional.ofNullable(batchSize));
-                out.write(text.header(summary.toolVersion(), summary.asOf()));
-                protolyte.stream(inputs, summary, r -> write(() -> out.write(text.document(r))));
-                out.write(text.footer(summary.skipped(), summary.documents(), summary::count));
-            }
-        }
+        new RunWriter(RunWriter.Format.valueOf(format.name().toUpperCase(java.util.Locale.ROOT)),
+                species == SpeciesShown.all, Optional.ofNullable(batchSize))
+                .write(out, summary, each -> protolyte.stream(found.inputs(), summary, each));
         return summary.exitCode();
-    }
-
-    private interface IoAction {
-        void run() throws IOException;
-    }
-
-    private static void write(IoAction a) {
-        try {
-            a.run();
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
     }
 }

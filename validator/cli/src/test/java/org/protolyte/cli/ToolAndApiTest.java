@@ -84,4 +84,24 @@ class ToolAndApiTest {
             assertEquals(timeless(cli.out()), timeless(r.render(f)), f + " report of " + sample);
         }
     }
+
+    /** A folder through the API gives the command line's report of that folder, every format, time stamp apart. */
+    @Test
+    void theApiChecksAFolderAsTheCommandLineDoes() throws Exception {
+        Path folder = ROOT.resolve("sample-formulations");
+        org.protolyte.api.Run run = Validator.builder().plots(true).build().check(List.of(folder), List.of("site-library/"));
+        assertTrue(run.results().size() > 15, "every sample: " + run.results().size());
+        assertTrue(run.skipped().stream().anyMatch(s -> s.reason().contains("site-library/")), run.skipped()::toString);
+        for (Format f : Format.values()) {
+            List<String> args = new ArrayList<>(List.of("check", "--format", f.name().toLowerCase(java.util.Locale.ROOT),
+                    "--exclude", "site-library/"));
+            if (f == Format.JSON) {
+                args.add("--curves");
+            }
+            args.add(folder.toString());
+            MainCommandLineTest.Result cli = MainCommandLineTest.run(args.toArray(String[]::new));
+            assertEquals(run.exitCode(), cli.exitCode(), f + ": " + cli.err());
+            assertEquals(timeless(cli.out()), timeless(run.render(f)), f + " report of the folder");
+        }
+    }
 }

@@ -15,11 +15,8 @@ import java.util.OptionalInt;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.report.DocumentReport;
-import org.protolyte.report.HtmlRenderer;
-import org.protolyte.report.JsonRenderer;
 import org.protolyte.report.RunSummary;
-import org.protolyte.report.SarifRenderer;
-import org.protolyte.report.TextRenderer;
+import org.protolyte.report.RunWriter;
 
 /**
  * What a validator says about one document. Immutable; {@link #render} writes the report of this document alone, with
@@ -130,29 +127,14 @@ public final class Result {
     /** This document's report written to {@code out}, as the command line writes a run of one document. */
     public void render(Format format, Writer out) throws IOException {
         RunSummary run = new RunSummary(toolVersion, checkedAt, libraryFiles);
-        run.add(report);
-        switch (format) {
-            case JSON -> {
-                JsonRenderer.Stream json = new JsonRenderer().begin(out, run);
-                json.document(report);
-                json.end(run);
-            }
-            case SARIF -> {
-                SarifRenderer.Log sarif = new SarifRenderer().begin(out);
-                sarif.document(report);
-                sarif.end(run);
-            }
-            case HTML -> {
-                HtmlRenderer.Page page = new HtmlRenderer(Optional.empty()).begin(out, run);
-                page.document(report);
-                page.end(run);
-            }
-            case TEXT -> {
-                TextRenderer text = new TextRenderer();
-                out.write(text.header(toolVersion, Optional.empty()));
-                out.write(text.document(report));
-                out.write(text.footer(List.of(), 1, run::count));
-            }
-        }
+        new RunWriter(RunWriter.Format.valueOf(format.name()), false, Optional.empty()).write(out, run, each -> {
+            run.add(report);
+            each.accept(report);
+        });
+    }
+
+    /** The internal report, for a run of several documents. */
+    DocumentReport report() {
+        return report;
     }
 }

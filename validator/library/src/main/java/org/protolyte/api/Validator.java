@@ -80,6 +80,37 @@ public final class Validator {
         return new Result(r, clock.instant(), Protolyte.version(), library.files());
     }
 
+    /**
+     * Checks files and folders as {@code protolyte check} does: a folder is every *.json below it in order of relative
+     * path, less what its ignore file ({@value org.protolyte.Protolyte#IGNORE_FILE}) or an {@code excludes} glob leaves
+     * out; companions found in a folder (libraries, packs, waivers) are passed over and listed. Runs on the
+     * validator's executor.
+     *
+     * @throws ConfigurationException where a name or a pattern cannot be used (an empty name, a bad glob, a folder
+     *                                without documents)
+     */
+    public Run check(List<Path> filesOrFolders, List<String> excludes) throws ConfigurationException {
+        org.protolyte.Inputs.Found found;
+        try {
+            if (filesOrFolders.stream().anyMatch(p -> p.toString().equals(org.protolyte.Inputs.STANDARD_INPUT))) {
+                throw new ConfigurationException(List.of("'-' (standard input) is the command line's; give a Source"));
+            }
+            found = org.protolyte.Inputs.expand(filesOrFolders, excludes, java.io.InputStream.nullInputStream());
+        } catch (org.protolyte.Inputs.Unusable e) {
+            throw new ConfigurationException(List.of(e.getMessage()));
+        } catch (IOException e) {
+            throw new ConfigurationException(List.of("cannot read the files named: " + e.getMessage()));
+        }
+        java.time.Instant at = clock.instant();
+        org.protolyte.report.RunSummary summary = new org.protolyte.report.RunSummary(Protolyte.version(), at,
+                library.files());
+        found.excluded().forEach(summary::skip);
+        List<Result> results = new ArrayList<>();
+        protolyte.stream(found.inputs(), summary, r -> results.add(new Result(r, at, Protolyte.version(),
+                library.files())), executor, 16);
+        return new Run(results, summary.skipped(), summary);
+    }
+
     /** Checks several documents on the validator's executor; the results in the order of the sources. */
     public List<Result> checkAll(List<Source> sources) {
         List<CompletableFuture<Result>> running = new ArrayList<>();

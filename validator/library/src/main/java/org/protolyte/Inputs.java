@@ -1,4 +1,4 @@
-package org.protolyte.cli;
+package org.protolyte;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -20,7 +20,6 @@ import java.util.List;
 import java.util.Optional;
 import java.util.regex.PatternSyntaxException;
 
-import org.protolyte.Protolyte;
 import org.protolyte.report.Skipped;
 
 /**
@@ -29,20 +28,29 @@ import org.protolyte.report.Skipped;
  * and each one left out is listed with the pattern that did it. A path below a folder that cannot be read becomes an
  * input of its own, reported invalid, so the others are still checked.
  */
-final class Inputs {
+public final class Inputs {
 
     /** The name that stands for standard input. */
-    static final String STANDARD_INPUT = "-";
-    static final String STANDARD_INPUT_SOURCE = "<stdin>";
+    public static final String STANDARD_INPUT = "-";
+    public static final String STANDARD_INPUT_SOURCE = "<stdin>";
 
     /** The inputs to check, and the files found in folders that were excluded. */
-    record Found(List<Protolyte.Input> inputs, List<Skipped> excluded) {
+    public record Found(List<Protolyte.Input> inputs, List<Skipped> excluded) {
+    }
+
+    /** What was named cannot be used as it is (an empty name, a pattern that is not a glob, an empty folder). */
+    public static final class Unusable extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        Unusable(String message) {
+            super(message);
+        }
     }
 
     /** One glob, gitignore-like: with no '/' it matches a name at any depth; a trailing '/' means a folder. */
     record Exclusion(String glob, String origin, PathMatcher matcher, boolean anyDepth, boolean folder) {
 
-        static Exclusion parse(String line, String origin) throws Setup.UsageException {
+        static Exclusion parse(String line, String origin) throws Unusable {
             String g = line;
             boolean folder = g.endsWith("/");
             if (folder) {
@@ -53,14 +61,14 @@ final class Inputs {
                 g = g.substring(1);
             }
             if (g.isEmpty() || line.startsWith("!")) {
-                throw new Setup.UsageException(origin + ": '" + line + "' is not a usable pattern"
+                throw new Unusable(origin + ": '" + line + "' is not a usable pattern"
                         + (line.startsWith("!") ? " (a '!' that takes a file back in is not supported)" : ""));
             }
             try {
                 PathMatcher m = FileSystems.getDefault().getPathMatcher("glob:" + g);
                 return new Exclusion(line, origin, m, !anchored && !g.contains("/"), folder);
             } catch (PatternSyntaxException e) {
-                throw new Setup.UsageException(origin + ": '" + line + "' is not a valid glob: " + e.getDescription());
+                throw new Unusable(origin + ": '" + line + "' is not a valid glob: " + e.getDescription());
             }
         }
 
@@ -81,8 +89,9 @@ final class Inputs {
     private Inputs() {
     }
 
-    static Found expand(List<Path> named, List<String> excludes, InputStream standardInput)
-            throws Setup.UsageException, IOException {
+    /** The inputs that {@code named} files, folders and '-' stand for, less those {@code excludes} globs leave out. */
+    public static Found expand(List<Path> named, List<String> excludes, InputStream standardInput)
+            throws Unusable, IOException {
         List<Protolyte.Input> out = new ArrayList<>();
         List<Skipped> excluded = new ArrayList<>();
         List<Exclusion> common = new ArrayList<>();
@@ -93,11 +102,11 @@ final class Inputs {
         for (Path p : named) {
             if (p.toString().isEmpty()) {
                 // Path.of("") is the working folder: an empty argument (an unset variable) must not check all of it
-                throw new Setup.UsageException("an empty file argument ('') names no file; give a file or folder");
+                throw new Unusable("an empty file argument ('') names no file; give a file or folder");
             }
             if (p.toString().equals(STANDARD_INPUT)) {
                 if (stdinTaken) {
-                    throw new Setup.UsageException("'-' (standard input) is named more than once");
+                    throw new Unusable("'-' (standard input) is named more than once");
                 }
                 stdinTaken = true;
                 out.add(standardInput(standardInput));
@@ -122,13 +131,13 @@ final class Inputs {
     }
 
     /** The glob lines of the ignore file at the folder's root: '#' begins a comment, blank lines are passed over. */
-    static List<Exclusion> ignoreFile(Path folder) throws Setup.UsageException, IOException {
+    static List<Exclusion> ignoreFile(Path folder) throws Unusable, IOException {
         Path file = folder.resolve(Protolyte.IGNORE_FILE);
         if (!Files.exists(file)) {
             return List.of();
         }
         if (!Files.isRegularFile(file) || Files.size(file) > 1024 * 1024) {
-            throw new Setup.UsageException(file + ": not a regular file of at most 1 MiB");
+            throw new Unusable(file + ": not a regular file of at most 1 MiB");
         }
         List<Exclusion> out = new ArrayList<>();
         List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
@@ -146,7 +155,7 @@ final class Inputs {
      * folder or file that cannot be read, becomes an input that is reported invalid.
      */
     private static void folder(Path root, List<Exclusion> rules, List<Protolyte.Input> out, List<Skipped> excluded)
-            throws IOException, Setup.UsageException {
+            throws IOException, Unusable {
         List<Protolyte.Input> found = new ArrayList<>();
         Files.walkFileTree(root, EnumSet.of(FileVisitOption.FOLLOW_LINKS), Integer.MAX_VALUE,
                 new SimpleFileVisitor<>() {
@@ -169,7 +178,7 @@ final class Inputs {
                     }
                 });
         if (found.isEmpty()) {
-            throw new Setup.UsageException(root + ": no *.json files below this folder");
+            throw new Unusable(root + ": no *.json files below this folder");
         }
         found.sort(Comparator.comparing(in -> root.relativize(in.path().orElseThrow()).toString()));
         for (Protolyte.Input in : found) {
