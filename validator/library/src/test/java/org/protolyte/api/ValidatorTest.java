@@ -43,8 +43,17 @@ class ValidatorTest {
 
     @Test
     void theReadmeExampleRuns() throws ConfigurationException {
-        assertEquals(Status.PASS, readmeExample(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
-        assertEquals(Status.FAIL, readmeExample(SAMPLES.resolve("parenteral-citrate-buffer-off-target.json")));
+        java.io.PrintStream out = System.out;
+        java.io.ByteArrayOutputStream printed = new java.io.ByteArrayOutputStream();
+        try {
+            System.setOut(new java.io.PrintStream(printed, true, StandardCharsets.UTF_8));
+            assertEquals(Status.PASS, readmeExample(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
+            assertEquals("", printed.toString(StandardCharsets.UTF_8), "a pass prints nothing");
+            assertEquals(Status.FAIL, readmeExample(SAMPLES.resolve("parenteral-citrate-buffer-off-target.json")));
+        } finally {
+            System.setOut(out);
+        }
+        assertTrue(printed.toString(StandardCharsets.UTF_8).contains("[LB-DP-0225]  FAIL"), "a fail prints its report");
     }
 
     @Test
