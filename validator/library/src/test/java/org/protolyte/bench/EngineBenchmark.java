@@ -35,7 +35,8 @@ import org.protolyte.substance.SubstanceLibrary;
 /**
  * The in-process figures for the 8-component HEPES medium and the 30-component basal medium (or any sample given with
  * -p sample=): one equilibrium solve (from scratch, and prepared with a warm start as a study makes them), reading and
- * validation, the analysis, and one whole check (the rules are the rest); the solves and the analysis with either
+ * validation, the analysis, and one whole check (the rules are the rest), through the internals and through the API;
+ * the solves and the analysis with either
  * activity model.
  */
 @State(Scope.Benchmark)
@@ -64,6 +65,7 @@ public class EngineBenchmark {
     private Solution solution;
     private Equilibrium equilibrium;
     private FormulationReader reader;
+    private org.protolyte.api.Validator validator;
 
     @Setup
     public void setUp() throws Exception {
@@ -72,6 +74,7 @@ public class EngineBenchmark {
         schemas = new SchemaCatalog();
         SubstanceLibrary library = LibraryLoader.shipped(schemas);
         protolyte = new Protolyte(schemas, library);
+        validator = org.protolyte.api.Validator.builder().build();
         reader = new FormulationReader(schemas);
         recipe = new RecipeResolver(library).resolve(reader.read(new JsonReader().read("m", medium)));
         solution = recipe.solution(Map.of());
@@ -109,5 +112,11 @@ public class EngineBenchmark {
     @Benchmark
     public DocumentReport wholeCheck() {
         return protolyte.check("m", medium);
+    }
+
+    /** The same whole check through the library's API: the source's copy of the bytes and the result's records. */
+    @Benchmark
+    public org.protolyte.api.Result wholeCheckThroughTheApi() {
+        return validator.check(org.protolyte.api.Source.of("m", medium));
     }
 }
