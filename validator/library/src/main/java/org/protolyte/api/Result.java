@@ -1,8 +1,6 @@
 package org.protolyte.api;
 
 import java.io.IOException;
-import java.io.StringWriter;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -115,13 +113,7 @@ public final class Result {
 
     /** This document's report in a format. */
     public String render(Format format) {
-        StringWriter out = new StringWriter();
-        try {
-            render(format, out);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);      // a StringWriter does not throw
-        }
-        return out.toString();
+        return Run.written(out -> render(format, out));
     }
 
     /** This document's report written to {@code out}, as the command line writes a run of one document. */

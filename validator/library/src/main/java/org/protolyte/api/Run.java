@@ -56,9 +56,19 @@ public final class Run {
 
     /** The run's report in a format. */
     public String render(Format format) {
+        return written(out -> render(format, out));
+    }
+
+    /** Writing a report somewhere. */
+    interface Rendering {
+        void to(Writer out) throws IOException;
+    }
+
+    /** What a rendering writes, as a string. */
+    static String written(Rendering r) {
         StringWriter out = new StringWriter();
         try {
-            render(format, out);
+            r.to(out);
         } catch (IOException e) {
             throw new UncheckedIOException(e);      // a StringWriter does not throw
         }
