@@ -133,7 +133,8 @@ public final class CheckMojo extends AbstractMojo {
         List<String> summary = summary(run);
         if (run.exitCode() != 0) {
             summary.forEach(getLog()::error);
-            throw new MojoFailureException("Protolyte check did not pass (exit code " + run.exitCode() + "): "
+            throw new MojoFailureException("Protolyte check did not pass (exit code " + run.exitCode() + "):"
+                    + System.lineSeparator()
                     + String.join(System.lineSeparator(), summary));
         }
         summary.forEach(getLog()::info);
