@@ -96,6 +96,10 @@ public final class CheckMojo extends AbstractMojo {
             return;
         }
         List<String> problems = new ArrayList<>();
+        if (list(files).isEmpty()) {
+            problems.add("files: names no document or folder to check");
+        }
+        list(files).stream().filter(f -> !f.exists()).forEach(f -> problems.add("files: " + f + " does not exist"));
         Map<Path, Format> targets = targets(problems);
         Validator validator;
         Run run;
@@ -121,6 +125,10 @@ public final class CheckMojo extends AbstractMojo {
             run = validator.check(list(files).stream().map(File::toPath).toList(), list(excludes));
         } catch (ConfigurationException e) {
             throw configuration(e.problems());
+        }
+        if (run.results().isEmpty()) {
+            throw configuration(List.of("files: every file found was left out (" + run.skipped().size()
+                    + " skipped), so nothing was checked"));
         }
         for (Map.Entry<Path, Format> t : targets.entrySet()) {
             try {
