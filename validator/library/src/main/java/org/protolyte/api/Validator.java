@@ -129,6 +129,7 @@ public final class Validator {
         private final List<Named> libraries = new ArrayList<>();
         private final List<Named> packs = new ArrayList<>();
         private final List<String> onlyPacks = new ArrayList<>();
+        private final List<String> alsoPacks = new ArrayList<>();
         private Optional<Named> waivers = Optional.empty();
         private Severity failOn = Severity.ERROR;
         private Clock clock = Clock.systemUTC();
@@ -162,9 +163,21 @@ public final class Validator {
             return this;
         }
 
-        /** Only these packs (shipped names, or names of packs added here) judge every document. */
+        /**
+         * Only these packs judge every document (the command line's {@code --rules PACK}): shipped names, or packs added
+         * here, by their name or by the name they were added under (the file's path).
+         */
         public Builder onlyRulePacks(String... names) {
             onlyPacks.addAll(List.of(names));
+            return this;
+        }
+
+        /**
+         * These packs join the choice, the intended use's or {@link #onlyRulePacks}' (the command line's {@code --rules
+         * +PACK}): named as for {@code onlyRulePacks}.
+         */
+        public Builder alsoRulePacks(String... names) {
+            alsoPacks.addAll(List.of(names));
             return this;
         }
 
@@ -222,19 +235,31 @@ public final class Validator {
             }
             RuleBook book = RuleBook.shipped(schemas, CheckKinds.load());
             List<String> added = new ArrayList<>();
+            java.util.Map<String, String> addedAs = new java.util.HashMap<>();
             for (Named p : packs) {
                 read(p, "rule pack", problems).ifPresent(bytes -> {
                     try {
-                        added.add(book.add(p.name(), bytes, false).name());
+                        String name = book.add(p.name(), bytes, false).name();
+                        added.add(name);
+                        addedAs.put(p.name(), name);
                     } catch (DocumentException e) {
                         describe("rule pack " + p.name(), e, problems);
                     }
                 });
             }
-            for (String name : onlyPacks) {
-                if (book.pack(name).isEmpty()) {
-                    problems.add("unknown rule pack '" + name + "': not shipped (" + String.join(", ",
-                            book.packs().keySet()) + ") and not added");
+            List<String> only = new ArrayList<>();
+            List<String> also = new ArrayList<>();
+            for (List<String> names : List.of(onlyPacks, alsoPacks)) {
+                for (String name : names) {
+                    String pack = addedAs.getOrDefault(name, name);
+                    if (book.pack(pack).isEmpty()) {
+                        if (!packs.stream().anyMatch(p -> p.name().equals(name))) {   // a file's own problem is named
+                            problems.add("unknown rule pack '" + name + "': not shipped (" + String.join(", ",
+                                    book.packs().keySet()) + ") and not added");
+                        }
+                    } else {
+                        (names == onlyPacks ? only : also).add(pack);
+                    }
                 }
             }
             Waivers held = Waivers.none(LocalDate.now(clock));
@@ -258,7 +283,9 @@ public final class Validator {
                     describe("substance libraries", e, problems);
                 }
                 try {
-                    checker = new Checker(book, onlyPacks, onlyPacks.isEmpty() ? added : List.of());
+                    List<String> joining = new ArrayList<>(onlyPacks.isEmpty() ? added : List.of());
+                    also.stream().filter(p -> !joining.contains(p)).forEach(joining::add);
+                    checker = new Checker(book, only, joining);
                 } catch (DocumentException e) {
                     describe("rule packs", e, problems);
                 }

@@ -159,4 +159,42 @@ class ValidatorTest {
         s.content()[1] = 'y';
         assertEquals("{}", new String(s.content(), StandardCharsets.UTF_8));
     }
+
+    private static final String SITE_PACK = "{\"document\": \"rule-pack\", \"formatVersion\": 1, \"name\": \"site-strict\", "
+            + "\"version\": \"1.0.0\", \"extends\": \"general\", \"rules\": [{\"id\": \"pka-near-target\", "
+            + "\"severity\": \"error\", \"parameters\": {\"maxDistance\": 0.3}}]}";
+
+    @Test
+    void aPackFileReplacesTheChoiceByTheNameItWasAddedUnder(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path pack = Files.writeString(dir.resolve("site-strict.json"), SITE_PACK);
+        Result r = Validator.builder().rulePack(pack).onlyRulePacks(pack.toString()).build()
+                .check(Source.of(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
+        assertEquals(List.of("general", "site-strict"), List.copyOf(r.rulePacks().keySet()));
+    }
+
+    @Test
+    void aShippedPackJoinsTheIntendedUsesChoice() throws Exception {
+        Result r = Validator.builder().alsoRulePacks("ophthalmic").build()
+                .check(Source.of(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
+        assertTrue(r.rulePacks().containsKey("cell-culture"), r.rulePacks().toString());
+        assertTrue(r.rulePacks().containsKey("ophthalmic"), r.rulePacks().toString());
+    }
+
+    @Test
+    void aPackJoiningAReplacedChoiceJoinsIt(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Path pack = Files.writeString(dir.resolve("site-strict.json"), SITE_PACK);
+        Result r = Validator.builder().rulePack(pack).onlyRulePacks("parenteral").alsoRulePacks(pack.toString()).build()
+                .check(Source.of(SAMPLES.resolve("cell-culture-hepes-basal-medium.json")));
+        assertTrue(r.rulePacks().containsKey("parenteral"), r.rulePacks().toString());
+        assertTrue(r.rulePacks().containsKey("site-strict"), r.rulePacks().toString());
+        assertTrue(!r.rulePacks().containsKey("cell-culture"), r.rulePacks().toString());
+    }
+
+    @Test
+    void anUnknownJoiningPackIsAConfigurationProblem() {
+        ConfigurationException e = assertThrows(ConfigurationException.class,
+                () -> Validator.builder().alsoRulePacks("no-such-pack").build());
+        assertEquals(1, e.problems().size(), e.problems()::toString);
+        assertTrue(e.problems().get(0).startsWith("unknown rule pack 'no-such-pack': not shipped ("), e::getMessage);
+    }
 }
