@@ -100,8 +100,19 @@ final class CheckEndpoint {
             return Reply.error(503, "stopping", "the service is stopping; no verdict")
                     .withHeader("Retry-After", "1");
         }
-        return Reply.error(500, "fault", "the tool failed on this document; please report it: " + cause)
+        return Reply.error(500, "fault", "the tool failed on this document; please report it: " + where(cause))
                 .withHeader(STATUS_HEADER, "fault").withHeader(EXIT_CODE_HEADER, "4");
+    }
+
+    /** The failure with its root cause and the frame that threw it, for the report of a fault. */
+    private static String where(Throwable failure) {
+        Throwable root = failure;
+        while (root.getCause() != null && root.getCause() != root) {
+            root = root.getCause();
+        }
+        StackTraceElement[] frames = root.getStackTrace();
+        return failure + (root == failure ? "" : "; caused by " + root)
+                + (frames.length == 0 ? "" : " at " + frames[0]);
     }
 
     /** A body that could not be read whole: too large, sent too slowly, or cut off. */
