@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
         description = "Checks buffer and medium recipes: equilibrium pH, buffer capacity and rule findings.%n"
                 + "A decision aid: release rests on measured values, the pharmacopoeia, local SOPs and QA review.",
         subcommands = {CheckCommand.class, DiffCommand.class, RobustnessCommand.class, SubstancesCommand.class,
-                RulesCommand.class, ExplainCommand.class,
+                RulesCommand.class, ExplainCommand.class, ServeCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
