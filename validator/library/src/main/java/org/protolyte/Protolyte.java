@@ -151,6 +151,13 @@ public final class Protolyte {
     }
 
     public static String version() {
+        return VERSION;
+    }
+
+    /** Read once: a service asks for it on every check. */
+    private static final String VERSION = readVersion();
+
+    private static String readVersion() {
         try (InputStream in = Protolyte.class.getResourceAsStream("version.properties")) {
             Properties p = new Properties();
             if (in != null) {

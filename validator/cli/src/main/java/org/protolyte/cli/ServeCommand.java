@@ -3,8 +3,6 @@ package org.protolyte.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.Callable;
 
@@ -13,7 +11,6 @@ import org.protolyte.api.Severity;
 import org.protolyte.api.Validator;
 import org.protolyte.report.Printable;
 import org.protolyte.rules.RuleBook;
-import org.protolyte.rules.RulePack;
 import org.protolyte.service.Settings;
 import org.protolyte.service.ValidationService;
 
@@ -105,27 +102,17 @@ public final class ServeCommand implements Callable<Integer> {
         Validator.Builder b = Validator.builder().failOn(failOn);
         setup.substances.forEach(b::substanceLibrary);
         RuleBook book = setup.ruleBook();      // reads and checks each pack file, naming what is wrong
-        List<String> replace = new ArrayList<>();
-        List<String> add = new ArrayList<>();
-        for (String r : setup.rules) {
+        for (String r : setup.rules) {          // as check takes them: NAME or FILE replaces the choice, +... joins it
             boolean adds = r.startsWith("+");
             String nameOrFile = adds ? r.substring(1) : r;
-            String name = book.packs().values().stream().filter(p -> p.document().source().equals(nameOrFile))
-                    .map(RulePack::name).findFirst().orElse(nameOrFile);
-            boolean file = !name.equals(nameOrFile);
-            if (file) {
+            if (book.packs().values().stream().anyMatch(p -> !p.shipped() && p.document().source().equals(nameOrFile))) {
                 b.rulePack(Path.of(nameOrFile));
             }
-            (adds ? add : replace).add(name);
-            if (adds && !file && setup.rules.stream().noneMatch(x -> !x.startsWith("+"))) {
-                throw new Setup.UsageException("serve: '+" + name + "' adds a shipped pack to the intended use's "
-                        + "choice, which serve does not offer; name the packs to use instead (--rules " + name + ")");
+            if (adds) {
+                b.alsoRulePacks(nameOrFile);
+            } else {
+                b.onlyRulePacks(nameOrFile);
             }
-        }
-        if (!replace.isEmpty()) {
-            List<String> all = new ArrayList<>(replace);
-            add.stream().filter(a -> !all.contains(a)).forEach(all::add);
-            b.onlyRulePacks(all.toArray(String[]::new));
         }
         return b.build();
     }

@@ -55,11 +55,33 @@ class ServeCommandTest {
         assertTrue(r.err().contains("--threads takes 1 to 1024, not 0"), r.err());
     }
 
+    /** '+PACK' joins a shipped pack to the intended use's choice, as check takes it: a laboratory recipe meets it. */
     @Test
-    void addingAShippedPackIsRefusedWithTheAlternative() {
-        InProcess.Result r = InProcess.run("serve", "--port", "0", "--rules", "+parenteral");
-        assertEquals(2, r.exitCode());
-        assertTrue(r.err().contains("--rules parenteral"), r.err());
+    void aShippedPackJoinsTheChoice() throws Exception {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        Thread serving = new Thread(() -> Main.run(new PrintWriter(out, true), new PrintWriter(err, true),
+                "serve", "--port", "0", "--threads", "2", "--rules", "+parenteral"), "serve-with-a-pack");
+        serving.start();
+        try {
+            Matcher m = LISTENING.matcher("");
+            for (int i = 0; i < 300 && !m.find(); i++) {
+                Thread.sleep(100);
+                m = LISTENING.matcher(out.toString());
+            }
+            assertTrue(m.find(0), "no address printed; out: " + out + " err: " + err);
+            byte[] recipe = java.nio.file.Files.readAllBytes(java.nio.file.Path.of(System.getProperty(
+                    "protolyte.projectRoot", "../.."), "sample-formulations", "laboratory-tris-buffer-37c.json"));
+            HttpResponse<String> r = HttpClient.newHttpClient().send(HttpRequest.newBuilder(
+                    URI.create(m.group(1)).resolve("v1/check")).header("Content-Type", "application/json")
+                    .POST(HttpRequest.BodyPublishers.ofByteArray(recipe)).build(), HttpResponse.BodyHandlers.ofString());
+            assertEquals(200, r.statusCode(), r.body());
+            assertTrue(r.body().contains("\"name\" : \"parenteral\""), "the parenteral pack judged it: " + r.body());
+            assertTrue(r.body().contains("\"name\" : \"general\""), "and its own use's pack: " + r.body());
+        } finally {
+            serving.interrupt();
+            serving.join(30_000);
+        }
     }
 
     @Test
