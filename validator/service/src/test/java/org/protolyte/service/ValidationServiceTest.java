@@ -289,6 +289,10 @@ class ValidationServiceTest {
         byte[] doc = Files.readAllBytes(HEPES);
         HttpResponse<String> r = post("v1/check", doc);
         get("v1/nowhere");
+        // a line is written once its answer has gone out, so it may follow the client's return by a moment
+        for (int i = 0; i < 100 && log.size() < 2; i++) {
+            Thread.sleep(50);
+        }
         List<JsonNode> lines = new ArrayList<>();
         for (String line : log) {
             lines.add(JSON.readTree(line));
