@@ -118,11 +118,8 @@ public final class Result {
 
     /** This document's report written to {@code out}, as the command line writes a run of one document. */
     public void render(Format format, Writer out) throws IOException {
-        RunSummary run = new RunSummary(toolVersion, checkedAt, libraryFiles);
-        new RunWriter(RunWriter.Format.valueOf(format.name()), false, Optional.empty()).write(out, run, each -> {
-            run.add(report);
-            each.accept(report);
-        });
+        new RunWriter(RunWriter.Format.valueOf(format.name()), false, Optional.empty())
+                .write(out, new RunSummary(toolVersion, checkedAt, libraryFiles), List.of(report));
     }
 
     /** The internal report, for a run of several documents. */

@@ -78,10 +78,7 @@ public final class Run {
     public void render(Format format, Writer out) throws IOException {
         RunSummary run = new RunSummary(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles());
         skipped.forEach(run::skip);
-        new RunWriter(RunWriter.Format.valueOf(format.name()), false, java.util.Optional.empty()).write(out, run,
-                each -> results.forEach(r -> {
-                    run.add(r.report());
-                    each.accept(r.report());
-                }));
+        new RunWriter(RunWriter.Format.valueOf(format.name()), false, java.util.Optional.empty())
+                .write(out, run, results.stream().map(Result::report).toList());
     }
 }

@@ -42,15 +42,10 @@ public final class HtmlRenderer {
     /** The page of a whole run at once. */
     public String render(RunReport run) {
         RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles());
-        run.reports().forEach(summary::add);
         run.skipped().forEach(summary::skip);
         java.io.StringWriter out = new java.io.StringWriter();
         try {
-            Page page = begin(out, summary);
-            for (DocumentReport r : run.reports()) {
-                page.document(r);
-            }
-            page.end(summary);
+            new RunWriter(RunWriter.Format.HTML, false, batchSize).write(out, summary, run.reports());
         } catch (IOException e) {
             throw new java.io.UncheckedIOException(e);     // a StringWriter does not throw
         }
@@ -246,16 +241,8 @@ public final class HtmlRenderer {
                         .toPlainString()).append("</td><td class=\"number\">")
                         .append(Numbers.significant(s.ionicStrength(), 3).toPlainString()).append("</td><td class=\"number\">")
                         .append(String.format(Locale.ROOT, "%.0f", s.osmolality() * 1000)).append("</td><td>");
-                List<String> main = new ArrayList<>();
-                double carried = 0;
-                for (var x : c.buffers()) {
-                    if (carried >= 0.95) {
-                        break;
-                    }
-                    main.add(String.format(Locale.ROOT, "%s %.0f %%", esc(x.system()), 100 * x.share()));
-                    carried += x.share();
-                }
-                b.append(String.join(", ", main)).append("</td><td>")
+                b.append(String.join(", ", TextRenderer.carrying(c).stream().map(x -> String.format(Locale.ROOT,
+                        "%s %.0f %%", esc(x.system()), 100 * x.share())).toList())).append("</td><td>")
                         .append(esc(TextRenderer.speciation(c, s, systems, false).replace(" (--species all)", "")))
                         .append("</td>");
             } else {
@@ -416,13 +403,7 @@ public final class HtmlRenderer {
                     .append(Double.isFinite(c.expectedMoles()) ? Numbers.significant(c.expectedMoles() * 1000, 5)
                             .toPlainString() : "—").append("</td><td class=\"number\">")
                     .append(Double.isFinite(c.deviation()) ? String.format(Locale.ROOT, "%+.1f %%", 100 * c.deviation()) : "")
-                    .append("</td><td>").append(esc(switch (c.match()) {
-                        case MISSING -> "missing";
-                        case EXTRA -> "not in the master";
-                        case OTHER_FORM -> "master: " + c.expected().orElseThrow().name();
-                        case TITRANT -> "q.s.";
-                        default -> "";
-                    })).append("</td></tr>");
+                    .append("</td><td>").append(esc(TextRenderer.note(c))).append("</td></tr>");
         }
         b.append("</tbody></table>").append(NL);
         if (!x.observations().isEmpty()) {

@@ -68,6 +68,14 @@ public final class RunWriter {
         }
     }
 
+    /** A run held in memory: each report added to the summary as it is written. */
+    public void write(Writer out, RunSummary summary, java.util.List<DocumentReport> documents) throws IOException {
+        write(out, summary, each -> documents.forEach(r -> {
+            summary.add(r);
+            each.accept(r);
+        }));
+    }
+
     private interface IoAction {
         void run() throws IOException;
     }

@@ -167,13 +167,7 @@ public final class TextRenderer {
         for (BatchAnalysis.AdditionCheck c : x.additions()) {
             String step = c.addition().map(a -> String.valueOf(a.step())).orElse("—");
             String name = c.used().or(() -> c.expected()).map(s -> p(s.name())).orElse("?");
-            String note = switch (c.match()) {
-                case MISSING -> "missing";
-                case EXTRA -> "not in the master";
-                case OTHER_FORM -> "master: " + p(c.expected().orElseThrow().name());
-                case TITRANT -> "q.s.";
-                default -> "";
-            };
+            String note = p(note(c));
             String recorded = c.addition().map(a -> p(a.amount().toString())).orElse("—");
             String expected = Double.isFinite(c.expectedMoles()) ? Numbers.significant(c.expectedMoles() * 1000, 5)
                     .toPlainString() : "—";
@@ -298,6 +292,31 @@ public final class TextRenderer {
                 : String.format(Locale.ROOT, "%.3g mmol/L of strong %s", mmol.getAsDouble(), what);
     }
 
+    /** The systems that carry 95 % of a condition's β, largest first. */
+    static List<BufferContribution> carrying(ConditionResult c) {
+        List<BufferContribution> out = new ArrayList<>();
+        double carried = 0;
+        for (BufferContribution x : c.buffers()) {     // largest first
+            if (carried >= SHOWN_SHARE) {
+                break;
+            }
+            out.add(x);
+            carried += x.share();
+        }
+        return out;
+    }
+
+    /** What a batch addition is against its master, where it is not the same: missing, extra, another form, the q.s. */
+    static String note(BatchAnalysis.AdditionCheck c) {
+        return switch (c.match()) {
+            case MISSING -> "missing";
+            case EXTRA -> "not in the master";
+            case OTHER_FORM -> "master: " + c.expected().orElseThrow().name();
+            case TITRANT -> "q.s.";
+            default -> "";
+        };
+    }
+
     /**
      * The forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %": unless all are
      * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
@@ -310,20 +329,8 @@ public final class TextRenderer {
                 bySystem.computeIfAbsent(systems.of(sp.component()), k -> new ArrayList<>()).add(sp);
             }
         }
-        List<String> shown = new ArrayList<>(bySystem.keySet());
-        if (!all) {
-            shown.clear();
-            double carried = 0;
-            for (BufferContribution x : c.buffers()) {     // largest first
-                if (carried >= SHOWN_SHARE) {
-                    break;
-                }
-                if (bySystem.containsKey(x.system())) {
-                    shown.add(x.system());
-                }
-                carried += x.share();
-            }
-        }
+        List<String> shown = all ? new ArrayList<>(bySystem.keySet()) : carrying(c).stream()
+                .map(BufferContribution::system).filter(bySystem::containsKey).toList();
         List<String> parts = new ArrayList<>();
         for (String system : shown) {
             List<SpeciesAmount> forms = new ArrayList<>(bySystem.get(system));
