@@ -48,14 +48,27 @@ public final class SchemaCatalog {
     private final JsonMapper mapper = JsonMapper.builder().build();
 
     public SchemaCatalog() {
+        // read by this module itself: on the module path the validator's own class-path loader cannot see them
         registry = SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12, builder -> builder
-                .schemaIdResolvers(ids -> ids.mapPrefix(ID_PREFIX, CLASSPATH_PREFIX))
+                .resourceLoaders(loaders -> loaders.resources(SchemaCatalog::shipped))
                 .schemaLoader(loader -> loader
                         .fetchRemoteResources(false)
                         .allow(iri -> isLocal(iri.toString()))));
     }
 
-    /** Only our own schemas (mapped to the class path) and the validator's built-in meta-schemas. */
+    /** A shipped schema's text by its id, or null (the loader's "not mine") for any other address. */
+    private static String shipped(String iri) {
+        if (!iri.startsWith(ID_PREFIX) || iri.contains("..") || iri.contains("\\")) {
+            return null;
+        }
+        try (InputStream in = SchemaCatalog.class.getResourceAsStream("/schemas/" + iri.substring(ID_PREFIX.length()))) {
+            return in == null ? null : new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException("shipped schema " + iri + " cannot be read", e);
+        }
+    }
+
+    /** Only our own schemas (read from the library itself) and the validator's built-in meta-schemas. */
     static boolean isLocal(String iri) {
         return iri.startsWith(ID_PREFIX) || iri.startsWith("classpath:")
                 || iri.startsWith("https://json-schema.org/draft/2020-12/");
