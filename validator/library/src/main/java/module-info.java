@@ -1,6 +1,7 @@
 /**
- * The Protolyte library: the engine and the validator. Its API is {@code org.protolyte.api}; every other package is
- * internal, open only to the project's own command line.
+ * The Protolyte library: the engine and the validator. Its API is {@code org.protolyte.api}, and what a site implements
+ * to add its own check kinds and substance libraries is {@code org.protolyte.spi}; every other package is internal,
+ * open only to the project's own command line.
  */
 module org.protolyte.library {
     requires tools.jackson.databind;
@@ -8,12 +9,14 @@ module org.protolyte.library {
     requires commons.math3;
 
     exports org.protolyte.api;
+    exports org.protolyte.spi;
 
     exports org.protolyte to org.protolyte.cli;
     exports org.protolyte.analysis to org.protolyte.cli;
     exports org.protolyte.batch to org.protolyte.cli;
     exports org.protolyte.chemistry to org.protolyte.cli;
     exports org.protolyte.document to org.protolyte.cli;
+    exports org.protolyte.plugin to org.protolyte.cli;
     exports org.protolyte.recipe to org.protolyte.cli;
     exports org.protolyte.report to org.protolyte.cli;
     exports org.protolyte.report.plot to org.protolyte.cli;
@@ -22,6 +25,8 @@ module org.protolyte.library {
     exports org.protolyte.text to org.protolyte.cli;
     exports org.protolyte.units to org.protolyte.cli;
 
+    uses org.protolyte.spi.CheckKind;
+    uses org.protolyte.spi.SubstanceLibrarySource;
     uses org.protolyte.rules.CheckKind;
     provides org.protolyte.rules.CheckKind with
             org.protolyte.rules.PhWithinTarget,

@@ -275,6 +275,11 @@ public final class Protolyte {
         return new Protolyte(schemas, library, checker, failOn, waivers, robustness, true);
     }
 
+    /** Where a site's check kinds and substance libraries came from (the class path, the module path, a folder). */
+    public List<org.protolyte.plugin.Plugins.Origin> plugins() {
+        return checker.kinds().plugins();
+    }
+
     /** A new run's summary: the tool version, now, and the library files with their hashes. */
     public RunSummary newSummary() {
         return newSummary(Optional.empty());
@@ -282,14 +287,14 @@ public final class Protolyte {
 
     /** A summary whose provenance names the run date given for the waivers, if one was. */
     public RunSummary newSummary(Optional<java.time.LocalDate> asOf) {
-        return new RunSummary(version(), Instant.now(), library.files(), asOf);
+        return new RunSummary(version(), Instant.now(), library.files(), plugins(), asOf);
     }
 
     /** The whole run held in memory, for renderers that need every report at once (SARIF). */
     public RunReport checkInputs(List<Input> inputs) {
         List<DocumentReport> reports = new ArrayList<>();
         RunSummary summary = stream(inputs, newSummary(), reports::add);
-        return new RunReport(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles(), reports,
+        return new RunReport(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles(), summary.plugins(), reports,
                 summary.skipped());
     }
 

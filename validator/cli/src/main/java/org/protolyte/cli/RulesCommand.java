@@ -57,6 +57,12 @@ public final class RulesCommand implements Callable<Integer> {
                     r.enabled() ? "" : " (disabled)");
         }
         out.println("check kinds: " + String.join(", ", book.kinds().all().keySet()));
+        for (var o : book.kinds().plugins()) {
+            out.println("plugin " + Printable.text(o.location()) + o.sha256().map(h -> " SHA-256 " + h).orElse("")
+                    + (o.checkKinds().isEmpty() ? "" : ": check kinds " + Printable.text(String.join(", ", o.checkKinds())))
+                    + (o.substanceLibraries().isEmpty() ? "" : "; substance libraries "
+                    + Printable.text(String.join(", ", o.substanceLibraries()))));
+        }
         out.println("'protolyte explain RULE_ID' prints a rule's whole text.");
         out.flush();
         return 0;

@@ -101,6 +101,9 @@ public final class ServeCommand implements Callable<Integer> {
     private Validator validator() throws Setup.UsageException, IOException, ConfigurationException {
         Validator.Builder b = Validator.builder().failOn(failOn);
         setup.substances.forEach(b::substanceLibrary);
+        if (setup.pluginFolder != null) {
+            b.plugins(setup.pluginFolder);
+        }
         RuleBook book = setup.ruleBook();      // reads and checks each pack file, naming what is wrong
         for (String r : setup.rules) {          // as check takes them: NAME or FILE replaces the choice, +... joins it
             boolean adds = r.startsWith("+");

@@ -7,10 +7,12 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
+import org.protolyte.plugin.Plugins;
 import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
 import org.protolyte.rules.RuleBook;
@@ -35,7 +37,14 @@ final class Setup {
                     + "'+PACK_OR_FILE' adds to that choice instead (repeatable).")
     List<String> rules = new ArrayList<>();
 
+    @Option(names = "--plugins", paramLabel = "DIR",
+            description = "A folder of plugin jars: a site's check kinds and substance libraries. It holds jars only; "
+                    + "reports name each with its SHA-256.")
+    Path pluginFolder;
+
     final SchemaCatalog schemas = new SchemaCatalog();
+    private Plugins plugins;
+    private CheckKinds kinds;
 
     /** Thrown when the setup itself is unusable; the message is for the user, the exit code is 2. */
     static final class UsageException extends Exception {
@@ -46,8 +55,28 @@ final class Setup {
         }
     }
 
+    /** The plugins of --plugins and of the class path, each jar read once per command. */
+    Plugins plugins() throws UsageException {
+        if (plugins == null) {
+            try {
+                plugins = Plugins.found(Optional.ofNullable(pluginFolder));
+                kinds = CheckKinds.load(plugins);
+            } catch (Plugins.Unusable e) {
+                throw new UsageException(String.join(System.lineSeparator() + "protolyte: ", e.problems()));
+            }
+        }
+        return plugins;
+    }
+
     SubstanceLibrary library() throws UsageException, IOException {
         LibraryLoader loader = new LibraryLoader(schemas).addShipped();
+        for (Plugins.Library l : plugins().libraries()) {
+            try {
+                loader.add(l.name(), l.content(), true);
+            } catch (DocumentException e) {
+                throw new UsageException(describe("substance library " + l.name(), e));
+            }
+        }
         for (Path p : substances) {
             try {
                 loader.add(p.toString(), read(p, "substance library"), true);
@@ -59,7 +88,8 @@ final class Setup {
     }
 
     RuleBook ruleBook() throws UsageException, IOException {
-        RuleBook book = RuleBook.shipped(schemas, CheckKinds.load());
+        plugins();
+        RuleBook book = RuleBook.shipped(schemas, kinds);
         for (String r : rules) {
             String name = r.startsWith("+") ? r.substring(1) : r;
             if (book.pack(name).isEmpty()) {

@@ -12,6 +12,7 @@ import java.util.OptionalInt;
 
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.chemistry.Caveat;
+import org.protolyte.plugin.Plugins;
 import org.protolyte.report.DocumentReport;
 import org.protolyte.report.RunSummary;
 import org.protolyte.report.RunWriter;
@@ -26,15 +27,18 @@ public final class Result {
     private final Instant checkedAt;
     private final String toolVersion;
     private final Map<String, String> libraryFiles;
+    private final List<Plugins.Origin> plugins;
     private final List<Finding> findings;
     private final List<Diagnostic> diagnostics;
     private final List<ConditionSummary> conditions;
 
-    Result(DocumentReport report, Instant checkedAt, String toolVersion, Map<String, String> libraryFiles) {
+    Result(DocumentReport report, Instant checkedAt, String toolVersion, Map<String, String> libraryFiles,
+           List<Plugins.Origin> plugins) {
         this.report = report;
         this.checkedAt = checkedAt;
         this.toolVersion = toolVersion;
-        this.libraryFiles = Map.copyOf(libraryFiles);
+        this.libraryFiles = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(libraryFiles));
+        this.plugins = List.copyOf(plugins);
         List<Finding> f = new ArrayList<>();
         for (org.protolyte.rules.Finding x : report.findings()) {
             f.add(new Finding(x.rule(), Severity.valueOf(x.severity().name()), x.message(), x.pointer(),
@@ -119,7 +123,7 @@ public final class Result {
     /** This document's report written to {@code out}, as the command line writes a run of one document. */
     public void render(Format format, Writer out) throws IOException {
         new RunWriter(RunWriter.Format.valueOf(format.name()), false, Optional.empty())
-                .write(out, new RunSummary(toolVersion, checkedAt, libraryFiles), List.of(report));
+                .write(out, new RunSummary(toolVersion, checkedAt, libraryFiles, plugins, Optional.empty()), List.of(report));
     }
 
     /** The internal report, for a run of several documents. */

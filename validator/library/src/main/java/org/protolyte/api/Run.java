@@ -76,7 +76,8 @@ public final class Run {
     }
 
     public void render(Format format, Writer out) throws IOException {
-        RunSummary run = new RunSummary(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles());
+        RunSummary run = new RunSummary(summary.toolVersion(), summary.generatedAt(), summary.libraryFiles(),
+                summary.plugins(), java.util.Optional.empty());
         skipped.forEach(run::skip);
         new RunWriter(RunWriter.Format.valueOf(format.name()), false, java.util.Optional.empty())
                 .write(out, run, results.stream().map(Result::report).toList());

@@ -16,6 +16,7 @@ import org.protolyte.Protolyte;
 import org.protolyte.document.DocumentException;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SchemaCatalog;
+import org.protolyte.plugin.Plugins;
 import org.protolyte.report.DocumentReport;
 import org.protolyte.rules.CheckKinds;
 import org.protolyte.rules.Checker;
@@ -67,6 +68,15 @@ public final class Validator {
     public record RuleSummary(String id, String pack, Severity severity, String summary) {
     }
 
+    /**
+     * Every place a site's check kinds or substance libraries came from: each jar of {@link Builder#plugins}, and the
+     * class path's or module path's providers, with the SHA-256 of each jar. Reports name the same.
+     */
+    public List<Plugin> plugins() {
+        return protolyte.plugins().stream().map(o -> new Plugin(o.location(), o.sha256(), o.checkKinds(),
+                o.substanceLibraries())).toList();
+    }
+
     /** Every rule of the packs this validator holds, in pack order. */
     public List<RuleSummary> rules() {
         return rules;
@@ -77,7 +87,7 @@ public final class Validator {
         DocumentReport r = source.folder().isPresent()
                 ? protolyte.check(source.name(), source.bytes(), source.folder().get())
                 : protolyte.check(source.name(), source.bytes());
-        return new Result(r, clock.instant(), Protolyte.version(), library.files());
+        return new Result(r, clock.instant(), Protolyte.version(), library.files(), protolyte.plugins());
     }
 
     /**
@@ -103,11 +113,11 @@ public final class Validator {
         }
         java.time.Instant at = clock.instant();
         org.protolyte.report.RunSummary summary = new org.protolyte.report.RunSummary(Protolyte.version(), at,
-                library.files());
+                library.files(), protolyte.plugins(), Optional.empty());
         found.excluded().forEach(summary::skip);
         List<Result> results = new ArrayList<>();
         protolyte.stream(found.inputs(), summary, r -> results.add(new Result(r, at, Protolyte.version(),
-                library.files())), executor, 16);
+                library.files(), protolyte.plugins())), executor, 16);
         return new Run(results, summary.skipped(), summary);
     }
 
@@ -131,6 +141,7 @@ public final class Validator {
         private final List<String> onlyPacks = new ArrayList<>();
         private final List<String> alsoPacks = new ArrayList<>();
         private Optional<Named> waivers = Optional.empty();
+        private Optional<Path> plugins = Optional.empty();
         private Severity failOn = Severity.ERROR;
         private Clock clock = Clock.systemUTC();
         private Executor executor = Runnable::run;
@@ -148,6 +159,17 @@ public final class Validator {
         /** A site's substance library from bytes, named as reports will name it. */
         public Builder substanceLibrary(String name, byte[] content) {
             libraries.add(new Named(name, Optional.of(content.clone()), Optional.empty()));
+            return this;
+        }
+
+        /**
+         * A folder of plugin jars: their check kinds ({@link org.protolyte.spi.CheckKind}) join the shipped ones, their
+         * substance libraries ({@link org.protolyte.spi.SubstanceLibrarySource}) extend the shipped library. The folder
+         * holds jars only, each providing something; anything else is a configuration problem. Kinds on the class path
+         * or the module path are loaded without this.
+         */
+        public Builder plugins(Path folder) {
+            this.plugins = Optional.of(folder);
             return this;
         }
 
@@ -224,6 +246,24 @@ public final class Validator {
             SchemaCatalog schemas = new SchemaCatalog();
             List<String> problems = new ArrayList<>();
             LibraryLoader loader = new LibraryLoader(schemas).addShipped();
+            Plugins found = null;
+            CheckKinds kinds = null;
+            try {
+                found = Plugins.found(plugins);
+                kinds = CheckKinds.load(found);
+            } catch (Plugins.Unusable e) {
+                problems.addAll(e.problems());
+            }
+            if (kinds == null) {
+                throw new ConfigurationException(problems);   // no pack can be read without its kinds
+            }
+            for (Plugins.Library l : found.libraries()) {
+                try {
+                    loader.add(l.name(), l.content(), true);
+                } catch (DocumentException e) {
+                    describe("substance library " + l.name(), e, problems);
+                }
+            }
             for (Named l : libraries) {
                 read(l, "substance library", problems).ifPresent(bytes -> {
                     try {
@@ -233,7 +273,7 @@ public final class Validator {
                     }
                 });
             }
-            RuleBook book = RuleBook.shipped(schemas, CheckKinds.load());
+            RuleBook book = RuleBook.shipped(schemas, kinds);
             List<String> added = new ArrayList<>();
             java.util.Map<String, String> addedAs = new java.util.HashMap<>();
             for (Named p : packs) {

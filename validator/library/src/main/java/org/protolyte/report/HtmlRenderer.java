@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
+import org.protolyte.plugin.Plugins;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.Curves;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -41,7 +42,8 @@ public final class HtmlRenderer {
 
     /** The page of a whole run at once. */
     public String render(RunReport run) {
-        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins(),
+                java.util.Optional.empty());
         run.skipped().forEach(summary::skip);
         java.io.StringWriter out = new java.io.StringWriter();
         try {
@@ -63,8 +65,29 @@ public final class HtmlRenderer {
                 + "<p>Protolyte " + esc(run.toolVersion()) + ", generated <time class=\"generated\" datetime=\""
                 + run.generatedAt() + "\">" + run.generatedAt() + "</time>"
                 + run.asOf().map(d -> "; waivers judged as of " + d + " (--as-of)").orElse("") + "</p>" + NL
+                + plugins(run.plugins())
                 + "<p class=\"caution\">" + esc(RunReport.CAUTION) + "</p></header>" + NL);
         return new Page(out);
+    }
+
+    /** Each place a site's check kinds or substance libraries came from, with its SHA-256. */
+    private static String plugins(List<Plugins.Origin> plugins) {
+        if (plugins.isEmpty()) {
+            return "";
+        }
+        StringBuilder b = new StringBuilder("<ul class=\"plugins\">");
+        for (Plugins.Origin o : plugins) {
+            b.append("<li>plugin <code>").append(esc(o.location())).append("</code>");
+            o.sha256().ifPresent(h -> b.append(" SHA-256 <code>").append(h).append("</code>"));
+            if (!o.checkKinds().isEmpty()) {
+                b.append("; check kinds ").append(esc(String.join(", ", o.checkKinds())));
+            }
+            if (!o.substanceLibraries().isEmpty()) {
+                b.append("; substance libraries ").append(esc(String.join(", ", o.substanceLibraries())));
+            }
+            b.append("</li>");
+        }
+        return b.append("</ul>").append(NL).toString();
     }
 
     /** One page being written; not shared between threads. */

@@ -1,7 +1,10 @@
 package org.protolyte.report;
 
+import java.util.List;
+
 import java.util.Optional;
 
+import org.protolyte.plugin.Plugins;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.batch.BatchAnalysis;
@@ -47,7 +50,7 @@ public final class JsonRenderer {
      */
     public Stream begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
         ObjectNode tool = mapper.createObjectNode();
-        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins());
         run.asOf().ifPresent(d -> tool.put("asOf", d.toString()));
         out.write("{\n\"tool\" : " + mapper.writeValueAsString(tool) + ",\n\"reports\" : [");
         return new Stream(out);
@@ -84,7 +87,7 @@ public final class JsonRenderer {
     }
 
     private void fillTool(ObjectNode tool, String version, java.time.Instant generatedAt,
-                          java.util.Map<String, String> libraryFiles) {
+                          java.util.Map<String, String> libraryFiles, List<Plugins.Origin> plugins) {
         tool.put("name", "Protolyte");
         tool.put("version", version);
         tool.put("caution", RunReport.CAUTION);
@@ -100,12 +103,19 @@ public final class JsonRenderer {
         tool.put("generatedAt", generatedAt.toString());
         ArrayNode library = tool.putArray("substanceLibrary");
         libraryFiles.forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));
+        ArrayNode loaded = tool.putArray("plugins");
+        for (Plugins.Origin o : plugins) {
+            ObjectNode p = loaded.addObject().put("location", o.location());
+            o.sha256().ifPresent(h -> p.put("sha256", h));
+            o.checkKinds().forEach(p.withArray("checkKinds")::add);
+            o.substanceLibraries().forEach(p.withArray("substanceLibraries")::add);
+        }
     }
 
     public ObjectNode tree(RunReport run) {
         ObjectNode root = mapper.createObjectNode();
         ObjectNode tool = root.putObject("tool");
-        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins());
         ArrayNode reports = root.putArray("reports");
         for (DocumentReport r : run.reports()) {
             reports.add(document(r));

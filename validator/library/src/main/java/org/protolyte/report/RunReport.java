@@ -6,12 +6,19 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.protolyte.plugin.Plugins;
+
 /**
  * One run over several inputs, with what it was computed from: the tool version, the substance library
- * files and their SHA-256 (each document records its own hash and its packs'), and when.
+ * files and their SHA-256 (each document records its own hash and its packs'), the plugins, and when.
  */
 public record RunReport(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
-                        List<DocumentReport> reports, List<Skipped> skipped) {
+                        List<Plugins.Origin> plugins, List<DocumentReport> reports, List<Skipped> skipped) {
+
+    public RunReport(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
+                     List<DocumentReport> reports, List<Skipped> skipped) {
+        this(toolVersion, generatedAt, libraryFiles, List.of(), reports, skipped);
+    }
 
     public static final String CAUTION = "Protolyte is a decision aid. Release decisions rest on measured values, "
             + "the applicable pharmacopoeia, local SOPs and qualified QA review.";
@@ -19,6 +26,7 @@ public record RunReport(String toolVersion, Instant generatedAt, Map<String, Str
     public RunReport {
         reports = List.copyOf(reports);
         skipped = List.copyOf(skipped);
+        plugins = List.copyOf(plugins);
         libraryFiles = Collections.unmodifiableMap(new LinkedHashMap<>(libraryFiles));
     }
 

@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
+import org.protolyte.plugin.Plugins;
+
 /**
  * What a streamed run keeps once each document's report has been written: counts, skipped files and the
  * exit code, never the reports themselves (an archive of ten thousand documents fits a small heap).
@@ -16,6 +18,7 @@ public final class RunSummary {
     private final String toolVersion;
     private final Instant generatedAt;
     private final Map<String, String> libraryFiles;
+    private final List<Plugins.Origin> plugins;
     private final Optional<LocalDate> asOf;
     private final Map<Status, Long> counts = new EnumMap<>(Status.class);
     private final List<Skipped> skipped = new java.util.ArrayList<>();
@@ -28,6 +31,13 @@ public final class RunSummary {
     /** {@code asOf}: the run date given for the waivers (--as-of), part of the provenance. */
     public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
                       Optional<LocalDate> asOf) {
+        this(toolVersion, generatedAt, libraryFiles, List.of(), asOf);
+    }
+
+    /** {@code plugins}: where a site's check kinds and substance libraries came from, part of the provenance. */
+    public RunSummary(String toolVersion, Instant generatedAt, Map<String, String> libraryFiles,
+                      List<Plugins.Origin> plugins, Optional<LocalDate> asOf) {
+        this.plugins = List.copyOf(plugins);
         this.asOf = asOf;
         this.toolVersion = toolVersion;
         this.generatedAt = generatedAt;
@@ -60,6 +70,10 @@ public final class RunSummary {
 
     public Map<String, String> libraryFiles() {
         return libraryFiles;
+    }
+
+    public List<Plugins.Origin> plugins() {
+        return plugins;
     }
 
     public int documents() {

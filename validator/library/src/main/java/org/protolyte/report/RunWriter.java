@@ -58,7 +58,7 @@ public final class RunWriter {
                 }
                 case TEXT -> {
                     TextRenderer text = new TextRenderer(allSpecies, batchSize);
-                    out.write(text.header(summary.toolVersion(), summary.asOf()));
+                    out.write(text.header(summary.toolVersion(), summary.asOf(), summary.plugins()));
                     reports.each(r -> io(() -> out.write(text.document(r))));
                     out.write(text.footer(summary.skipped(), summary.documents(), summary::count));
                 }

@@ -15,6 +15,7 @@ import java.util.Optional;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
+import org.protolyte.plugin.Plugins;
 import org.protolyte.Protolyte;
 import org.protolyte.chemistry.Caveat;
 import org.protolyte.document.Location;
@@ -47,7 +48,8 @@ public final class SarifRenderer {
     /** The whole run at once: the same bytes as streaming it. */
     public String render(RunReport run) {
         StringWriter out = new StringWriter();
-        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles());
+        RunSummary summary = new RunSummary(run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins(),
+                java.util.Optional.empty());
         try {
             Log s = begin(out);
             for (DocumentReport r : run.reports()) {
@@ -139,6 +141,16 @@ public final class SarifRenderer {
             descriptors.values().forEach(rules::add);
             ObjectNode tool = mapper.createObjectNode();
             tool.set("driver", driver);
+            if (!run.plugins().isEmpty()) {
+                ArrayNode extensions = tool.putArray("extensions");   // SARIF 2.1.0 §3.18.3: plug-ins of the tool
+                for (Plugins.Origin o : run.plugins()) {
+                    ObjectNode e = extensions.addObject().put("name", o.location());
+                    ObjectNode props = e.putObject("properties");
+                    o.sha256().ifPresent(h -> props.put("sha256", h));
+                    o.checkKinds().forEach(props.withArray("checkKinds")::add);
+                    o.substanceLibraries().forEach(props.withArray("substanceLibraries")::add);
+                }
+            }
 
             ArrayNode invocations = mapper.createArrayNode();
             ObjectNode invocation = invocations.addObject();

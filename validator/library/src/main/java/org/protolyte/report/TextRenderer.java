@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import org.protolyte.plugin.Plugins;
 import org.protolyte.analysis.BufferContribution;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.FormulationAnalysis;
@@ -90,13 +91,28 @@ public final class TextRenderer {
 
     /** Streaming: the first line, each document's block, then the footer. */
     public String header(String version) {
-        return header(version, Optional.empty());
+        return header(version, Optional.empty(), List.of());
     }
 
-    /** The tool line, and the run date the waivers were judged as of where one was given (--as-of). */
-    public String header(String version, Optional<java.time.LocalDate> asOf) {
-        return "Protolyte " + version + NL + asOf.map(d -> "as of " + d + " (--as-of): waiver approval and expiry "
-                + "judged on that date" + NL).orElse("");
+    /**
+     * The tool line, the run date the waivers were judged as of where one was given (--as-of), and each place a site's
+     * check kinds or substance libraries came from.
+     */
+    public String header(String version, Optional<java.time.LocalDate> asOf, List<Plugins.Origin> plugins) {
+        StringBuilder b = new StringBuilder("Protolyte " + version + NL + asOf.map(d -> "as of " + d + " (--as-of): "
+                + "waiver approval and expiry judged on that date" + NL).orElse(""));
+        for (Plugins.Origin o : plugins) {
+            List<String> gave = new java.util.ArrayList<>();
+            if (!o.checkKinds().isEmpty()) {
+                gave.add("check kinds " + String.join(", ", o.checkKinds()));
+            }
+            if (!o.substanceLibraries().isEmpty()) {
+                gave.add("substance libraries " + String.join(", ", o.substanceLibraries()));
+            }
+            b.append(wrap("plugin ", "  ", p(o.location()) + o.sha256().map(h -> " SHA-256 " + h).orElse("")
+                    + ": " + p(String.join("; ", gave))));
+        }
+        return b.toString();
     }
 
     public String document(DocumentReport r) {

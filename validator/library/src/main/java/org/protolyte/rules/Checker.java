@@ -72,6 +72,11 @@ public final class Checker {
         return USES.subList(1, USES.size());
     }
 
+    /** The check kinds its rules run, the shipped ones and a site's. */
+    public CheckKinds kinds() {
+        return book.kinds();
+    }
+
     public static Checker byIntendedUse(RuleBook book) {
         return new Checker(book, List.of(), List.of());
     }
@@ -114,7 +119,11 @@ public final class Checker {
                         + "correct the pack"));
                 continue;
             }
-            out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
+            try {
+                out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
+            } catch (PluginCheck.Failure e) {
+                unjudged.add(new Unjudged(rule.id(), rule.pack(), e.getMessage()));
+            }
         }
         return new Verdict(book.withAncestors(selected), out, unjudged);
     }

@@ -11,15 +11,29 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * One rule as a pack defines it: the check kind it runs, its parameters, severity and the words a
- * reviewer reads. {@code pack} names the pack that last defined or changed it.
+ * reviewer reads. {@code pack} names the pack that last defined or changed it; {@code bound} holds the parameters
+ * bound to a site's check kind's record when the pack was loaded.
  */
 public record Rule(String id, String check, ObjectNode parameters, Severity severity, boolean enabled,
                    String summary, String explanation, Optional<String> remedy, Optional<String> safety,
-                   List<String> references, String pack) {
+                   List<String> references, String pack, Optional<Record> bound) {
 
     public Rule {
         references = List.copyOf(references);
         parameters = parameters.deepCopy();
+    }
+
+    public Rule(String id, String check, ObjectNode parameters, Severity severity, boolean enabled, String summary,
+                String explanation, Optional<String> remedy, Optional<String> safety, List<String> references,
+                String pack) {
+        this(id, check, parameters, severity, enabled, summary, explanation, remedy, safety, references, pack,
+                Optional.empty());
+    }
+
+    /** This rule with its parameters bound to its kind's record. */
+    public Rule withBound(Optional<Record> b) {
+        return new Rule(id, check, parameters, severity, enabled, summary, explanation, remedy, safety, references,
+                pack, b);
     }
 
     /** A rule outside any pack, for the built-in checks the tests call directly. */

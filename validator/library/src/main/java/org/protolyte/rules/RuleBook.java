@@ -179,9 +179,9 @@ public final class RuleBook {
                 Rule r = base == null ? complete(pack, e, at) : change(pack, base, e, at);
                 CheckKind kind = kinds.get(r.check()).orElseThrow(() -> new DocumentException(doc.problem(at + "/check",
                         "unknown check kind '" + r.check() + "'; known: " + String.join(", ", kinds.all().keySet()))));
-                problems.addAll(schemas.validate(doc, at + "/parameters", r.parameters(), kind.parameterSchema()));
+                Optional<Record> bound = kind.bind(schemas, doc, at + "/parameters", r.parameters(), problems);
                 inverted(doc, at + "/parameters", r.parameters(), problems);
-                rules.put(id, r);
+                rules.put(id, r.withBound(bound));
             } catch (DocumentException ex) {
                 problems.addAll(ex.problems());
             }
