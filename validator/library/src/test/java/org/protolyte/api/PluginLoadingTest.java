@@ -86,6 +86,17 @@ class PluginLoadingTest {
     }
 
     @Test
+    void theReadmeShowsTheExamplePluginsCheckKindAsTheTestsBuildIt() throws Exception {
+        String source = PluginJars.resource("plugin/org/example/sitechecks/PhUncertaintyLimit.java");
+        String shown = source.substring(source.indexOf("@Stateless"));
+        String readme = Files.readString(SAMPLES.getParent().resolve("README.md"));
+        assertTrue(readme.contains("```java\n" + shown + "```"), "README shows the check kind from @Stateless on");
+        for (String file : List.of("PluginLoadingTest", "PluginsOptionTest", "PluginJarIT", "ModulePathTest")) {
+            assertTrue(readme.contains("`" + file + "`"), "README names the test " + file);
+        }
+    }
+
+    @Test
     void aWideLimitKeepsTheSameDocumentQuiet() throws Exception {
         Validator v = Validator.builder().plugins(folder).rulePack("site-pack.json", pack("{ \"max\": 0.5 }")).build();
         Result r = v.check(Source.of(HEPES));
