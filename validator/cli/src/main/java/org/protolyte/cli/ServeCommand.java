@@ -10,7 +10,6 @@ import org.protolyte.api.ConfigurationException;
 import org.protolyte.api.Severity;
 import org.protolyte.api.Validator;
 import org.protolyte.report.Printable;
-import org.protolyte.rules.RuleBook;
 import org.protolyte.service.Settings;
 import org.protolyte.service.ValidationService;
 
@@ -104,19 +103,7 @@ public final class ServeCommand implements Callable<Integer> {
         if (setup.pluginFolder != null) {
             b.plugins(setup.pluginFolder);
         }
-        RuleBook book = setup.ruleBook();      // reads and checks each pack file, naming what is wrong
-        for (String r : setup.rules) {          // as check takes them: NAME or FILE replaces the choice, +... joins it
-            boolean adds = r.startsWith("+");
-            String nameOrFile = adds ? r.substring(1) : r;
-            if (book.packs().values().stream().anyMatch(p -> !p.shipped() && p.document().source().equals(nameOrFile))) {
-                b.rulePack(Path.of(nameOrFile));
-            }
-            if (adds) {
-                b.alsoRulePacks(nameOrFile);
-            } else {
-                b.onlyRulePacks(nameOrFile);
-            }
-        }
+        b.rules(Path.of(""), setup.rules);     // as check takes them: NAME or FILE replaces the choice, +... joins it
         return b.build();
     }
 }

@@ -7,6 +7,7 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
@@ -140,6 +141,7 @@ public final class Validator {
         private final List<Named> packs = new ArrayList<>();
         private final List<String> onlyPacks = new ArrayList<>();
         private final List<String> alsoPacks = new ArrayList<>();
+        private final List<Map.Entry<String, Path>> choices = new ArrayList<>();
         private Optional<Named> waivers = Optional.empty();
         private Optional<Path> plugins = Optional.empty();
         private Severity failOn = Severity.ERROR;
@@ -200,6 +202,18 @@ public final class Validator {
          */
         public Builder alsoRulePacks(String... names) {
             alsoPacks.addAll(List.of(names));
+            return this;
+        }
+
+        /**
+         * The command line's {@code --rules} values: a shipped pack's name, else a pack file (resolved against
+         * {@code base}); plain, it replaces the intended use's choice, as {@link #onlyRulePacks}; after a {@code +}, it
+         * joins it, as {@link #alsoRulePacks}. A file named twice is read once. The command line, the service and the
+         * build plugin all take their rule choice through here.
+         */
+        public Builder rules(Path base, List<String> values) {
+            Objects.requireNonNull(base);
+            values.forEach(v -> choices.add(Map.entry(v == null ? "" : v.strip(), base)));
             return this;
         }
 
@@ -287,18 +301,56 @@ public final class Validator {
                     }
                 });
             }
+            List<String> onlyNames = new ArrayList<>(onlyPacks);
+            List<String> alsoNames = new ArrayList<>(alsoPacks);
+            java.util.Set<String> unreadable = new java.util.HashSet<>();
+            for (Map.Entry<String, Path> choice : choices) {
+                boolean joins = choice.getKey().startsWith("+");
+                String name = joins ? choice.getKey().substring(1) : choice.getKey();
+                if (name.isEmpty()) {
+                    problems.add("rules: '" + choice.getKey() + "' names no rule pack (a shipped name, a file, or "
+                            + "either after '+')");
+                    continue;
+                }
+                Path file = choice.getValue().resolve(name).normalize();
+                String as = file.toString();
+                if (book.pack(name).isPresent()) {
+                    as = name;
+                } else if (!addedAs.containsKey(as)) {
+                    if (!Files.exists(file) && name.matches("[a-z0-9]+(-[a-z0-9]+)*")) {   // a pack's name
+                        problems.add("unknown rule pack '" + name + "': not a shipped pack (" + String.join(", ",
+                                book.packs().keySet()) + ") and no file " + file);
+                        unreadable.add(as);
+                    } else {
+                        Optional<byte[]> bytes = read(new Named(as, Optional.empty(), Optional.of(file)), "rule pack",
+                                problems);
+                        try {
+                            if (bytes.isPresent()) {
+                                addedAs.put(as, book.add(as, bytes.get(), false).name());   // chosen, not joined
+                            } else {
+                                unreadable.add(as);
+                            }
+                        } catch (DocumentException e) {
+                            describe("rule pack " + as, e, problems);
+                            unreadable.add(as);
+                        }
+                    }
+                }
+                (joins ? alsoNames : onlyNames).add(as);
+            }
             List<String> only = new ArrayList<>();
             List<String> also = new ArrayList<>();
-            for (List<String> names : List.of(onlyPacks, alsoPacks)) {
+            for (List<String> names : List.of(onlyNames, alsoNames)) {
                 for (String name : names) {
                     String pack = addedAs.getOrDefault(name, name);
                     if (book.pack(pack).isEmpty()) {
-                        if (!packs.stream().anyMatch(p -> p.name().equals(name))) {   // a file's own problem is named
+                        // a file's own problem is named where it was read
+                        if (!unreadable.contains(name) && !packs.stream().anyMatch(p -> p.name().equals(name))) {
                             problems.add("unknown rule pack '" + name + "': not shipped (" + String.join(", ",
                                     book.packs().keySet()) + ") and not added");
                         }
-                    } else {
-                        (names == onlyPacks ? only : also).add(pack);
+                    } else if (!(names == onlyNames ? only : also).contains(pack)) {
+                        (names == onlyNames ? only : also).add(pack);
                     }
                 }
             }
@@ -323,7 +375,7 @@ public final class Validator {
                     describe("substance libraries", e, problems);
                 }
                 try {
-                    List<String> joining = new ArrayList<>(onlyPacks.isEmpty() ? added : List.of());
+                    List<String> joining = new ArrayList<>(only.isEmpty() ? added : List.of());
                     also.stream().filter(p -> !joining.contains(p)).forEach(joining::add);
                     checker = new Checker(book, only, joining);
                 } catch (DocumentException e) {

@@ -61,6 +61,13 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "protolyte.rules")
     private List<String> rules;
 
+    /**
+     * A folder of plugin jars, as the command line's {@code --plugins}: a site's check kinds and substance libraries.
+     * It holds jars only; the reports name each with its SHA-256.
+     */
+    @Parameter(property = "protolyte.plugins")
+    private File plugins;
+
     /** The waiver file QA holds: accepted findings, per document revision. */
     @Parameter(property = "protolyte.waivers")
     private File waivers;
@@ -112,7 +119,10 @@ public final class CheckMojo extends AbstractMojo {
             if (waivers != null) {
                 builder.waivers(waivers.toPath());
             }
-            RuleChoice.of(list(rules), basedir.toPath()).applyTo(builder);
+            if (plugins != null) {
+                builder.plugins(plugins.toPath());
+            }
+            builder.rules(basedir.toPath(), list(rules));
             validator = builder.build();
         } catch (ConfigurationException e) {
             problems.addAll(e.problems());
