@@ -18,6 +18,7 @@ import org.protolyte.spi.Analysis;
 import org.protolyte.spi.Component;
 import org.protolyte.spi.Condition;
 import org.protolyte.spi.Stateless;
+import org.protolyte.spi.Target;
 import org.protolyte.spi.Violation;
 
 import tools.jackson.databind.node.ObjectNode;
@@ -144,6 +145,7 @@ final class PluginCheck<P extends Record> implements CheckKind {
                     OptionalDouble.of(r.bufferCapacityPerLitre() * 1000), OptionalDouble.of(s.ionicStrength()),
                     OptionalDouble.of(s.osmolality() * 1000)));
         }
-        return new Analysis(f.id(), f.title(), f.intendedUse(), components, conditions);
+        return new Analysis(f.id(), f.title(), f.revision(), f.intendedUse(), f.pHTarget().map(t -> new Target(t.min(),
+                t.max(), t.kelvin() - Thermo.KELVIN_OFFSET, t.pointer())), components, conditions);
     }
 }
