@@ -92,13 +92,16 @@ public final class Plugins {
      * only: any other entry, a jar that provides nothing, or an empty folder is refused, never passed over.
      */
     public static Plugins found(Optional<Path> folder) throws Unusable {
+        return found(folder, Plugins.class.getClassLoader(), Plugins.class.getModule());
+    }
+
+    /** As {@link #found(Optional)}, with {@code own} standing for the class path (and {@code module} for the library). */
+    static Plugins found(Optional<Path> folder, ClassLoader own, Module module) throws Unusable {
         List<String> problems = new ArrayList<>();
         Map<Path, Origin> byCopy = new LinkedHashMap<>();   // private copy -> the jar it copies
         if (folder.isPresent()) {
             copy(folder.get(), byCopy, problems);
         }
-        ClassLoader own = Plugins.class.getClassLoader();
-        Module module = Plugins.class.getModule();
         List<ServiceLoader.Provider<CheckKind>> kindProviders = new ArrayList<>();
         List<ServiceLoader.Provider<SubstanceLibrarySource>> libraryProviders = new ArrayList<>();
         try {
@@ -155,11 +158,15 @@ public final class Plugins {
                 problems.add("substance library " + p.type().getName() + " in " + at + " cannot be read: " + e);
             }
         }
-        for (Origin o : byCopy.values()) {
-            if (!kindNames.containsKey(o.location()) && !libraryNames.containsKey(o.location())) {
-                problems.add("plugin jar " + o.location() + " provides no check kind and no substance library (a jar "
-                        + "lists its providers in META-INF/services/" + CheckKind.class.getName() + " or "
-                        + SubstanceLibrarySource.class.getName() + ")");
+        for (Map.Entry<Path, Origin> c : byCopy.entrySet()) {
+            String at = c.getValue().location();
+            if (!kindNames.containsKey(at) && !libraryNames.containsKey(at)) {
+                problems.add("plugin jar " + at + (listsProviders(c.getKey())
+                        ? " lists providers whose classes the class path already holds (the class path's are used); "
+                        + "remove one of the two"
+                        : " provides no check kind and no substance library (a jar lists its providers in "
+                        + "META-INF/services/" + CheckKind.class.getName() + " or "
+                        + SubstanceLibrarySource.class.getName() + ")"));
             }
         }
         if (!problems.isEmpty()) {
@@ -223,6 +230,16 @@ public final class Plugins {
         }
         if (entries.isEmpty()) {
             problems.add("plugin folder " + folder + " holds no jar");
+        }
+    }
+
+    /** The jar has a provider list for either service. */
+    private static boolean listsProviders(Path jar) {
+        try (java.util.jar.JarFile j = new java.util.jar.JarFile(jar.toFile())) {
+            return j.getEntry("META-INF/services/" + CheckKind.class.getName()) != null
+                    || j.getEntry("META-INF/services/" + SubstanceLibrarySource.class.getName()) != null;
+        } catch (IOException e) {
+            return false;   // caught: not a readable jar, so it lists nothing; the message says it provides nothing
         }
     }
 

@@ -25,8 +25,12 @@ import tools.jackson.databind.node.ObjectNode;
 /** The machine-readable report; its schema is {@code schemas/report.schema.json}. */
 public final class JsonRenderer {
 
-    /** Streaming writes several values to one writer: the mapper must not close it after each. */
-    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT)
+    /**
+     * Streaming writes several values to one writer: the mapper must not close it after each. One for every renderer:
+     * a mapper is immutable and thread-safe, and building one (with its serializer caches cold) costs more than a
+     * small document's report.
+     */
+    private static final JsonMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT)
             .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
     private final Optional<org.protolyte.units.Quantity> batchSize;
 
@@ -41,7 +45,7 @@ public final class JsonRenderer {
     }
 
     public String render(RunReport run) {
-        return mapper.writeValueAsString(tree(run)) + System.lineSeparator();
+        return MAPPER.writeValueAsString(tree(run)) + System.lineSeparator();
     }
 
     /**
@@ -49,10 +53,10 @@ public final class JsonRenderer {
      * {@link Stream#end} closes it with what was skipped and the summary.
      */
     public Stream begin(java.io.Writer out, RunSummary run) throws java.io.IOException {
-        ObjectNode tool = mapper.createObjectNode();
+        ObjectNode tool = MAPPER.createObjectNode();
         fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins());
         run.asOf().ifPresent(d -> tool.put("asOf", d.toString()));
-        out.write("{\n\"tool\" : " + mapper.writeValueAsString(tool) + ",\n\"reports\" : [");
+        out.write("{\n\"tool\" : " + MAPPER.writeValueAsString(tool) + ",\n\"reports\" : [");
         return new Stream(out);
     }
 
@@ -67,12 +71,12 @@ public final class JsonRenderer {
 
         public void document(DocumentReport r) throws java.io.IOException {
             out.write(first ? " " : ", ");
-            mapper.writeValue(out, JsonRenderer.this.document(r));
+            MAPPER.writeValue(out, JsonRenderer.this.document(r));
             first = false;
         }
 
         public void end(RunSummary run) throws java.io.IOException {
-            ObjectNode tail = mapper.createObjectNode();
+            ObjectNode tail = MAPPER.createObjectNode();
             ArrayNode skipped = tail.putArray("skipped");
             run.skipped().forEach(x -> skipped.addObject().put("source", x.source()).put("reason", x.reason()));
             ObjectNode summary = tail.putObject("summary");
@@ -81,8 +85,8 @@ public final class JsonRenderer {
                 summary.put(s.code(), run.count(s));
             }
             summary.put("exitCode", run.exitCode());
-            out.write(" ],\n\"skipped\" : " + mapper.writeValueAsString(skipped)
-                    + ",\n\"summary\" : " + mapper.writeValueAsString(summary) + "\n}" + System.lineSeparator());
+            out.write(" ],\n\"skipped\" : " + MAPPER.writeValueAsString(skipped)
+                    + ",\n\"summary\" : " + MAPPER.writeValueAsString(summary) + "\n}" + System.lineSeparator());
         }
     }
 
@@ -113,7 +117,7 @@ public final class JsonRenderer {
     }
 
     public ObjectNode tree(RunReport run) {
-        ObjectNode root = mapper.createObjectNode();
+        ObjectNode root = MAPPER.createObjectNode();
         ObjectNode tool = root.putObject("tool");
         fillTool(tool, run.toolVersion(), run.generatedAt(), run.libraryFiles(), run.plugins());
         ArrayNode reports = root.putArray("reports");
@@ -180,7 +184,7 @@ public final class JsonRenderer {
     }
 
     private ObjectNode document(DocumentReport r) {
-        ObjectNode n = mapper.createObjectNode();
+        ObjectNode n = MAPPER.createObjectNode();
         n.put("source", r.source());
         r.sha256().ifPresent(h -> n.put("sha256", h));
         r.id().ifPresent(id -> n.put("id", id));
@@ -282,7 +286,7 @@ public final class JsonRenderer {
     }
 
     private ObjectNode condition(ConditionResult c, Systems systems, boolean perKg, double waterKg) {
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = MAPPER.createObjectNode();
         o.put("name", c.condition().name());
         o.put("implicit", c.condition().implicit());
         o.put("temperature", Numbers.decimals(Numbers.celsius(c.condition().kelvin()), 2));
@@ -357,7 +361,7 @@ public final class JsonRenderer {
     }
 
     private ObjectNode titrant(TitrantResult t, Formulation f) {
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = MAPPER.createObjectNode();
         o.put("substance", t.ingredient().substance().name());
         o.put("pointer", t.ingredient().line().pointer());
         o.put("role", t.role() == TitrantResult.Role.ACID ? "acid" : "base");
@@ -458,7 +462,7 @@ public final class JsonRenderer {
     }
 
     private ObjectNode finding(Finding f) {
-        ObjectNode o = mapper.createObjectNode();
+        ObjectNode o = MAPPER.createObjectNode();
         o.put("rule", f.rule());
         o.put("severity", f.severity().code());
         o.put("message", f.message());

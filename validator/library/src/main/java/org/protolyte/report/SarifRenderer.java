@@ -43,7 +43,8 @@ public final class SarifRenderer {
     /** SARIF 2.1.0 §3.14.14: the conventional base id of the source tree, resolved by the consumer. */
     static final String SRCROOT = "%SRCROOT%";
 
-    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    /** One for every renderer: immutable and thread-safe, and costly to build per report. */
+    private static final JsonMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
 
     /** The whole run at once: the same bytes as streaming it. */
     public String render(RunReport run) {
@@ -70,8 +71,8 @@ public final class SarifRenderer {
      * (RFC 8259 §4), so a SARIF consumer reads the same log.
      */
     public Log begin(Writer out) throws IOException {
-        out.write("{\n  \"$schema\" : " + mapper.writeValueAsString(SCHEMA) + ",\n  \"version\" : "
-                + mapper.writeValueAsString(VERSION) + ",\n  \"runs\" : [ {\n  \"results\" : [");
+        out.write("{\n  \"$schema\" : " + MAPPER.writeValueAsString(SCHEMA) + ",\n  \"version\" : "
+                + MAPPER.writeValueAsString(VERSION) + ",\n  \"runs\" : [ {\n  \"results\" : [");
         return new Log(out);
     }
 
@@ -81,7 +82,7 @@ public final class SarifRenderer {
         private final Map<String, ObjectNode> descriptors = new LinkedHashMap<>();
         private final Map<String, Integer> ruleIndex = new LinkedHashMap<>();
         private final Map<String, Integer> artifactIndex = new LinkedHashMap<>();
-        private final ArrayNode artifacts = mapper.createArrayNode();
+        private final ArrayNode artifacts = MAPPER.createArrayNode();
         private boolean first = true;
 
         private Log(Writer out) {
@@ -129,17 +130,17 @@ public final class SarifRenderer {
 
         private void write(ObjectNode result) throws IOException {
             out.write(first ? " " : ", ");
-            out.write(mapper.writeValueAsString(result));
+            out.write(MAPPER.writeValueAsString(result));
             first = false;
         }
 
         public void end(RunSummary run) throws IOException {
-            ObjectNode driver = mapper.createObjectNode();
+            ObjectNode driver = MAPPER.createObjectNode();
             driver.put("name", "Protolyte");
             driver.put("version", run.toolVersion());
             ArrayNode rules = driver.putArray("rules");
             descriptors.values().forEach(rules::add);
-            ObjectNode tool = mapper.createObjectNode();
+            ObjectNode tool = MAPPER.createObjectNode();
             tool.set("driver", driver);
             if (!run.plugins().isEmpty()) {
                 ArrayNode extensions = tool.putArray("extensions");   // SARIF 2.1.0 §3.18.3: plug-ins of the tool
@@ -152,7 +153,7 @@ public final class SarifRenderer {
                 }
             }
 
-            ArrayNode invocations = mapper.createArrayNode();
+            ArrayNode invocations = MAPPER.createArrayNode();
             ObjectNode invocation = invocations.addObject();
             invocation.put("executionSuccessful", run.exitCode() < Status.FAULT.exitCode());
             if (!run.skipped().isEmpty()) {
@@ -166,19 +167,19 @@ public final class SarifRenderer {
                 }
             }
 
-            ObjectNode props = mapper.createObjectNode();
+            ObjectNode props = MAPPER.createObjectNode();
             props.put("exitCode", run.exitCode());
             props.put("caution", RunReport.CAUTION);
-            out.write(" ],\n  \"tool\" : " + mapper.writeValueAsString(tool)
-                    + ",\n  \"invocations\" : " + mapper.writeValueAsString(invocations)
-                    + ",\n  \"artifacts\" : " + mapper.writeValueAsString(artifacts)
-                    + ",\n  \"properties\" : " + mapper.writeValueAsString(props)
+            out.write(" ],\n  \"tool\" : " + MAPPER.writeValueAsString(tool)
+                    + ",\n  \"invocations\" : " + MAPPER.writeValueAsString(invocations)
+                    + ",\n  \"artifacts\" : " + MAPPER.writeValueAsString(artifacts)
+                    + ",\n  \"properties\" : " + MAPPER.writeValueAsString(props)
                     + "\n} ]\n}" + System.lineSeparator());
         }
     }
 
     private ObjectNode descriptor(Rule rule) {
-        ObjectNode d = mapper.createObjectNode();
+        ObjectNode d = MAPPER.createObjectNode();
         d.put("id", rule.id());
         d.putObject("shortDescription").put("text", rule.summary());
         d.putObject("fullDescription").put("text", rule.explanation());
@@ -197,7 +198,7 @@ public final class SarifRenderer {
 
     /** A finding without a pack definition: the invalid-document problems, or a site's own check. */
     private ObjectNode plainDescriptor(String id, Severity severity) {
-        ObjectNode d = mapper.createObjectNode();
+        ObjectNode d = MAPPER.createObjectNode();
         d.put("id", id);
         if (id.equals(Protolyte.INVALID_DOCUMENT)) {
             d.putObject("shortDescription").put("text",
@@ -214,7 +215,7 @@ public final class SarifRenderer {
     }
 
     private ObjectNode engineDescriptor(String id, Caveat.Severity severity) {
-        ObjectNode d = mapper.createObjectNode();
+        ObjectNode d = MAPPER.createObjectNode();
         d.put("id", id);
         d.putObject("shortDescription").put("text", "Engine diagnostic " + id.substring(ENGINE_PREFIX.length())
                 + ": where the computed numbers stop being trustworthy.");
@@ -226,7 +227,7 @@ public final class SarifRenderer {
     }
 
     private ObjectNode result(String ruleId, Map<String, Integer> ruleIndex, String level, String message) {
-        ObjectNode res = mapper.createObjectNode();
+        ObjectNode res = MAPPER.createObjectNode();
         res.put("ruleId", ruleId);
         res.put("ruleIndex", ruleIndex.get(ruleId));
         res.put("level", level);
@@ -251,7 +252,7 @@ public final class SarifRenderer {
     }
 
     private ObjectNode location(String source, int artifact, Optional<String> pointer, Optional<Location> at) {
-        ObjectNode loc = mapper.createObjectNode();
+        ObjectNode loc = MAPPER.createObjectNode();
         loc.set("physicalLocation", physical(source, artifact, at));
         pointer.filter(p -> !p.isEmpty()).ifPresent(p -> {
             ObjectNode logical = loc.putArray("logicalLocations").addObject();
@@ -261,7 +262,7 @@ public final class SarifRenderer {
     }
 
     private ObjectNode physical(String source, int artifact, Optional<Location> at) {
-        ObjectNode phys = mapper.createObjectNode();
+        ObjectNode phys = MAPPER.createObjectNode();
         phys.set("artifactLocation", artifactLocation(source, artifact));
         at.ifPresent(l -> {
             ObjectNode region = phys.putObject("region");
@@ -272,7 +273,7 @@ public final class SarifRenderer {
     }
 
     private ObjectNode artifactLocation(String source, int artifact) {
-        ObjectNode a = mapper.createObjectNode();
+        ObjectNode a = MAPPER.createObjectNode();
         Optional<String> absolute = absoluteUri(source);
         a.put("uri", absolute.orElseGet(() -> relativeUri(source)));
         if (absolute.isEmpty()) {

@@ -70,11 +70,6 @@ public final class CheckKinds {
         return java.util.Collections.unmodifiableMap(kinds);
     }
 
-    /** Where a kind came from: "shipped", or its jar with the jar's SHA-256. */
-    public String originOf(String id) {
-        return origin(kinds.get(id));
-    }
-
     /** The places a site's kinds and libraries came from, for the reports' provenance. */
     public List<Plugins.Origin> plugins() {
         return plugins;

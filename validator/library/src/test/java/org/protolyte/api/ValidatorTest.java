@@ -197,4 +197,50 @@ class ValidatorTest {
         assertEquals(1, e.problems().size(), e.problems()::toString);
         assertTrue(e.problems().get(0).startsWith("unknown rule pack 'no-such-pack': not shipped ("), e::getMessage);
     }
+
+    @Test
+    void aResultsConditionsAreInTheUnitsTheirRecordStates() throws Exception {
+        Path file = SAMPLES.resolve("cell-culture-hepes-basal-medium.json");
+        Result r = Validator.builder().build().check(Source.of(file));
+        DocumentReport direct = new Protolyte(new SchemaCatalog(), LibraryLoader.shipped(new SchemaCatalog())).check(file);
+        assertEquals(file.toString(), r.source());
+        for (int i = 0; i < r.conditions().size(); i++) {
+            var d = direct.analysis().orElseThrow().conditions().get(i);
+            ConditionSummary c = r.conditions().get(i);
+            assertTrue(c.determinate());
+            assertEquals(d.condition().kelvin() - 273.15, c.temperature(), 1e-9, "°C");
+            assertEquals(d.state().orElseThrow().osmolality() * 1000, c.osmolality().orElseThrow(), 1e-9, "mOsm/kg");
+            assertEquals(d.state().orElseThrow().ionicStrength(), c.ionicStrength().orElseThrow(), 0);
+            assertEquals(d.uncertainty().orElseThrow().pH(), c.pHUncertainty().orElseThrow(), 0);
+        }
+        // the sample states its conditions at 22, 4 and 37 °C (the document)
+        assertEquals(List.of(22.0, 4.0, 37.0), r.conditions().stream().map(c -> Math.rint(c.temperature() * 10) / 10)
+                .toList());
+    }
+
+    @Test
+    void anIndeterminateConditionKeepsItsTemperatureAndNothingElse() throws Exception {
+        byte[] doc = ("{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"FRZ-1\", \"basis\": "
+                + "{\"finalVolume\": \"1 L\"}, \"components\": [{\"substance\": \"sodium chloride\", \"amount\": "
+                + "\"10 mmol/L\"}], \"conditions\": [{\"name\": \"frozen\", \"temperature\": \"-20 Cel\"}]}")
+                .getBytes(StandardCharsets.UTF_8);
+        Result r = Validator.builder().build().check(Source.of("frozen.json", doc));
+        assertEquals(Status.INDETERMINATE, r.status());
+        assertEquals(3, r.exitCode());
+        ConditionSummary c = r.conditions().get(0);
+        assertEquals(-20.0, c.temperature(), 1e-9);
+        assertTrue(!c.determinate() && c.pH().isEmpty() && c.osmolality().isEmpty() && c.bufferCapacity().isEmpty());
+    }
+
+    @Test
+    void theExitCodesAreTheCommandLines() {
+        assertEquals(List.of(0, 1, 2, 3, 4), List.of(Status.PASS.exitCode(), Status.FAIL.exitCode(),
+                Status.INVALID.exitCode(), Status.INDETERMINATE.exitCode(), Status.FAULT.exitCode()));
+    }
+
+    @Test
+    void aConfigurationExceptionsMessageNamesEveryProblem() {
+        assertEquals("one", new ConfigurationException(List.of("one")).getMessage());
+        assertEquals("2 problems: one; two", new ConfigurationException(List.of("one", "two")).getMessage());
+    }
 }

@@ -119,4 +119,10 @@ public class EngineBenchmark {
     public org.protolyte.api.Result wholeCheckThroughTheApi() {
         return validator.check(org.protolyte.api.Source.of("m", medium));
     }
+
+    /** What the validation service does per request: the check through the API, and its JSON report. */
+    @Benchmark
+    public String checkAndJsonReport() {
+        return validator.check(org.protolyte.api.Source.of("m", medium)).render(org.protolyte.api.Format.JSON);
+    }
 }
