@@ -359,6 +359,7 @@ public final class Analyzer {
         out.add("activity coefficients: " + equilibrium.activityModel().name() + "; pH on the conventional "
                 + "(Bates–Guggenheim) scale to ionic strength 0.1 mol/kg, on the scale of the model's single-ion "
                 + "coefficients above");
+        defaultedUncertainties(recipe).ifPresent(out::add);
         Formulation.Basis b = recipe.formulation().basis();
         if (b.finalVolume()) {
             out.add(String.format(Locale.ROOT, "made up to volume at %.0f °C; water mass from additive apparent "
@@ -371,5 +372,28 @@ public final class Analyzer {
             }
         }
         return out;
+    }
+
+    /** The steps of the recipe's systems whose ΔH° or ΔCp° uncertainty is the library's default, named. */
+    private static java.util.Optional<String> defaultedUncertainties(Recipe recipe) {
+        java.util.Set<String> used = new java.util.HashSet<>();
+        recipe.ingredients().forEach(i -> i.substance().composition().systems().forEach(p -> used.add(p.system())));
+        if (recipe.formulation().conditions().stream().anyMatch(c -> c.co2Pascal().isPresent())) {
+            recipe.library().carbonDioxide().ifPresent(c -> used.add(c.name()));
+        }
+        List<String> named = new ArrayList<>();
+        recipe.library().systems().stream().filter(sys -> used.contains(sys.name()))
+                .sorted(java.util.Comparator.comparing(org.protolyte.chemistry.AcidBaseSystem::name)).forEach(sys -> {
+                    for (int k = 0; k < sys.steps().size(); k++) {
+                        var step = sys.steps().get(k);
+                        if (!step.assumed().isEmpty()) {
+                            named.add(sys.name() + (sys.steps().size() > 1 ? " pKa" + (k + 1) : " pKa") + " ("
+                                    + String.join(", ", step.assumed()) + ")");
+                        }
+                    }
+                });
+        return named.isEmpty() ? java.util.Optional.empty()
+                : java.util.Optional.of(org.protolyte.substance.UncertaintyDefaults.STATED + ": " + String.join("; ",
+                named));
     }
 }

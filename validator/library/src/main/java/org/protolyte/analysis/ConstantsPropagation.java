@@ -125,6 +125,11 @@ final class ConstantsPropagation {
                             scaled(d.logBeta(carried), DissociationStep.pKaChangeFromDeltaH(uH, kelvin)),
                             paired ? pair : -1, step.correlation()));
                 }
+                double uCp = step.deltaCpUncertainty();
+                if (uCp > 0) {
+                    out.add(new Perturbation(name.replace("pKa", "ΔCp°"), uCp, (d, kelvin) ->
+                            scaled(d.logBeta(carried), DissociationStep.pKaChangeFromDeltaCp(uCp, kelvin)), -1, 0));
+                }
             }
         }
         for (Species complex : solution.species()) {       // complexes, ion pairs and esters the recipe forms

@@ -40,17 +40,19 @@ public final class Equilibrium {
     private final ActivityModel activity;
     private final Map<Species, Double> logBetaShifts;
     private final Map<Species, Double> deltaHShifts;    // J/mol on the dissociation steps the species carries
+    private final Map<Species, Double> deltaCpShifts;   // J/(K·mol), likewise
     private final double pKwShift;
 
     public Equilibrium(ActivityModel activity) {
-        this(activity, Map.of(), Map.of(), 0);
+        this(activity, Map.of(), Map.of(), Map.of(), 0);
     }
 
     private Equilibrium(ActivityModel activity, Map<Species, Double> logBetaShifts, Map<Species, Double> deltaHShifts,
-                        double pKwShift) {
+                        Map<Species, Double> deltaCpShifts, double pKwShift) {
         this.activity = activity;
         this.logBetaShifts = Map.copyOf(logBetaShifts);
         this.deltaHShifts = Map.copyOf(deltaHShifts);
+        this.deltaCpShifts = Map.copyOf(deltaCpShifts);
         this.pKwShift = pKwShift;
     }
 
@@ -107,19 +109,28 @@ public final class Equilibrium {
                 }
             }
         }
-        return new Equilibrium(activity, logs, enthalpies, pKwShift);
+        return new Equilibrium(activity, logs, enthalpies, deltaCpShifts, pKwShift);
+    }
+
+    /** The same with one step's ΔCp° of ionization raised by {@code delta} J/(K·mol): its pKa moves away from 25 °C. */
+    public Equilibrium withDeltaCpShift(AcidBaseSystem system, int step, double delta) {
+        Map<Species, Double> cp = new HashMap<>(deltaCpShifts);
+        for (int i = 0; i <= step; i++) {       // every species carrying the step's proton
+            cp.merge(system.species().get(i), delta, Double::sum);
+        }
+        return new Equilibrium(activity, logBetaShifts, deltaHShifts, cp, pKwShift);
     }
 
     /** The same equilibrium with one complex's log K raised by {@code delta}: for its uncertainty. */
     public Equilibrium withLogKShift(Species complex, double delta) {
         Map<Species, Double> logs = new HashMap<>(logBetaShifts);
         logs.merge(complex, delta, Double::sum);
-        return new Equilibrium(activity, logs, deltaHShifts, pKwShift);
+        return new Equilibrium(activity, logs, deltaHShifts, deltaCpShifts, pKwShift);
     }
 
     /** The same equilibrium with pKw raised by {@code delta}. */
     public Equilibrium withPKwShift(double delta) {
-        return new Equilibrium(activity, logBetaShifts, deltaHShifts, pKwShift + delta);
+        return new Equilibrium(activity, logBetaShifts, deltaHShifts, deltaCpShifts, pKwShift + delta);
     }
 
     public ActivityModel activityModel() {
@@ -164,7 +175,8 @@ public final class Equilibrium {
                             Map<Species, Double> fixedSpecies) {
         return new Prepared(new PreparedProblem(activity, species, components, kelvin, fixedSpecies,
                 s -> s.formation().log10K(kelvin) + logBetaShifts.getOrDefault(s, 0.0)
-                        + DissociationStep.pKaChangeFromDeltaH(deltaHShifts.getOrDefault(s, 0.0), kelvin),
+                        + DissociationStep.pKaChangeFromDeltaH(deltaHShifts.getOrDefault(s, 0.0), kelvin)
+                        + DissociationStep.pKaChangeFromDeltaCp(deltaCpShifts.getOrDefault(s, 0.0), kelvin),
                 Water.pKw(kelvin) + pKwShift));
     }
 

@@ -274,6 +274,9 @@ public final class HtmlRenderer {
             b.append("</tr>");
         }
         b.append("</tbody></table>").append(NL);
+        if (conditions.stream().anyMatch(c -> c.uncertainty().isPresent())) {
+            b.append("<p class=\"uncertainty\">").append(esc(RunReport.UNCERTAINTY)).append("</p>").append(NL);
+        }
         List<String> solids = new ArrayList<>();
         for (ConditionResult c : conditions) {
             for (SolidPhase.Saturation x : c.saturation()) {

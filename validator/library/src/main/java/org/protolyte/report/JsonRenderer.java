@@ -98,12 +98,7 @@ public final class JsonRenderer {
         tool.put("pHConvention", "pH = −log10(γH·mH): up to ionic strength 0.1 mol/kg the conventional scale "
                 + "(Bates–Guggenheim convention, Buck et al., Pure Appl. Chem. 74 (2002) 2169) with γH from the Davies "
                 + "equation; from 0.3 mol/kg γH from Pitzer's equations (their own single-ion scale), blended between");
-        tool.put("uncertainty", "pHUncertainty and bufferCapacityUncertainty are standard uncertainties from the "
-                + "published constants (each pKa used, each ΔH° that has an uncertainty, each complex's log K, and pKw; a "
-                + "step's pKa and ΔH° with their correlation where the source gives it) and from the activity model (every "
-                + "ion's log γ moved by z² times its standard uncertainty: Davies' disagreement with Pitzer's equations, "
-                + "small below ionic strength 0.1 mol/kg, Pitzer's own above), by linear propagation with derivatives from implicit "
-                + "differentiation, the q.s. held to its goal; they do not cover batch-to-batch variation or ΔCp°");
+        tool.put("uncertainty", RunReport.UNCERTAINTY);
         tool.put("generatedAt", generatedAt.toString());
         ArrayNode library = tool.putArray("substanceLibrary");
         libraryFiles.forEach((source, sha) -> library.addObject().put("source", source).put("sha256", sha));

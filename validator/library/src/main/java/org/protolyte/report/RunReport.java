@@ -23,6 +23,14 @@ public record RunReport(String toolVersion, Instant generatedAt, Map<String, Str
     public static final String CAUTION = "Protolyte is a decision aid. Release decisions rest on measured values, "
             + "the applicable pharmacopoeia, local SOPs and qualified QA review.";
 
+    /** What every ± covers: one wording for the JSON report's {@code tool.uncertainty}, the text report and the README. */
+    public static final String UNCERTAINTY = "± is the standard uncertainty from the published constants (each pKa used, "
+            + "each step's ΔH° and ΔCp° with the library's stated defaults where a source gives none, each complex's "
+            + "log K, and pKw) and from the activity model (every ion's log γ moved by z² times its standard "
+            + "uncertainty), by linear propagation (GUM) with derivatives from implicit differentiation, the q.s. held "
+            + "to its goal; it does not cover batch-to-batch variation, and where a titrant is dosed to a pH, the "
+            + "meter removes it at that condition";
+
     public RunReport {
         reports = List.copyOf(reports);
         skipped = List.copyOf(skipped);

@@ -288,9 +288,7 @@ public final class TextRenderer {
             b.append("  * condition added by Protolyte (none given, or the pH target's temperature)").append(NL);
         }
         if (a.conditions().stream().anyMatch(c -> c.uncertainty().isPresent())) {
-            b.append(wrap("  ", "    ", "± is the standard uncertainty from the published pKa and pKw values and the "
-                    + "activity model, not batch-to-batch variation; where a titrant is dosed to a pH, the meter removes "
-                    + "it at that condition"));
+            b.append(wrap("  ", "    ", RunReport.UNCERTAINTY));
         }
         b.append(wrap("  assumed: ", "    ", p(String.join("; ", a.assumptions()))));
     }

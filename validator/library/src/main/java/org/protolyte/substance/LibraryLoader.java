@@ -300,6 +300,33 @@ public final class LibraryLoader {
             into.put(name, value);
         }
 
+        /**
+         * A step as the library gives it, with the stated default for each uncertainty of ΔH° and ΔCp° its source
+         * does not give ({@link UncertaintyDefaults}); a ΔH° or ΔCp° of 0 is one not published.
+         */
+        private static DissociationStep step(JsonNode s, double from, double to) {
+            double deltaH = s.get("deltaH").asDouble();
+            double deltaCp = s.path("deltaCp").asDouble(0);
+            List<String> assumed = new ArrayList<>();   // in this order: ΔH°, then ΔCp°
+            double uH;
+            if (s.has("deltaHUncertainty")) {
+                uH = s.get("deltaHUncertainty").asDouble();
+            } else {
+                uH = deltaH == 0 ? UncertaintyDefaults.UNPUBLISHED_DELTA_H : UncertaintyDefaults.DELTA_H;
+                assumed.add(deltaH == 0 ? "ΔH° not published" : "u(ΔH°)");
+            }
+            double uCp;
+            if (s.has("deltaCpUncertainty")) {
+                uCp = s.get("deltaCpUncertainty").asDouble();
+            } else {
+                uCp = deltaCp == 0 ? UncertaintyDefaults.UNPUBLISHED_DELTA_CP : UncertaintyDefaults.DELTA_CP;
+                assumed.add(deltaCp == 0 ? "ΔCp° not published" : "u(ΔCp°)");
+            }
+            return new DissociationStep(s.get("pKa").asDouble(), deltaH * 1000, deltaCp, s.get("uncertainty").asDouble(),
+                    TemperatureRange.celsius(from, to), uH * 1000, s.path("pKaDeltaHCorrelation").asDouble(0), uCp,
+                    assumed);
+        }
+
         private void system(JsonNode n, String pointer) {
             String name = n.get("name").asString();
             List<AcidBaseSystem.Form> forms = new ArrayList<>();
@@ -316,10 +343,7 @@ public final class LibraryLoader {
                     problems.add(doc.problem(pointer + "/steps/" + i + "/validTo", "validTo is below validFrom"));
                     return;
                 }
-                steps.add(new DissociationStep(s.get("pKa").asDouble(), s.get("deltaH").asDouble() * 1000,
-                        s.path("deltaCp").asDouble(0), s.get("uncertainty").asDouble(),
-                        TemperatureRange.celsius(from, to), s.path("deltaHUncertainty").asDouble(0) * 1000,
-                        s.path("pKaDeltaHCorrelation").asDouble(0)));
+                steps.add(step(s, from, to));
                 sources.add(s.get("source").asString());
             }
             try {

@@ -37,7 +37,7 @@ class BetaUncertaintyTest {
     void betasUncertaintyCombinesTheCorrelatedPairAsTheGumSays(double rho) throws Exception {
         String library = "{\"document\": \"substance-library\", \"formatVersion\": 1,"
                 + " \"systems\": [{\"name\": \"XB\", \"forms\": [{\"name\": \"HXB\", \"charge\": 0}, {\"name\": \"XB-\", \"charge\": -1}],"
-                + " \"steps\": [{\"pKa\": 7.0, \"uncertainty\": 0.01, \"deltaH\": 40, \"deltaHUncertainty\": 8,"
+                + " \"steps\": [{\"pKa\": 7.0, \"uncertainty\": 0.01, \"deltaH\": 40, \"deltaHUncertainty\": 8, \"deltaCpUncertainty\": 0,"
                 + " \"pKaDeltaHCorrelation\": " + rho + ", \"deltaCp\": 0, \"validFrom\": 0, \"validTo\": 60, \"source\": \"test\"}]}],"
                 + " \"substances\": [{\"name\": \"HXB acid\", \"molarMass\": 200, \"composition\": {\"systems\": [{\"system\": \"XB\", \"form\": \"HXB\", \"count\": 1}]}}]}";
         String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-UB\", \"revision\": \"A\","

@@ -168,7 +168,7 @@ class RobustnessTest {
     void correlatedPKaAndDeltaHSpreadAsTheCovarianceSays(double rho) throws Exception {
         String library = "{\"document\": \"substance-library\", \"formatVersion\": 1,"
                 + " \"systems\": [{\"name\": \"XB\", \"forms\": [{\"name\": \"HXB\", \"charge\": 0}, {\"name\": \"XB-\", \"charge\": -1}],"
-                + " \"steps\": [{\"pKa\": 7.0, \"uncertainty\": 0.01, \"deltaH\": 40, \"deltaHUncertainty\": 8,"
+                + " \"steps\": [{\"pKa\": 7.0, \"uncertainty\": 0.01, \"deltaH\": 40, \"deltaHUncertainty\": 8, \"deltaCpUncertainty\": 0,"
                 + " \"pKaDeltaHCorrelation\": " + rho + ", \"deltaCp\": 0, \"validFrom\": 0, \"validTo\": 60, \"source\": \"test\"}]}],"
                 + " \"substances\": [{\"name\": \"HXB acid\", \"molarMass\": 200, \"composition\": {\"systems\": [{\"system\": \"XB\", \"form\": \"HXB\", \"count\": 1}]}},"
                 + " {\"name\": \"NaXB salt\", \"molarMass\": 222, \"composition\": {\"ions\": {\"Na+\": 1}, \"systems\": [{\"system\": \"XB\", \"form\": \"XB-\", \"count\": 1}]}}]}";
