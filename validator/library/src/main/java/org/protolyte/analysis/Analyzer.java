@@ -359,6 +359,16 @@ public final class Analyzer {
         out.add("activity coefficients: " + equilibrium.activityModel().name() + "; pH on the conventional "
                 + "(Bates–Guggenheim) scale to ionic strength 0.1 mol/kg, on the scale of the model's single-ion "
                 + "coefficients above");
+        for (Ingredient ing : recipe.ingredients()) {
+            List<String> forms = recipe.library().forms(ing.line().substance());
+            if (!forms.isEmpty()) {
+                out.add(String.format(Locale.ROOT, "'%s' names forms that differ only in their water of hydration (%s); "
+                        + "for a molar amount the form does not change the chemistry: %s was assumed for the water it "
+                        + "brings (%.0f mol per mol); a hydrate weighed instead brings its own water of hydration too",
+                        ing.line().substance(), String.join(", ", forms), ing.substance().name(),
+                        ing.substance().hydrationWater()));
+            }
+        }
         defaultedUncertainties(recipe).ifPresent(out::add);
         Formulation.Basis b = recipe.formulation().basis();
         if (b.finalVolume()) {

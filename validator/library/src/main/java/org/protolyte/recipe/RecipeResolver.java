@@ -38,8 +38,12 @@ public final class RecipeResolver {
             try {
                 s = library.lookup(line.substance());
             } catch (LookupException e) {
-                problems.add(f.document().problem(line.pointer() + "/substance", e.getMessage()));
-                continue;
+                Optional<Substance> form = molar(line) ? library.formOfHydratesOnly(line.substance()) : Optional.empty();
+                if (form.isEmpty()) {
+                    problems.add(f.document().problem(line.pointer() + "/substance", e.getMessage()));
+                    continue;
+                }
+                s = form.get();   // a molar amount of any of its hydrates is the same chemistry (the note says which)
             }
             try {
                 ingredients.add(ingredient(f, line, s));
@@ -67,6 +71,27 @@ public final class RecipeResolver {
         return recipe;
     }
 
+    /** The line gives its amount in moles, per litre or per kilogram of water: no hydrate changes the moles. */
+    private static boolean molar(Formulation.Line line) {
+        return line.amount().map(q -> q.dimension() == org.protolyte.units.Dimension.AMOUNT
+                || q.dimension() == org.protolyte.units.Dimension.AMOUNT_CONCENTRATION
+                || q.dimension() == org.protolyte.units.Dimension.MOLALITY).orElse(false) && line.stock().isEmpty();
+    }
+
+    /** As {@link #molar(Formulation.Line)}, read from the component's tree. */
+    private static boolean molar(JsonNode component) {
+        if (component.has("stock") || !component.path("amount").isString()) {
+            return false;
+        }
+        try {
+            var d = org.protolyte.units.Quantity.parse(component.get("amount").asString()).dimension();
+            return d == org.protolyte.units.Dimension.AMOUNT || d == org.protolyte.units.Dimension.AMOUNT_CONCENTRATION
+                    || d == org.protolyte.units.Dimension.MOLALITY;
+        } catch (RuntimeException e) {
+            return false;   // caught: an amount that does not parse is its own problem, named by the reader
+        }
+    }
+
     /** Names under /components/N/substance that the library does not resolve, read straight from the tree. */
     public List<Problem> unresolvedNames(SourceDocument doc) {
         List<Problem> out = new ArrayList<>();
@@ -77,7 +102,9 @@ public final class RecipeResolver {
                 try {
                     library.lookup(name.asString());
                 } catch (LookupException e) {
-                    out.add(doc.problem("/components/" + i + "/substance", e.getMessage()));
+                    if (library.formOfHydratesOnly(name.asString()).isEmpty() || !molar(comps.get(i))) {
+                        out.add(doc.problem("/components/" + i + "/substance", e.getMessage()));
+                    }
                 }
             }
         }

@@ -149,6 +149,27 @@ public final class SubstanceLibrary {
         return names.stream().map(substances::get).toList();
     }
 
+    /**
+     * For a name shared by forms that differ only in their water of hydration (sodium acetate: anhydrous and
+     * trihydrate), the form with the least water; empty for any other name, including one shared by different species
+     * (monobasic and dibasic phosphate).
+     */
+    public Optional<Substance> formOfHydratesOnly(String name) {
+        List<String> forms = ambiguous.get(normalise(name));
+        if (forms == null || forms.isEmpty() || !forms.stream().allMatch(substances::containsKey)) {
+            return Optional.empty();
+        }
+        List<Substance> all = forms.stream().map(substances::get).toList();
+        boolean sameChemistry = all.stream().allMatch(x -> x.composition().equals(all.get(0).composition()));
+        return sameChemistry ? all.stream().min(java.util.Comparator.comparingDouble(Substance::hydrationWater))
+                : Optional.empty();
+    }
+
+    /** The forms a shared name names, in library order; empty where the name names one substance or none. */
+    public List<String> forms(String name) {
+        return ambiguous.getOrDefault(normalise(name), List.of());
+    }
+
     public Optional<AcidBaseSystem> system(String name) {
         return Optional.ofNullable(systems.get(name));
     }
