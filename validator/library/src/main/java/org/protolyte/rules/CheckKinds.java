@@ -43,6 +43,9 @@ public final class CheckKinds {
                 k.put(PluginCheck.of(p.kind(), p.origin().describe()), p.origin().describe(), problems);
             } catch (IllegalArgumentException e) {
                 problems.add(e.getMessage());
+            } catch (RuntimeException | LinkageError e) {   // a site's code answering its own declarations with a throw
+                problems.add("check kind " + p.kind().getClass().getName() + " (" + p.origin().describe()
+                        + ") cannot be used: " + e);
             }
         }
         if (!problems.isEmpty()) {

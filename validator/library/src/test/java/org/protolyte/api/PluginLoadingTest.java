@@ -211,6 +211,17 @@ class PluginLoadingTest {
     }
 
     @Test
+    void aKindThatThrowsWhenAskedWhatItIsIsAConfigurationProblem() throws Exception {
+        Path dir = variant("broken-declaration", "@Stateless " + String.format(KIND, "site-broken", "return List.of();",
+                "").replace("public Class<P> parameters() { return P.class; }",
+                "public Class<P> parameters() { throw new IllegalStateException(\"no record today\"); }"));
+        assertTrue(refused(dir).toString().contains("check kind org.example.bad.Kind (" + dir.resolve(
+                "broken-declaration.jar")), refused(dir)::toString);
+        assertTrue(refused(dir).toString().contains("cannot be used: java.lang.IllegalStateException: no record today"),
+                refused(dir)::toString);
+    }
+
+    @Test
     void aKindThatThrowsLeavesTheDocumentIndeterminateNeverPassed() throws Exception {
         Path dir = variant("throwing", "@Stateless " + String.format(KIND, "site-throwing",
                 "throw new IllegalStateException(\"broken on purpose\");", ""));
