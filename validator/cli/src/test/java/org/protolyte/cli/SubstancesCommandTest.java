@@ -95,4 +95,13 @@ class SubstancesCommandTest {
         assertTrue(r[1].indexOf("\nTris hydrochloride\n") < r[1].indexOf("\ntrisodium citrate"), "a name that starts "
                 + "with the query comes before one that only contains it");
     }
+
+    /** A buffer's other abbreviation finds it first (EPPS is HEPPS), with the constants read for it. */
+    @Test
+    void anAbbreviationFindsItsBuffer() {
+        String[] r = run("substances", "EPPS");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].startsWith("HEPPS\n"), r[1].substring(0, Math.min(200, r[1].length())));
+        assertTrue(r[1].contains("pKa 7.9564"), r[1]);
+    }
 }

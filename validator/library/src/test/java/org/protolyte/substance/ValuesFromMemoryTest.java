@@ -20,7 +20,7 @@ import tools.jackson.databind.json.JsonMapper;
  */
 class ValuesFromMemoryTest {
 
-    /** Dissociation steps whose source says "from memory", after the readings of issue 15 (81 of 115). */
+    /** Dissociation steps whose source says "from memory", after the readings of issue 15 (81 of 122). */
     private static final int CEILING = 81;
 
     /** The other constants (complexes, solids, solubility tables) resting on memory: 20 of 30. */
