@@ -4,8 +4,10 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.protolyte.chemistry.AcidBaseSystem;
@@ -55,6 +57,9 @@ public final class SubstancesCommand implements Callable<Integer> {
         }
         List<Substance> hits = library.substances().stream().filter(x -> rank(x, key) < NO_MATCH)
                 .sorted(java.util.Comparator.comparingInt(x -> rank(x, key))).toList();   // stable: library order within a rank
+        if (!hits.isEmpty() && rank(hits.get(0), key) == 0) {
+            hits = formsOf(hits.stream().filter(x -> rank(x, key) == 0).toList(), hits);
+        }
         if (hits.isEmpty()) {
             spec.commandLine().getErr().println("protolyte: no substance matches '" + Printable.text(query) + "'");
             return 2;
@@ -119,6 +124,23 @@ public final class SubstancesCommand implements Callable<Integer> {
             return 2;
         }
         return names.stream().anyMatch(n -> SubstanceLibrary.normalise(n).contains(key)) ? 3 : NO_MATCH;
+    }
+
+    /**
+     * An exact name asks for that substance: the hits that share one of its acid–base systems or neutral solutes
+     * (its salts and hydrates, Tris hydrochloride for Tris) and nothing that merely contains the word (issue 15:
+     * {@code phenol} is not phenol red, {@code ethanol} is not triethanolamine).
+     */
+    private static List<Substance> formsOf(List<Substance> exact, List<Substance> hits) {
+        Set<String> parts = new HashSet<>();
+        exact.forEach(s -> parts.addAll(parts(s)));
+        return hits.stream().filter(s -> exact.contains(s) || parts(s).stream().anyMatch(parts::contains)).toList();
+    }
+
+    private static Set<String> parts(Substance s) {
+        Set<String> parts = new HashSet<>(s.composition().solutes().keySet());
+        s.composition().systems().forEach(p -> parts.add(p.system()));
+        return parts;
     }
 
     /** Whether the first words of {@code name}, run together as {@link SubstanceLibrary#normalise} does, are the key. */

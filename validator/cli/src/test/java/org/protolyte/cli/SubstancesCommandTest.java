@@ -1,12 +1,16 @@
 package org.protolyte.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 import picocli.CommandLine;
 
@@ -86,14 +90,31 @@ class SubstancesCommandTest {
         assertTrue(r[2].contains("no system, complex, phase or substance matches 'unobtainium'"), r[2]);
     }
 
-    /** An exact name comes before names that merely contain the query (issue 15: "Tris" is not trisodium citrate). */
-    @Test
-    void anExactNameIsListedFirst() {
-        String[] r = run("substances", "Tris");
+    /**
+     * An exact name asks for that substance and its salts and hydrates, not for every name that contains the word
+     * (issue 15: "Tris" is not trisodium citrate, "phenol" is not phenol red, "ethanol" is not triethanolamine).
+     */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({"Tris, Tris, Tris hydrochloride, trisodium citrate", "phenol, phenol, , phenol red",
+        "ethanol, ethanol, , triethanolamine"})
+    void anExactNameListsItsFormsAndNothingThatMerelyContainsIt(String query, String first, String alsoListed,
+            String notListed) {
+        String[] r = run("substances", query);
         assertEquals("0", r[0], r[2]);
-        assertTrue(r[1].startsWith("Tris\n"), r[1].substring(0, Math.min(200, r[1].length())));
-        assertTrue(r[1].indexOf("\nTris hydrochloride\n") < r[1].indexOf("\ntrisodium citrate"), "a name that starts "
-                + "with the query comes before one that only contains it");
+        assertTrue(r[1].startsWith(first + "\n"), r[1].substring(0, Math.min(200, r[1].length())));
+        if (alsoListed != null) {
+            assertTrue(r[1].contains("\n" + alsoListed + "\n"), r[1]);
+        }
+        assertFalse(r[1].contains("\n" + notListed), r[1]);
+    }
+
+    /** Without an exact name, every name that contains the query is listed. */
+    @Test
+    void withoutAnExactNameEveryContainingNameIsListed() {
+        String[] r = run("substances", "citrate");
+        assertEquals("0", r[0], r[2]);
+        List<String> lines = r[1].lines().toList();
+        assertTrue(lines.contains("trisodium citrate dihydrate") && lines.contains("potassium dihydrogen citrate"), r[1]);
     }
 
     /** A buffer's other abbreviation finds it first (EPPS is HEPPS), with the constants read for it. */
