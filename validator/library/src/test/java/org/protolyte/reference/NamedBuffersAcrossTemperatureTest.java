@@ -14,7 +14,8 @@ import org.protolyte.substance.SubstanceLibrary;
  * The pKa the library gives at 5, 25 and 37 °C for the buffers the shipped rule packs and samples rely on, against
  * the source each value was read from: its pK(T) equation where it prints one, its printed pK at a temperature, or
  * (where it prints pK, ΔH° and ΔCp° at 25 °C only) the pK(T) those three give, integrated here with a constant ΔCp°.
- * Not covered, because no source for them could be read: acetate, histidine and glycine (see ValuesFromMemoryTest).
+ * Not covered, because no source for their temperature terms could be read: acetate (ΔCp°) and histidine (see
+ * ValuesFromMemoryTest).
  */
 class NamedBuffersAcrossTemperatureTest {
 
@@ -129,6 +130,30 @@ class NamedBuffersAcrossTemperatureTest {
     @ValueSource(doubles = {5, 25, 37})
     void trisFollowsItsSourcesThermodynamics(double celsius) {
         assertEquals(fromThermodynamics(8.071, 47530, -67, celsius), libraryPKa("Tris", 0, celsius), 0.003);
+    }
+
+    /**
+     * Glycine, pK 2.350 and 9.780 at 25 °C (Kaye and Laby, Tables of Physical and Chemical Constants, 3.9.7, after
+     * Robinson and Stokes 1970), calorimetric ΔH° 4.4 and 46.3 kJ/mol (Thermochim. Acta 448 (2006) 44, abstract); no
+     * ΔCp° was read, so none is integrated (its stated default uncertainty is what covers it).
+     */
+    @ParameterizedTest(name = "glycine pK1 and pK2 at {0} °C")
+    @ValueSource(doubles = {5, 25, 37})
+    void glycineFollowsItsSourcesThermodynamics(double celsius) {
+        assertEquals(fromThermodynamics(2.350, 4400, 0, celsius), libraryPKa("glycine", 0, celsius), 0.003, "pK1");
+        assertEquals(fromThermodynamics(9.780, 46300, 0, celsius), libraryPKa("glycine", 1, celsius), 0.003, "pK2");
+    }
+
+    /**
+     * Oxalic acid at 25 °C: the first step from Kettler, Palmer and Wesolowski, J. Solution Chem. 20 (1991), no. 9,
+     * abstract (pK 1.277, ΔH° −4.1 kJ/mol, ΔCp° −168 J/(K·mol)), the second from the same group's later fit, J. Chem.
+     * Eng. Data 43 (1998) 337, abstract (4.264, −7.3 kJ/mol, −229 J/(K·mol)); the library's source text says why.
+     */
+    @ParameterizedTest(name = "oxalate pK1 and pK2 at {0} °C")
+    @ValueSource(doubles = {5, 25, 37})
+    void oxalateFollowsItsSourcesThermodynamics(double celsius) {
+        assertEquals(fromThermodynamics(1.277, -4100, -168, celsius), libraryPKa("oxalate", 0, celsius), 0.003, "pK1");
+        assertEquals(fromThermodynamics(4.264, -7300, -229, celsius), libraryPKa("oxalate", 1, celsius), 0.003, "pK2");
     }
 
     /** HEPES and MES at 25 °C, Vega and Bates, Anal. Chem. 48 (1976) 1293, abstract: pK2 7.565 and 6.270. */

@@ -93,4 +93,26 @@ class PrimaryStandardsTest {
         double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05).pH(25);
         assertEquals(3.776, pH[0], TOLERANCE);
     }
+    /**
+     * Saturated calcium hydroxide, about 0.0203 mol/kg: pH 12.45 at 25 °C, temperature coefficient −0.033 per K
+     * (Bates, "Calcium hydroxide as a highly alkaline pH standard", J. Res. NBS 56 (1956) 305, abstract; read). The
+     * slope is checked over 20–30 °C within a tenth of its value: the abstract prints two figures.
+     */
+    @Test
+    void saturatedCalciumHydroxide() {
+        double[] pH = ReferenceDocuments.solution().with("calcium hydroxide", 0.0203).pH(20, 25, 30);
+        assertEquals(12.45, pH[1], TOLERANCE);
+        assertEquals(-0.033, (pH[2] - pH[0]) / 10, 0.0033);
+    }
+
+    /**
+     * 0.05 mol/kg potassium tetroxalate: pH 1.68 at 25 °C, the lowest of the five NBS standards (Bates, J. Res. NBS 56
+     * (1956) 305, abstract: "cover the pH range 1.68 to 9.18 at 25 °C"; that the 1.68 standard is the tetroxalate is
+     * common practice). Oxalic acid is a moderately strong acid, where Davies is least sure of the hydrogen ion.
+     */
+    @Test
+    void potassiumTetroxalate() {
+        double[] pH = ReferenceDocuments.solution().with("potassium tetroxalate dihydrate", 0.05).pH(25);
+        assertEquals(1.68, pH[0], TOLERANCE);
+    }
 }
