@@ -14,8 +14,7 @@ import org.protolyte.substance.SubstanceLibrary;
  * The pKa the library gives at 5, 25 and 37 °C for the buffers the shipped rule packs and samples rely on, against
  * the source each value was read from: its pK(T) equation where it prints one, its printed pK at a temperature, or
  * (where it prints pK, ΔH° and ΔCp° at 25 °C only) the pK(T) those three give, integrated here with a constant ΔCp°.
- * Not covered, because no source for their temperature terms could be read: acetate (ΔCp°) and histidine (see
- * ValuesFromMemoryTest).
+ * Not covered, because no source for their temperature terms could be read: histidine (see ValuesFromMemoryTest).
  */
 class NamedBuffersAcrossTemperatureTest {
 
@@ -154,6 +153,31 @@ class NamedBuffersAcrossTemperatureTest {
     void oxalateFollowsItsSourcesThermodynamics(double celsius) {
         assertEquals(fromThermodynamics(1.277, -4100, -168, celsius), libraryPKa("oxalate", 0, celsius), 0.003, "pK1");
         assertEquals(fromThermodynamics(4.264, -7300, -229, celsius), libraryPKa("oxalate", 1, celsius), 0.003, "pK2");
+    }
+
+    /**
+     * Phosphate, second and third steps: pK 7.1965 (Partanen and Minkkinen, Acta Chem. Scand. 50 (1996) 1081,
+     * abstract) and 12.375 (Kaye and Laby 3.9.7); ΔH° 3.600 and 18.200 − 3.600 kJ/mol (CODATA 1989 as tabulated in the
+     * Thermoddem V1.10 database file); ΔCp° from the species heat capacities of Shock and Helgeson 1988 and Shock et
+     * al. 1997 as tabulated in the OBIGT database file, −215 and −277 J/(K·mol).
+     */
+    @ParameterizedTest(name = "phosphate pK2 and pK3 at {0} °C")
+    @ValueSource(doubles = {5, 25, 37})
+    void phosphateSecondAndThirdStepsFollowTheirSourcesThermodynamics(double celsius) {
+        assertEquals(fromThermodynamics(7.1965, 3600, -215, celsius), libraryPKa("phosphate", 1, celsius), 0.003,
+                "pK2");
+        assertEquals(fromThermodynamics(12.375, 14600, -277, celsius), libraryPKa("phosphate", 2, celsius), 0.003,
+                "pK3");
+    }
+
+    /**
+     * Acetic acid: pK 4.757 and ΔH° −0.41 kJ/mol (MINTEQA2 version 4, NIST SRD 46), ΔCp° −144 J/(K·mol) from the
+     * species heat capacities of Shock 1995 as tabulated in the OBIGT database file.
+     */
+    @ParameterizedTest(name = "acetate pK at {0} °C")
+    @ValueSource(doubles = {5, 25, 37})
+    void acetateFollowsItsSourcesThermodynamics(double celsius) {
+        assertEquals(fromThermodynamics(4.757, -410, -144, celsius), libraryPKa("acetate", 0, celsius), 0.003);
     }
 
     /** HEPES and MES at 25 °C, Vega and Bates, Anal. Chem. 48 (1976) 1293, abstract: pK2 7.565 and 6.270. */
