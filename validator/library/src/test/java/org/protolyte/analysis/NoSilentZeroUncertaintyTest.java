@@ -64,7 +64,7 @@ class NoSilentZeroUncertaintyTest {
         FormulationAnalysis a = r.analysis().orElseThrow();
         ConditionResult storage = a.conditions().stream().filter(c -> c.condition().name().equals("storage"))
                 .findFirst().orElseThrow();
-        // histidine pKa2 ΔH° 29.5 kJ/mol with the default u = 2 kJ/mol; the q.s. is set at 21 °C, so at 5 °C pKa2
+        // histidine pKa2 ΔH° 29.7 kJ/mol with the default u = 2 kJ/mol; the q.s. is set at 21 °C, so at 5 °C pKa2
         // moves by 2000/(8.314462618 · ln 10) · (1/278.15 − 1/294.15) = 0.02043 against it, and histidine carries
         // the buffering: the pH moves by nearly as much
         double share = 2000 / (8.314462618 * Math.log(10)) * (1 / 278.15 - 1 / 294.15);

@@ -14,7 +14,8 @@ import org.protolyte.substance.SubstanceLibrary;
  * The pKa the library gives at 5, 25 and 37 °C for the buffers the shipped rule packs and samples rely on, against
  * the source each value was read from: its pK(T) equation where it prints one, its printed pK at a temperature, or
  * (where it prints pK, ΔH° and ΔCp° at 25 °C only) the pK(T) those three give, integrated here with a constant ΔCp°.
- * Not covered, because no source for their temperature terms could be read: histidine (see ValuesFromMemoryTest).
+ * HEPES and MES are checked at 25 °C only: no source for their temperature terms could be read (see
+ * ValuesFromMemoryTest).
  */
 class NamedBuffersAcrossTemperatureTest {
 
@@ -178,6 +179,27 @@ class NamedBuffersAcrossTemperatureTest {
     @ValueSource(doubles = {5, 25, 37})
     void acetateFollowsItsSourcesThermodynamics(double celsius) {
         assertEquals(fromThermodynamics(4.757, -410, -144, celsius), libraryPKa("acetate", 0, celsius), 0.003);
+    }
+
+    /**
+     * L-Histidine, the three steps from the standard molal properties of its four protonation states in the OBIGT
+     * database file (Kitadai, Origins Life Evol. Biospheres 45 (2015) 377; Amend and Helgeson, J. Chem. Soc., Faraday
+     * Trans. 93 (1997) 1927), cal/mol and cal/(K·mol) as printed, converted with 4.184 J/cal:
+     * His+2 −58750, −116300, 87.8; His+ −56570, −115300, 59.1; His −48420, −108200, 56.2; His− −35760, −97700, 37.9
+     * (ΔfG°, ΔfH°, Cp°).
+     */
+    @ParameterizedTest(name = "histidine pK1, pK2 and pK3 at {0} °C")
+    @ValueSource(doubles = {5, 25, 37})
+    void histidineFollowsItsSourcesThermodynamics(double celsius) {
+        double[][] gHCp = {{-58750, -116300, 87.8}, {-56570, -115300, 59.1}, {-48420, -108200, 56.2},
+            {-35760, -97700, 37.9}};
+        for (int k = 0; k < 3; k++) {
+            double pK = (gHCp[k + 1][0] - gHCp[k][0]) * 4.184 / (R * T_REF * Math.log(10));
+            double deltaH = (gHCp[k + 1][1] - gHCp[k][1]) * 4.184;
+            double deltaCp = (gHCp[k + 1][2] - gHCp[k][2]) * 4.184;
+            assertEquals(fromThermodynamics(pK, deltaH, deltaCp, celsius), libraryPKa("histidine", k, celsius), 0.003,
+                    "pK" + (k + 1));
+        }
     }
 
     /** HEPES and MES at 25 °C, Vega and Bates, Anal. Chem. 48 (1976) 1293, abstract: pK2 7.565 and 6.270. */
