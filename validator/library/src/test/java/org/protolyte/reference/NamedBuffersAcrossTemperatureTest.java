@@ -133,6 +133,20 @@ class NamedBuffersAcrossTemperatureTest {
     }
 
     /**
+     * Tris against an independent emf series, every 5 K from 0 to 50 °C: Bates and Hetzer, J. Phys. Chem. 65 (1961)
+     * 667, graded Reliable, as digitized in the IUPAC dissociation-constant dataset (github.com/IUPAC/
+     * Dissociation-Constants, iupac_high-confidence_v2_4.csv, commit e099d8d9, row perrin144). The library's Tris is
+     * read from another study, so this checks it against a second measurement, within 0.01.
+     */
+    @Test
+    void trisAgreesWithBatesAndHetzerFrom0To50Celsius() {
+        double[] printed = {8.85, 8.6774, 8.5164, 8.3616, 8.2138, 8.0746, 7.9344, 7.8031, 7.6772, 7.5543, 7.4365};
+        for (int i = 0; i < printed.length; i++) {
+            assertEquals(printed[i], libraryPKa("Tris", 0, 5.0 * i), 0.01, "Tris at " + 5 * i + " °C");
+        }
+    }
+
+    /**
      * Glycine, pK 2.350 and 9.780 at 25 °C (Kaye and Laby, Tables of Physical and Chemical Constants, 3.9.7, after
      * Robinson and Stokes 1970), calorimetric ΔH° 4.4 and 46.3 kJ/mol (Thermochim. Acta 448 (2006) 44, abstract); no
      * ΔCp° was read, so none is integrated (its stated default uncertainty is what covers it).

@@ -1,6 +1,7 @@
 package org.protolyte.reference;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.stream.IntStream;
 
@@ -77,5 +78,38 @@ class PrimaryStandardsAcrossTemperatureTest {
         double published = 2073.44 / t - 13.3270 + 0.045199 * t - 3.4846e-5 * t * t;
         double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(celsius);
         assertEquals(published, pH[0], TOLERANCE);
+    }
+
+    /**
+     * Every standard of Buck et al. 2002 (Tables 2 and 3) that the library can form gets a pH at every 5 K from 0 to
+     * 50 °C (issue 15, item 5), whether or not its published values could be read here. The compositions are those
+     * of the IUPAC recommendation; saturated potassium hydrogen tartrate is taken at its 25 °C molality, 0.0341
+     * mol/kg (common practice), at every temperature.
+     */
+    @ParameterizedTest(name = "{0}")
+    @ValueSource(strings = {"tartrate", "citrate", "phthalate", "equimolal phosphate", "physiological phosphate",
+        "borax", "carbonate", "tetroxalate", "calcium hydroxide", "Tris", "acetate"})
+    void everyStandardTheLibraryFormsIsComputableFrom0To50Celsius(String standard) {
+        ReferenceDocuments solution = switch (standard) {
+            case "tartrate" -> ReferenceDocuments.solution().with("potassium hydrogen tartrate", 0.0341);
+            case "citrate" -> ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05);
+            case "phthalate" -> ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05);
+            case "equimolal phosphate" -> ReferenceDocuments.solution()
+                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
+            case "physiological phosphate" -> ReferenceDocuments.solution()
+                    .with("potassium dihydrogen phosphate", 0.008695)
+                    .with("disodium hydrogen phosphate anhydrous", 0.03043);
+            case "borax" -> ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01);
+            case "carbonate" -> ReferenceDocuments.solution()
+                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
+            case "tetroxalate" -> ReferenceDocuments.solution().with("potassium tetroxalate dihydrate", 0.05);
+            case "calcium hydroxide" -> ReferenceDocuments.solution().with("calcium hydroxide", 0.0203);
+            case "Tris" -> ReferenceDocuments.solution().with("Tris", 0.01667).with("Tris hydrochloride", 0.05);
+            default -> ReferenceDocuments.solution().with("acetic acid", 0.1).with("sodium acetate anhydrous", 0.1);
+        };
+        double[] celsius = IntStream.rangeClosed(0, 10).mapToDouble(i -> 5.0 * i).toArray();
+        double[] pH = solution.pH(celsius);   // fails with the reason if any condition is indeterminate
+        IntStream.range(0, pH.length).forEach(i -> assertTrue(pH[i] > 1 && pH[i] < 14, standard + " at "
+                + celsius[i] + " °C: " + pH[i]));
     }
 }
