@@ -4,9 +4,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.protolyte.analysis.ConditionResult;
 
@@ -115,5 +115,36 @@ class PrimaryStandardsTest {
     void potassiumTetroxalate() {
         double[] pH = ReferenceDocuments.solution().with("potassium tetroxalate dihydrate", 0.05).pH(25);
         assertEquals(1.68, pH[0], TOLERANCE);
+    }
+
+    /**
+     * Buffer values β of the NBS standards at 25 °C, mol/(kg·pH), against Lange's Handbook of Chemistry, 15th ed.,
+     * Table 8.15 (p. 8.106; read): 0.027 (saturated tartrate), 0.034 (citrate), 0.016 (phthalate), 0.029 and 0.016
+     * (the two phosphates), 0.020 (borax), 0.029 (carbonate), 0.09 (calcium hydroxide). The table prints two
+     * figures, so the tolerance is 8 %; borax gets 12 %: with the polyborates it is 10 % high (15 % without them,
+     * issue 17). Potassium tetroxalate is not among them: the table's 0.070 is well below the engine's 0.104, whose
+     * free hydrogen ion alone gives 0.057, and the difference is not explained here (see the issue notes).
+     */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({"tartrate, 0.027, 0.08", "citrate, 0.034, 0.08",
+        "phthalate, 0.016, 0.08", "equimolal phosphate, 0.029, 0.08", "physiological phosphate, 0.016, 0.08",
+        "borax, 0.020, 0.12", "carbonate, 0.029, 0.08", "calcium hydroxide, 0.09, 0.08"})
+    void bufferValuesOfTheNbsStandards(String standard, double published, double relativeTolerance) {
+        ReferenceDocuments solution = switch (standard) {
+            case "tartrate" -> ReferenceDocuments.solution().with("potassium hydrogen tartrate", 0.0341);
+            case "citrate" -> ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05);
+            case "phthalate" -> ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05);
+            case "equimolal phosphate" -> ReferenceDocuments.solution()
+                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
+            case "physiological phosphate" -> ReferenceDocuments.solution()
+                    .with("potassium dihydrogen phosphate", 0.008695)
+                    .with("disodium hydrogen phosphate anhydrous", 0.03043);
+            case "borax" -> ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01);
+            case "carbonate" -> ReferenceDocuments.solution()
+                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
+            default -> ReferenceDocuments.solution().with("calcium hydroxide", 0.0203);
+        };
+        double beta = solution.condition(25).state().orElseThrow().bufferCapacity();
+        assertEquals(published, beta, relativeTolerance * published, standard);
     }
 }
