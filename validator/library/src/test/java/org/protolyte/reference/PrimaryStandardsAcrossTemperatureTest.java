@@ -38,15 +38,7 @@ class PrimaryStandardsAcrossTemperatureTest {
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"equimolal phosphate", "physiological phosphate", "carbonate"})
     void standardFrom0To50Celsius(String standard) {
-        ReferenceDocuments solution = switch (standard) {
-            case "equimolal phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
-            case "physiological phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.008695)
-                    .with("disodium hydrogen phosphate anhydrous", 0.03043);
-            default -> ReferenceDocuments.solution()
-                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
-        };
+        ReferenceDocuments solution = ReferenceDocuments.standard(standard);
         double[] published = switch (standard) {
             case "equimolal phosphate" -> EQUIMOLAL_PHOSPHATE;
             case "physiological phosphate" -> PHYSIOLOGICAL_PHOSPHATE;
@@ -90,23 +82,7 @@ class PrimaryStandardsAcrossTemperatureTest {
     @ValueSource(strings = {"tartrate", "citrate", "phthalate", "equimolal phosphate", "physiological phosphate",
         "borax", "carbonate", "tetroxalate", "calcium hydroxide", "Tris", "acetate"})
     void everyStandardTheLibraryFormsIsComputableFrom0To50Celsius(String standard) {
-        ReferenceDocuments solution = switch (standard) {
-            case "tartrate" -> ReferenceDocuments.solution().with("potassium hydrogen tartrate", 0.0341);
-            case "citrate" -> ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05);
-            case "phthalate" -> ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05);
-            case "equimolal phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
-            case "physiological phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.008695)
-                    .with("disodium hydrogen phosphate anhydrous", 0.03043);
-            case "borax" -> ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01);
-            case "carbonate" -> ReferenceDocuments.solution()
-                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
-            case "tetroxalate" -> ReferenceDocuments.solution().with("potassium tetroxalate dihydrate", 0.05);
-            case "calcium hydroxide" -> ReferenceDocuments.solution().with("calcium hydroxide", 0.0203);
-            case "Tris" -> ReferenceDocuments.solution().with("Tris", 0.01667).with("Tris hydrochloride", 0.05);
-            default -> ReferenceDocuments.solution().with("acetic acid", 0.1).with("sodium acetate anhydrous", 0.1);
-        };
+        ReferenceDocuments solution = ReferenceDocuments.standard(standard);
         double[] celsius = IntStream.rangeClosed(0, 10).mapToDouble(i -> 5.0 * i).toArray();
         double[] pH = solution.pH(celsius);   // fails with the reason if any condition is indeterminate
         IntStream.range(0, pH.length).forEach(i -> assertTrue(pH[i] > 1 && pH[i] < 14, standard + " at "

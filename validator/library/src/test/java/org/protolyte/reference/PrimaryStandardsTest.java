@@ -130,20 +130,7 @@ class PrimaryStandardsTest {
         "phthalate, 0.016, 0.08", "equimolal phosphate, 0.029, 0.08", "physiological phosphate, 0.016, 0.08",
         "borax, 0.020, 0.12", "carbonate, 0.029, 0.08", "calcium hydroxide, 0.09, 0.08"})
     void bufferValuesOfTheNbsStandards(String standard, double published, double relativeTolerance) {
-        ReferenceDocuments solution = switch (standard) {
-            case "tartrate" -> ReferenceDocuments.solution().with("potassium hydrogen tartrate", 0.0341);
-            case "citrate" -> ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05);
-            case "phthalate" -> ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05);
-            case "equimolal phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
-            case "physiological phosphate" -> ReferenceDocuments.solution()
-                    .with("potassium dihydrogen phosphate", 0.008695)
-                    .with("disodium hydrogen phosphate anhydrous", 0.03043);
-            case "borax" -> ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01);
-            case "carbonate" -> ReferenceDocuments.solution()
-                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
-            default -> ReferenceDocuments.solution().with("calcium hydroxide", 0.0203);
-        };
+        ReferenceDocuments solution = ReferenceDocuments.standard(standard);
         double beta = solution.condition(25).state().orElseThrow().bufferCapacity();
         assertEquals(published, beta, relativeTolerance * published, standard);
     }

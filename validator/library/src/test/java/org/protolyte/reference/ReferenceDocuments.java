@@ -24,6 +24,30 @@ final class ReferenceDocuments {
         return new ReferenceDocuments();
     }
 
+    /**
+     * A pH standard in the composition of Buck et al., Pure Appl. Chem. 74 (2002) 2169, Tables 2 and 3, by a short
+     * name; saturated potassium hydrogen tartrate at its 25 °C molality, 0.0341 mol/kg (common practice).
+     */
+    static ReferenceDocuments standard(String name) {
+        return switch (name) {
+            case "tartrate" -> solution().with("potassium hydrogen tartrate", 0.0341);
+            case "citrate" -> solution().with("potassium dihydrogen citrate", 0.05);
+            case "phthalate" -> solution().with("potassium hydrogen phthalate", 0.05);
+            case "equimolal phosphate" -> solution()
+                    .with("potassium dihydrogen phosphate", 0.025).with("disodium hydrogen phosphate anhydrous", 0.025);
+            case "physiological phosphate" -> solution()
+                    .with("potassium dihydrogen phosphate", 0.008695).with("disodium hydrogen phosphate anhydrous", 0.03043);
+            case "borax" -> solution().with("disodium tetraborate decahydrate", 0.01);
+            case "carbonate" -> solution()
+                    .with("sodium hydrogen carbonate", 0.025).with("sodium carbonate anhydrous", 0.025);
+            case "tetroxalate" -> solution().with("potassium tetroxalate dihydrate", 0.05);
+            case "calcium hydroxide" -> solution().with("calcium hydroxide", 0.0203);
+            case "Tris" -> solution().with("Tris", 0.01667).with("Tris hydrochloride", 0.05);
+            case "acetate" -> solution().with("acetic acid", 0.1).with("sodium acetate anhydrous", 0.1);
+            default -> throw new IllegalArgumentException("no such standard: " + name);
+        };
+    }
+
     ReferenceDocuments with(String substance, double molKg) {
         molalities.put(substance, molKg);
         return this;
