@@ -57,8 +57,9 @@ public final class SubstancesCommand implements Callable<Integer> {
         }
         List<Substance> hits = library.substances().stream().filter(x -> rank(x, key) < NO_MATCH)
                 .sorted(java.util.Comparator.comparingInt(x -> rank(x, key))).toList();   // stable: library order within a rank
-        if (!hits.isEmpty() && rank(hits.get(0), key) == 0) {
-            hits = formsOf(hits.stream().filter(x -> rank(x, key) == 0).toList(), hits);
+        List<Substance> exact = hits.stream().takeWhile(x -> rank(x, key) == 0).toList();
+        if (!exact.isEmpty()) {
+            hits = formsOf(exact, hits);
         }
         if (hits.isEmpty()) {
             spec.commandLine().getErr().println("protolyte: no substance matches '" + Printable.text(query) + "'");

@@ -58,7 +58,7 @@ class PrimaryStandardsAcrossTemperatureTest {
     void borax(double celsius) {
         double t = celsius + 273.16;
         double published = 2331.7 / t + 0.017433 * t - 3.840;
-        double[] pH = ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01).pH(celsius);
+        double[] pH = ReferenceDocuments.standard("borax").pH(celsius);
         assertEquals(published, pH[0], TOLERANCE);
     }
 
@@ -68,15 +68,14 @@ class PrimaryStandardsAcrossTemperatureTest {
     void potassiumHydrogenPhthalate(double celsius) {
         double t = celsius + 273.15;
         double published = 2073.44 / t - 13.3270 + 0.045199 * t - 3.4846e-5 * t * t;
-        double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(celsius);
+        double[] pH = ReferenceDocuments.standard("phthalate").pH(celsius);
         assertEquals(published, pH[0], TOLERANCE);
     }
 
     /**
      * Every standard of Buck et al. 2002 (Tables 2 and 3) that the library can form gets a pH at every 5 K from 0 to
      * 50 °C (issue 15, item 5), whether or not its published values could be read here. The compositions are those
-     * of the IUPAC recommendation; saturated potassium hydrogen tartrate is taken at its 25 °C molality, 0.0341
-     * mol/kg (common practice), at every temperature.
+     * of the IUPAC recommendation (ReferenceDocuments.standard), saturated tartrate at its 25 °C molality throughout.
      */
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"tartrate", "citrate", "phthalate", "equimolal phosphate", "physiological phosphate",

@@ -23,7 +23,7 @@ class PrimaryStandardsTest {
     /** 0.05 mol/kg potassium hydrogen phthalate: 4.005 at 25 °C (Hamer, Pinching and Acree, J. Res. NBS 36 (1946) 47). */
     @Test
     void potassiumHydrogenPhthalate() {
-        double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(25);
+        double[] pH = ReferenceDocuments.standard("phthalate").pH(25);
         assertEquals(4.005, pH[0], TOLERANCE);
     }
 
@@ -37,7 +37,7 @@ class PrimaryStandardsTest {
     void potassiumHydrogenPhthalateAcrossTemperature(double celsius) {
         double t = celsius + 273.16;   // the paper's T = t + 273.16
         double published = 1336.08 / t - 5.2678 + 0.016069 * t;
-        double[] pH = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).pH(celsius);
+        double[] pH = ReferenceDocuments.standard("phthalate").pH(celsius);
         assertEquals(published, pH[0], TOLERANCE);
     }
 
@@ -47,7 +47,7 @@ class PrimaryStandardsTest {
      */
     @Test
     void potassiumHydrogenPhthalateOutsideItsPublishedRangeIsIndeterminate() {
-        ConditionResult hot = ReferenceDocuments.solution().with("potassium hydrogen phthalate", 0.05).condition(65);
+        ConditionResult hot = ReferenceDocuments.standard("phthalate").condition(65);
         assertFalse(hot.determinate());
         assertTrue(hot.caveats().stream().anyMatch(c -> c.code().equals("temperature-out-of-range")), hot.caveats()
                 .toString());
@@ -56,8 +56,7 @@ class PrimaryStandardsTest {
     /** KH2PO4 0.025 + Na2HPO4 0.025 mol/kg: 6.865 at 25 °C (IUPAC value, as cited by Partanen et al.). */
     @Test
     void equimolalPhosphate() {
-        double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen phosphate", 0.025)
-                .with("disodium hydrogen phosphate anhydrous", 0.025).pH(25);
+        double[] pH = ReferenceDocuments.standard("equimolal phosphate").pH(25);
         assertEquals(6.865, pH[0], TOLERANCE);
     }
 
@@ -67,8 +66,7 @@ class PrimaryStandardsTest {
      */
     @Test
     void physiologicalPhosphateAt25And38Celsius() {
-        double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen phosphate", 0.008695)
-                .with("disodium hydrogen phosphate anhydrous", 0.03043).pH(25, 38);
+        double[] pH = ReferenceDocuments.standard("physiological phosphate").pH(25, 38);
         assertEquals(7.413, pH[0], TOLERANCE);
         assertEquals(7.382, pH[1], TOLERANCE);
     }
@@ -76,24 +74,24 @@ class PrimaryStandardsTest {
     /** 0.01 mol/kg disodium tetraborate: 9.180 at 25 °C (Bates, Vega and White, J. Res. NBS 73A (1969) 37). */
     @Test
     void borax() {
-        double[] pH = ReferenceDocuments.solution().with("disodium tetraborate decahydrate", 0.01).pH(25);
+        double[] pH = ReferenceDocuments.standard("borax").pH(25);
         assertEquals(9.180, pH[0], TOLERANCE);
     }
 
     /** NaHCO3 0.025 + Na2CO3 0.025 mol/kg: 10.012 at 25 °C (Bates, Vega and White 1969). */
     @Test
     void carbonate() {
-        double[] pH = ReferenceDocuments.solution().with("sodium hydrogen carbonate", 0.025)
-                .with("sodium carbonate anhydrous", 0.025).pH(25);
+        double[] pH = ReferenceDocuments.standard("carbonate").pH(25);
         assertEquals(10.012, pH[0], TOLERANCE);
     }
 
     /** 0.05 mol/kg potassium dihydrogen citrate: 3.776 at 25 °C (Bates, Vega and White 1969). */
     @Test
     void potassiumDihydrogenCitrate() {
-        double[] pH = ReferenceDocuments.solution().with("potassium dihydrogen citrate", 0.05).pH(25);
+        double[] pH = ReferenceDocuments.standard("citrate").pH(25);
         assertEquals(3.776, pH[0], TOLERANCE);
     }
+
     /**
      * Saturated calcium hydroxide, about 0.0203 mol/kg: pH 12.45 at 25 °C, temperature coefficient −0.033 per K
      * (Bates, "Calcium hydroxide as a highly alkaline pH standard", J. Res. NBS 56 (1956) 305, abstract; read). The
@@ -101,7 +99,7 @@ class PrimaryStandardsTest {
      */
     @Test
     void saturatedCalciumHydroxide() {
-        double[] pH = ReferenceDocuments.solution().with("calcium hydroxide", 0.0203).pH(20, 25, 30);
+        double[] pH = ReferenceDocuments.standard("calcium hydroxide").pH(20, 25, 30);
         assertEquals(12.45, pH[1], TOLERANCE);
         assertEquals(-0.033, (pH[2] - pH[0]) / 10, 0.0033);
     }
@@ -113,7 +111,7 @@ class PrimaryStandardsTest {
      */
     @Test
     void potassiumTetroxalate() {
-        double[] pH = ReferenceDocuments.solution().with("potassium tetroxalate dihydrate", 0.05).pH(25);
+        double[] pH = ReferenceDocuments.standard("tetroxalate").pH(25);
         assertEquals(1.68, pH[0], TOLERANCE);
     }
 
