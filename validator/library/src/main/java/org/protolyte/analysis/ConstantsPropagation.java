@@ -145,7 +145,7 @@ final class ConstantsPropagation {
         if (activity instanceof IonInteraction) {
             java.util.Set<Pitzer.Ion> ions = new java.util.LinkedHashSet<>();
             for (Species s : solution.species()) {
-                if (s.charge() != 0) {
+                if (s.charge() != 0 && s.components().keySet().stream().noneMatch(Component::bound)) {
                     ions.add(new Pitzer.Ion(s.name(), s.charge()));
                 }
             }

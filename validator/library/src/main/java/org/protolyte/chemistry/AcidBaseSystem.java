@@ -8,7 +8,8 @@ import java.util.Map;
  * A weak acid and its conjugate bases, e.g. phosphate: H3PO4, H2PO4-, HPO4-2, PO4-3 with three
  * dissociation steps. The least protonated form is the mass-balance component; each other form is a
  * species with p protons whose cumulative formation constant is the sum of the last p steps:
- * log β_p = Σ pKa (the p most basic steps).
+ * log β_p = Σ pKa (the p most basic steps). A {@code bound} system is one kind of ionizable group of a macroion (the
+ * histidines of a protein), its total the count of groups times the macroion's molality (see {@link Component}).
  */
 public final class AcidBaseSystem {
 
@@ -20,9 +21,15 @@ public final class AcidBaseSystem {
     private final List<Form> forms;
     private final List<DissociationStep> steps;
     private final List<Species> species;      // built once: a recipe asks for them per batch
+    private final boolean bound;
 
     public AcidBaseSystem(String name, List<Form> forms, List<DissociationStep> steps) {
+        this(name, forms, steps, false);
+    }
+
+    public AcidBaseSystem(String name, List<Form> forms, List<DissociationStep> steps, boolean bound) {
         this.name = name;
+        this.bound = bound;
         this.forms = List.copyOf(forms);
         this.steps = List.copyOf(steps);
         if (forms.size() != steps.size() + 1) {
@@ -53,7 +60,8 @@ public final class AcidBaseSystem {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof AcidBaseSystem a && a.name.equals(name) && a.forms.equals(forms) && a.steps.equals(steps);
+        return o instanceof AcidBaseSystem a && a.name.equals(name) && a.forms.equals(forms) && a.steps.equals(steps)
+                && a.bound == bound;
     }
 
     @Override
@@ -69,7 +77,12 @@ public final class AcidBaseSystem {
     /** The mass-balance component: the least protonated form. */
     public Component basis() {
         Form last = forms.get(forms.size() - 1);
-        return new Component(last.name(), last.charge());
+        return new Component(last.name(), last.charge(), bound);
+    }
+
+    /** A kind of ionizable group of a macroion. */
+    public boolean bound() {
+        return bound;
     }
 
     /** Every form as a species, most protonated first. */

@@ -73,7 +73,7 @@ final class BufferCapacity {
                 int j = p.comp[i];
                 d = p.open(j) ? p.protons[p.fixedIndex[j]] : ws.perComponent[j];    // componentTerms leaves p̄ there
             }
-            sum += (double) p.charge[i] * p.charge[i] * m[i] * (d - p.protons[i]);
+            sum += (double) p.ionCharge[i] * p.ionCharge[i] * m[i] * (d - p.protons[i]);
         }
         return 0.5 * Thermo.LN10 * sum;
     }

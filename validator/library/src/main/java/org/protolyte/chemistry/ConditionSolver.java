@@ -92,7 +92,7 @@ final class ConditionSolver {
 
     /** What no number can be given for, known before solving. */
     private void admissible() {
-        ValidityJudge.checkNotFrozen(ws.total, p.kelvin);
+        ValidityJudge.checkNotFrozen(p, ws.total);
         ValidityJudge.checkWaterRange(p.kelvin);
     }
 
@@ -162,7 +162,7 @@ final class ConditionSolver {
     private double strongIonicStrength() {
         double s = 0;
         for (int j = 0; j < p.components.length; j++) {
-            s += ws.total[j] * p.components[j].charge() * p.components[j].charge();
+            s += ws.total[j] * p.componentIonCharge[j] * p.componentIonCharge[j];
         }
         return 0.5 * s;
     }
@@ -172,7 +172,7 @@ final class ConditionSolver {
         double[] m = p.speciation.molalities(ws, pH);
         double s = Math.pow(10, -pH - ws.log10GammaH) + p.kw * Math.pow(10, pH - ws.log10GammaOH);
         for (int i = 0; i < p.n; i++) {
-            s += (double) p.charge[i] * p.charge[i] * m[i];
+            s += (double) p.ionCharge[i] * p.ionCharge[i] * m[i];
         }
         return 0.5 * s;
     }
@@ -182,7 +182,7 @@ final class ConditionSolver {
         double[] m = ws.m;
         double s = ws.hydrogen(pH) + ws.hydroxide(pH);
         for (int i = 0; i < p.n; i++) {
-            s += (double) p.charge[i] * p.charge[i] * m[i];
+            s += (double) p.ionCharge[i] * p.ionCharge[i] * m[i];
         }
         return 0.5 * s;
     }
@@ -192,7 +192,7 @@ final class ConditionSolver {
         double[] m = p.speciation.molalities(ws, pH);
         double particles = ws.hydrogen(pH) + ws.hydroxide(pH);
         for (int i = 0; i < p.n; i++) {
-            particles += m[i];
+            particles += p.particle[i] * m[i];
         }
         return new Equilibrium.Point(pH, ionicStrength, Thermo.LN10 * p.speciation.bufferSum(ws, pH),
                 particles + osmoticExcess(m, ws.hydrogen(pH), ws.hydroxide(pH), ionicStrength));
@@ -223,7 +223,7 @@ final class ConditionSolver {
         for (int i = 0; i < p.n; i++) {
             Component home = p.components[p.comp[i]];
             double t = sum.getOrDefault(home, 0.0);
-            particles += m[i];
+            particles += p.particle[i] * m[i];
             out.add(new SpeciesAmount(p.sp[i], home, m[i], Math.pow(10, ws.log10Gamma[i]),
                     t > 0 ? p.sp[i].components().get(home) * m[i] / t : 0));
         }

@@ -72,11 +72,11 @@ public final class Derivatives {
         ionLn = new double[ionM.length];
         speciesSlope = new double[p.n];
         for (int i = 0; i < p.n; i++) {
-            speciesSlope[i] = Thermo.LN10 * p.activity.log10GammaSlope(p.charge[i], ionicStrength, p.debyeHuckelA);
+            speciesSlope[i] = Thermo.LN10 * p.activity.log10GammaSlope(p.ionCharge[i], ionicStrength, p.debyeHuckelA);
         }
         componentSlope = new double[p.components.length];
         for (int j = 0; j < componentSlope.length; j++) {
-            componentSlope[j] = Thermo.LN10 * p.activity.log10GammaSlope(p.components[j].charge(), ionicStrength,
+            componentSlope[j] = Thermo.LN10 * p.activity.log10GammaSlope(p.componentIonCharge[j], ionicStrength,
                     p.debyeHuckelA);
         }
         int nc = total.length;
@@ -176,10 +176,10 @@ public final class Derivatives {
         }
         double d = IonInteraction.daviesDisagreement(ionicStrength);
         for (int i = 0; i < p.n; i++) {
-            us[i] = p.charge[i] * p.charge[i] * d;
+            us[i] = p.ionCharge[i] * p.ionCharge[i] * d;
         }
         for (int j = 0; j < uc.length; j++) {
-            uc[j] = p.components[j].charge() * p.components[j].charge() * d;
+            uc[j] = p.componentIonCharge[j] * p.componentIonCharge[j] * d;
         }
         uw[0] = d;
         uw[1] = d;
@@ -399,7 +399,7 @@ public final class Derivatives {
             }
             dm[i] = m[i] * d;
             f += p.charge[i] * dm[i];
-            q += 0.5 * p.charge[i] * p.charge[i] * dm[i];
+            q += 0.5 * p.ionCharge[i] * p.ionCharge[i] * dm[i];
         }
         return new Tangent(dm, mH * dLnH, mOH * dLnOH, f, q);
     }

@@ -41,12 +41,12 @@ final class Interactions {
         List<Pitzer.Ion> list = new ArrayList<>();
         speciesIon = new int[p.n];
         for (int i = 0; i < p.n; i++) {
-            speciesIon[i] = p.charge[i] == 0 ? -1 : index(p.sp[i].name(), p.charge[i], at, list);
+            speciesIon[i] = p.ionCharge[i] == 0 ? -1 : index(p.sp[i].name(), p.charge[i], at, list);
         }
         componentIon = new int[p.components.length];
         for (int j = 0; j < componentIon.length; j++) {
             Component c = p.components[j];
-            componentIon[j] = c.charge() == 0 ? -1 : index(c.name(), c.charge(), at, list);
+            componentIon[j] = c.ionicCharge() == 0 ? -1 : index(c.name(), c.charge(), at, list);
         }
         hydrogenIon = index("H+", 1, at, list);
         hydroxideIon = index("OH-", -1, at, list);

@@ -31,6 +31,12 @@ final class PreparedProblem {
     final int[] comp;               // index of the species' component (a complex: the component it is shown under)
     final int[] protons;
     final int[] charge;
+    /** The charge in the ionic strength and the activity coefficients: 0 for a group bound to a macroion. */
+    final int[] ionCharge;
+    /** Per component, the same. */
+    final int[] componentIonCharge;
+    /** 1 for a species that counts as a particle in the osmolality, 0 for a bound group (its macroion counts). */
+    final double[] particle;
     final double[] log10Beta;
     final double[] beta;            // 10^log β (the linear and powered paths)
     final Map<Component, Integer> index;
@@ -82,6 +88,8 @@ final class PreparedProblem {
         comp = new int[n];
         protons = new int[n];
         charge = new int[n];
+        ionCharge = new int[n];
+        particle = new double[n];
         log10Beta = new double[n];
         complexParts = new int[n][];
         complexCounts = new int[n][];
@@ -103,10 +111,14 @@ final class PreparedProblem {
             }
             protons[i] = sp[i].protons();
             charge[i] = sp[i].charge();
+            boolean bound = parts.keySet().stream().anyMatch(Component::bound);
+            ionCharge[i] = bound ? 0 : charge[i];
+            particle[i] = bound ? 0 : 1;
             log10Beta[i] = logBeta.applyAsDouble(sp[i]);
         }
         index = idx;
         components = idx.keySet().toArray(new Component[0]);
+        componentIonCharge = java.util.Arrays.stream(components).mapToInt(Component::ionicCharge).toArray();
         for (int j = 0; j < components.length; j++) {
             boolean hasSpecies = false;
             for (int i = 0; i < n; i++) {
@@ -173,6 +185,9 @@ final class PreparedProblem {
         comp = p.comp;
         protons = p.protons;
         charge = p.charge;
+        ionCharge = p.ionCharge;
+        componentIonCharge = p.componentIonCharge;
+        particle = p.particle;
         log10Beta = p.log10Beta.clone();
         beta = p.beta.clone();
         if (species >= 0) {

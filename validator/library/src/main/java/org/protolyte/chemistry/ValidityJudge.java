@@ -43,12 +43,14 @@ final class ValidityJudge {
 
     /**
      * Below the freezing point ice forms and a liquid-state pH means nothing. With one component per species the
-     * particle molality is Σ T_C whatever the pH, so this is known before solving.
+     * particle molality is Σ T_C whatever the pH (the groups of a macroion not counted: it is its own solute), so this
+     * is known before solving.
      */
-    static void checkNotFrozen(double[] totals, double kelvin) {
+    static void checkNotFrozen(PreparedProblem p, double[] totals) {
+        double kelvin = p.kelvin;
         double particles = 0;
-        for (double t : totals) {
-            particles += t;
+        for (int j = 0; j < totals.length; j++) {
+            particles += p.components[j].bound() ? 0 : totals[j];
         }
         double tf = Cryoscopy.freezingPointKelvin(particles);
         if (kelvin < tf) {

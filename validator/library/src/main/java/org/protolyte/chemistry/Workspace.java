@@ -131,9 +131,9 @@ final class Workspace {
         Arrays.fill(byCharge, Double.NaN);
         Arrays.fill(inverseGammaByCharge, Double.NaN);
         for (int i = 0; i < p.n; i++) {
-            log10Gamma[i] = log10Gamma(p.charge[i], ionicStrength);
+            log10Gamma[i] = log10Gamma(p.ionCharge[i], ionicStrength);
             if (p.linear) {
-                int k = p.charge[i] + CHARGES / 2;
+                int k = p.ionCharge[i] + CHARGES / 2;
                 if (Double.isNaN(inverseGammaByCharge[k])) {
                     inverseGammaByCharge[k] = Math.pow(10, -log10Gamma[i]);
                 }
@@ -143,7 +143,7 @@ final class Workspace {
         log10GammaH = log10Gamma(1, ionicStrength);
         log10GammaOH = log10Gamma(-1, ionicStrength);
         for (int j = 0; j < p.components.length; j++) {
-            log10GammaComponent[j] = log10Gamma(p.components[j].charge(), ionicStrength);
+            log10GammaComponent[j] = log10Gamma(p.componentIonCharge[j], ionicStrength);
         }
         if (specificOn) {
             addSpecific();
@@ -151,10 +151,10 @@ final class Workspace {
         }
         if (p.powered) {              // γ by charge: a handful of powers of ten, then products
             for (int j = 0; j < p.components.length; j++) {
-                gammaComponent[j] = gammaOfCharge(p.components[j].charge(), ionicStrength);
+                gammaComponent[j] = gammaOfCharge(p.componentIonCharge[j], ionicStrength);
             }
             for (int i = 0; i < p.n; i++) {
-                double x = p.beta[i] / gammaOfCharge(p.charge[i], ionicStrength);
+                double x = p.beta[i] / gammaOfCharge(p.ionCharge[i], ionicStrength);
                 if (p.complexParts[i] == null) {
                     x *= gammaComponent[p.comp[i]];
                 } else {
