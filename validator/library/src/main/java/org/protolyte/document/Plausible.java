@@ -67,6 +67,8 @@ public record Plausible(double min, boolean minIncluded, double max, boolean max
                     "up to 1 MPa (10 bar), beyond any vessel a medium is held in (common practice)");
             case DENSITY -> new Plausible(0.1, true, 25, true, "g/mL", 1,
                     "between the lightest liquids and the densest element, osmium at 22.6 g/mL (CRC Handbook, from memory)");
+            case MOLAR_MASS -> new Plausible(1, true, 1e8, true, "g/mol", 1,
+                    "from hydrogen's 1 g/mol to 100 000 kDa, beyond the largest protein assemblies (common practice)");
         };
     }
 }

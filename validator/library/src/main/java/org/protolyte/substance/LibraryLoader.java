@@ -57,6 +57,7 @@ public final class LibraryLoader {
     private final Map<String, String> phaseSources = new LinkedHashMap<>();
     private final Map<String, SaltSolubility> solubilities = new LinkedHashMap<>();
     private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
+    private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
     private final Map<String, Component> solutes = new LinkedHashMap<>();
     private final Map<String, Substance> substances = new LinkedHashMap<>();
@@ -100,7 +101,7 @@ public final class LibraryLoader {
 
     public SubstanceLibrary build() {
         return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files,
-                complexes, complexSources, phases, phaseSources, solubilities);
+                complexes, complexSources, phases, phaseSources, solubilities, proteinGroups, List.of());
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -327,6 +328,25 @@ public final class LibraryLoader {
                     assumed);
         }
 
+        /**
+         * A step whose temperature terms are a model compound's ({@code temperatureAs}): its own pKa and uncertainty,
+         * the named step's ΔH°, ΔCp°, their uncertainties and range. Empty, with a problem, where that step is not above.
+         */
+        private Optional<DissociationStep> borrowed(JsonNode s, String pointer) {
+            JsonNode ref = s.get("temperatureAs");
+            AcidBaseSystem model = systems.get(ref.get("system").asString());
+            int k = ref.get("step").asInt();
+            if (model == null || k > model.steps().size()) {
+                problems.add(doc.problem(pointer + "/temperatureAs", "temperatureAs names step " + k + " of '"
+                        + ref.get("system").asString() + "', which is not a system with that step listed before this one"));
+                return Optional.empty();
+            }
+            DissociationStep m = model.steps().get(k - 1);
+            return Optional.of(new DissociationStep(s.get("pKa").asDouble(), m.deltaH(), m.deltaCp(),
+                    s.get("uncertainty").asDouble(), m.validity(), m.deltaHUncertainty(), 0, m.deltaCpUncertainty(),
+                    m.assumed()));
+        }
+
         private void system(JsonNode n, String pointer) {
             String name = n.get("name").asString();
             List<AcidBaseSystem.Form> forms = new ArrayList<>();
@@ -337,6 +357,15 @@ public final class LibraryLoader {
             List<String> sources = new ArrayList<>();
             for (int i = 0; i < n.get("steps").size(); i++) {
                 JsonNode s = n.get("steps").get(i);
+                if (s.has("temperatureAs")) {
+                    Optional<DissociationStep> b = borrowed(s, pointer + "/steps/" + i);
+                    if (b.isEmpty()) {
+                        return;
+                    }
+                    steps.add(b.get());
+                    sources.add(s.get("source").asString());
+                    continue;
+                }
                 double from = s.get("validFrom").asDouble();
                 double to = s.get("validTo").asDouble();
                 if (from > to) {
@@ -347,10 +376,31 @@ public final class LibraryLoader {
                 sources.add(s.get("source").asString());
             }
             try {
-                named(systems, n, pointer, new AcidBaseSystem(name, forms, steps), "acid–base system");
+                AcidBaseSystem system = new AcidBaseSystem(name, forms, steps);
+                named(systems, n, pointer, system, "acid–base system");
                 stepSources.put(name, List.copyOf(sources));
+                if (n.has("proteinGroup")) {
+                    proteinGroup(n.get("proteinGroup"), pointer + "/proteinGroup", system);
+                }
             } catch (IllegalArgumentException e) {
                 problems.add(doc.problem(pointer, e.getMessage()));
+            }
+        }
+
+        /** A protein group must be one step from a form of charge +1 or 0 to one charge less (schema: its name). */
+        private void proteinGroup(JsonNode g, String pointer, AcidBaseSystem system) {
+            ProteinGroup group = ProteinGroup.named(g.get("group").asString());
+            if (system.steps().size() != 1 || system.forms().get(0).charge() != group.protonatedCharge()) {
+                problems.add(doc.problem(pointer, "a protein group " + group.label() + " is one dissociation step from "
+                        + "a form of charge " + group.protonatedCharge() + " to one of charge "
+                        + (group.protonatedCharge() - 1)));
+                return;
+            }
+            Map<ProteinGroup, AcidBaseSystem> set = proteinGroups.computeIfAbsent(g.get("set").asString(),
+                    k -> new java.util.EnumMap<>(ProteinGroup.class));
+            if (set.put(group, system) != null && !user) {
+                problems.add(doc.problem(pointer, "the set '" + g.get("set").asString() + "' has group "
+                        + group.label() + " twice"));
             }
         }
 

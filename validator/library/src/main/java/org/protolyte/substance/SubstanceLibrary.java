@@ -40,6 +40,8 @@ public final class SubstanceLibrary {
     private final List<SolidPhase> phases;                // solids that can form, in library order
     private final Map<String, String> phaseSources;
     private final List<SaltSolubility> solubilities;
+    private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups;   // pKa set -> its groups
+    private final List<Protein> proteins;                                         // a formulation's, once added
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
@@ -47,7 +49,12 @@ public final class SubstanceLibrary {
                      Map<String, List<String>> ambiguous, Map<String, String> files,
                      Map<String, Species> complexes, Map<String, String> complexSources,
                      Map<String, SolidPhase> phases, Map<String, String> phaseSources,
-                     Map<String, SaltSolubility> solubilities) {
+                     Map<String, SaltSolubility> solubilities,
+                     Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups, List<Protein> proteins) {
+        this.proteins = List.copyOf(proteins);
+        Map<String, Map<ProteinGroup, AcidBaseSystem>> sets = new LinkedHashMap<>();
+        proteinGroups.forEach((k, v) -> sets.put(k, java.util.Collections.unmodifiableMap(new java.util.EnumMap<>(v))));
+        this.proteinGroups = java.util.Collections.unmodifiableMap(sets);
         this.solubilities = List.copyOf(solubilities.values());
         this.phases = List.copyOf(phases.values());
         this.phaseSources = inOrder(phaseSources);
@@ -209,6 +216,46 @@ public final class SubstanceLibrary {
     /** The source of each dissociation step of a system, in step order. */
     public List<String> stepSources(String system) {
         return stepSources.getOrDefault(system, List.of());
+    }
+
+    /**
+     * This library and the proteins a formulation defines: their bound group systems, each one as a solute (the
+     * macroion, one particle) and as a substance its lines resolve to.
+     */
+    public SubstanceLibrary withProteins(List<Protein> proteins) {
+        if (proteins.isEmpty()) {
+            return this;
+        }
+        Map<String, AcidBaseSystem> sys = new LinkedHashMap<>(systems);
+        Map<String, Component> sol = new LinkedHashMap<>(solutes);
+        Map<String, Substance> subs = new LinkedHashMap<>(substances);
+        Map<String, Substance> idx = new LinkedHashMap<>(index);
+        for (Protein p : proteins) {
+            p.systems().values().forEach(s -> sys.put(s.name(), s));
+            sol.put(p.solute().name(), p.solute());
+            subs.put(p.name(), p.substance());
+            idx.put(normalise(p.name()), p.substance());
+        }
+        Map<String, Species> cx = new LinkedHashMap<>();
+        complexes.forEach(c -> cx.put(c.name(), c));
+        Map<String, SolidPhase> ph = new LinkedHashMap<>();
+        phases.forEach(x -> ph.put(x.name(), x));
+        Map<String, SaltSolubility> so = new LinkedHashMap<>();
+        solubilities.forEach(x -> so.put(x.name(), x));
+        List<Protein> all = new ArrayList<>(this.proteins);
+        all.addAll(proteins);
+        return new SubstanceLibrary(sys, stepSources, ions, sol, subs, idx, ambiguous, files, cx, complexSources, ph,
+                phaseSources, so, proteinGroups, all);
+    }
+
+    /** The proteins a formulation defined (see {@link #withProteins}), in its order. */
+    public List<Protein> proteins() {
+        return proteins;
+    }
+
+    /** The pKa sets of protein groups, each with the step of every group it holds, in library order. */
+    public Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups() {
+        return proteinGroups;
     }
 
     public Optional<Component> ion(String name) {

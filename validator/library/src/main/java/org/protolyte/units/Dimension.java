@@ -13,7 +13,8 @@ public enum Dimension {
     FRACTION("a fraction (%)"),
     TEMPERATURE("a temperature"),
     PRESSURE("a pressure"),
-    DENSITY("a density");
+    DENSITY("a density"),
+    MOLAR_MASS("a molar mass");
 
     private final String description;
 

@@ -8,7 +8,7 @@ import java.util.stream.Collectors;
 /**
  * The closed list of units a document may use: UCUM case-sensitive codes plus a short list of lab
  * spellings. Each unit converts to the dimension's base: g, L, mol, mol/L, g/L, mol/kg, a fraction
- * (0..1), K, Pa and g/mL.
+ * (0..1), K, Pa, g/mL and g/mol.
  */
 public enum Unit {
     G("g", Dimension.MASS, 1, false),
@@ -34,11 +34,14 @@ public enum Unit {
     KPA("kPa", Dimension.PRESSURE, 1e3, false),
     G_PER_ML("g/mL", Dimension.DENSITY, 1, false),
     KG_PER_L("kg/L", Dimension.DENSITY, 1, false),
+    G_PER_MOL("g/mol", Dimension.MOLAR_MASS, 1, false),
+    KG_PER_MOL("kg/mol", Dimension.MOLAR_MASS, 1e3, false),
     // Lab spellings: not UCUM, accepted because recipes are written this way.
     LAB_M("M", Dimension.AMOUNT_CONCENTRATION, 1, true),
     LAB_MM("mM", Dimension.AMOUNT_CONCENTRATION, 1e-3, true),
     LAB_UM("µM", Dimension.AMOUNT_CONCENTRATION, 1e-6, true),
     LAB_DEG_C("°C", Dimension.TEMPERATURE, 1, true),
+    LAB_KDA("kDa", Dimension.MOLAR_MASS, 1e3, true),     // a protein's mass as labs write it: 1 kDa ≙ 1 kg/mol
     PERCENT_W_V("% w/v", Dimension.MASS_CONCENTRATION, 10, true),   // g per 100 mL = 10 g/L
     PERCENT_V_V("% v/v", Dimension.VOLUME_FRACTION, 0.01, true),
     PERCENT_W_W("% w/w", Dimension.MASS_FRACTION, 0.01, true),
