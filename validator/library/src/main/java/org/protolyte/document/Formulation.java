@@ -40,10 +40,40 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
     /** One component line of the recipe; {@code tolerance}: the weighing tolerance, a fraction (0.02 = ±2 %). */
     public record Line(int index, String substance, Optional<Quantity> amount, Optional<Stock> stock,
                        Optional<Adjustment> adjustTo, Optional<Double> density, String pointer,
-                       Optional<Double> tolerance) {
+                       Optional<Double> tolerance, Optional<Protein> protein) {
+        public Line(int index, String substance, Optional<Quantity> amount, Optional<Stock> stock,
+                    Optional<Adjustment> adjustTo, Optional<Double> density, String pointer,
+                    Optional<Double> tolerance) {
+            this(index, substance, amount, stock, adjustTo, density, pointer, tolerance, Optional.empty());
+        }
+
         public boolean isTitrant() {
             return adjustTo.isPresent();
         }
+    }
+
+    /**
+     * A protein or peptide the line defines instead of naming a library substance: its chains (one-letter sequences)
+     * or its counts of ionizable groups by label (N-terminus, C-terminus, Asp, Glu, His, Cys, Tyr, Lys, Arg), the
+     * disulfide bonds (their cysteines do not titrate), a stated molar mass (g/mol; required with counts), the pKa set
+     * by name (empty: the library's default) and the acids that come with it per mole (peptide·2 HCl, acetate salts).
+     */
+    public record Protein(List<Chain> chains, java.util.Map<String, Integer> groups, int disulfides,
+                          OptionalDouble molarMass, Optional<String> pKaSet, List<Counterion> counterions,
+                          String pointer) {
+        public Protein {
+            chains = List.copyOf(chains);
+            groups = java.util.Map.copyOf(groups);
+            counterions = List.copyOf(counterions);
+        }
+    }
+
+    /** One chain: its sequence, how many copies the molecule holds, and whether its termini are blocked. */
+    public record Chain(String sequence, int copies, boolean acetylated, boolean amidated, String pointer) {
+    }
+
+    /** An acid (a library substance) that comes with each mole of the protein: its counterion and protons. */
+    public record Counterion(String substance, double perMole, String pointer) {
     }
 
     /** A liquid stock: concentration (amount, mass or mass-fraction) and density in g/mL where given. */

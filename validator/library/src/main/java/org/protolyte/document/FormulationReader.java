@@ -228,7 +228,49 @@ public final class FormulationReader {
             Optional<Double> tolerance = n.has("tolerance")
                     ? within(quantity(n.get("tolerance"), p + "/tolerance", "a weighing tolerance", Dimension.FRACTION),
                     p + "/tolerance", "a weighing tolerance", Plausible.TOLERANCE).map(Quantity::base) : Optional.empty();
-            return new Formulation.Line(i, substance, amount, stock, adjust, density, p, tolerance);
+            Optional<Formulation.Protein> protein = n.has("protein") ? protein(n.get("protein"), p + "/protein")
+                    : Optional.empty();
+            return new Formulation.Line(i, substance, amount, stock, adjust, density, p, tolerance, protein);
+        }
+
+        /** A protein line's definition (the schema has checked its shape: chains or groups, counts ≥ 0). */
+        private Optional<Formulation.Protein> protein(JsonNode n, String p) {
+            List<Formulation.Chain> chains = new ArrayList<>();
+            JsonNode cs = n.path("chains");
+            for (int k = 0; k < cs.size(); k++) {
+                JsonNode c = cs.get(k);
+                String at = p + "/chains/" + k;
+                String seq = c.get("sequence").asString().replaceAll("\\s", "");
+                chains.add(new Formulation.Chain(seq, c.path("copies").asInt(1),
+                        c.path("nTerminus").asString("free").equals("acetylated"),
+                        c.path("cTerminus").asString("free").equals("amidated"), at));
+            }
+            java.util.Map<String, Integer> groups = new java.util.LinkedHashMap<>();
+            if (n.has("groups")) {
+                for (var e : n.get("groups").properties()) {
+                    groups.put(e.getKey(), e.getValue().asInt());
+                }
+            }
+            OptionalDouble mass = OptionalDouble.empty();
+            if (n.has("molarMass")) {
+                Optional<Quantity> q = positive(n.get("molarMass"), p + "/molarMass", "a molar mass", Dimension.MOLAR_MASS);
+                if (q.isEmpty()) {
+                    return Optional.empty();
+                }
+                mass = OptionalDouble.of(q.get().base());
+            } else if (chains.isEmpty()) {
+                problems.add(doc.problem(p, "a protein given by its group counts needs its molarMass (\"148 kDa\")"));
+                return Optional.empty();
+            }
+            List<Formulation.Counterion> counterions = new ArrayList<>();
+            JsonNode ci = n.path("counterions");
+            for (int k = 0; k < ci.size(); k++) {
+                counterions.add(new Formulation.Counterion(ci.get(k).get("substance").asString(),
+                        ci.get(k).get("perMole").asDouble(), p + "/counterions/" + k));
+            }
+            Optional<String> set = n.has("pKaSet") ? Optional.of(n.get("pKaSet").asString()) : Optional.empty();
+            return Optional.of(new Formulation.Protein(chains, groups, n.path("disulfides").asInt(0), mass, set,
+                    counterions, p));
         }
 
         /** CO2 partial pressure in Pa: "air", a fraction of the (stated or standard) pressure, or a pressure. */

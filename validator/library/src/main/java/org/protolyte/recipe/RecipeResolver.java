@@ -9,6 +9,7 @@ import org.protolyte.document.Formulation;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SourceDocument;
 import org.protolyte.substance.LookupException;
+import org.protolyte.substance.Protein;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
 import org.protolyte.units.Quantity;
@@ -33,8 +34,20 @@ public final class RecipeResolver {
     public Recipe resolve(Formulation f) {
         List<Problem> problems = new ArrayList<>();
         List<Ingredient> ingredients = new ArrayList<>();
+        List<Protein> proteins = new ArrayList<>();
         for (Formulation.Line line : f.components()) {
             Substance s;
+            if (line.protein().isPresent()) {
+                try {
+                    s = protein(line, proteins);
+                    ingredients.add(ingredient(f, line, s));
+                } catch (Protein.DefinitionException e) {
+                    problems.add(f.document().problem(e.pointer(), e.getMessage()));
+                } catch (AmountException e) {
+                    problems.add(f.document().problem(e.pointer, e.getMessage()));
+                }
+                continue;
+            }
             try {
                 s = library.lookup(line.substance());
             } catch (LookupException e) {
@@ -66,9 +79,29 @@ public final class RecipeResolver {
         }
         double makeUp = f.conditions().stream().filter(c -> c.name().equals("preparation")).findFirst()
                 .map(Formulation.Condition::kelvin).orElse(DEFAULT_MAKE_UP_KELVIN);
-        Recipe recipe = new Recipe(f, library, ingredients, makeUp);
+        Recipe recipe = new Recipe(f, library.withProteins(proteins), ingredients, makeUp);
         recipe.solution(java.util.Map.of());   // fails here, with its place, if the amounts cannot be made up
         return recipe;
+    }
+
+    /** A line that defines a protein: its name must be new, as a library name and among the document's proteins. */
+    private Substance protein(Formulation.Line line, List<Protein> proteins) {
+        String name = line.substance();
+        boolean taken = proteins.stream().anyMatch(p -> SubstanceLibrary.normalise(p.name())
+                .equals(SubstanceLibrary.normalise(name)));
+        try {
+            library.lookup(name);
+            taken = true;
+        } catch (LookupException e) {
+            // caught: a new name is what a protein line needs
+        }
+        if (taken) {
+            throw new Protein.DefinitionException(line.pointer() + "/substance", "'" + name + "' already names a "
+                    + "substance; a line that defines a protein gives it a name of its own");
+        }
+        Protein p = Protein.define(name, line.protein().orElseThrow(), library);
+        proteins.add(p);
+        return p.substance();
     }
 
     /** The line gives its amount in moles, per litre or per kilogram of water: no hydrate changes the moles. */
@@ -98,7 +131,7 @@ public final class RecipeResolver {
         JsonNode comps = doc.root().path("components");
         for (int i = 0; i < comps.size(); i++) {
             JsonNode name = comps.get(i).path("substance");
-            if (name.isString()) {
+            if (name.isString() && !comps.get(i).has("protein")) {
                 try {
                     library.lookup(name.asString());
                 } catch (LookupException e) {
