@@ -52,6 +52,11 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                 : java.util.OptionalDouble.empty();
     }
 
+    /** Each protein the formulation defines: its pI, and its net charge and share of β at every condition. */
+    public List<ProteinCharge> proteins() {
+        return ProteinCharge.of(recipe.library().proteins(), conditions);
+    }
+
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
                 drifts, titratableAcidity, Optional.of(r), working, curves);

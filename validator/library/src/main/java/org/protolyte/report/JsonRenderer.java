@@ -258,6 +258,21 @@ public final class JsonRenderer {
                     .put("share", Numbers.significant(d.share(), 3)));
             d.co2Change().ifPresent(x -> o.put("co2Change", x));
         }
+        if (!a.proteins().isEmpty()) {
+            ArrayNode ps = n.putArray("proteins");
+            for (var pc : a.proteins()) {
+                ObjectNode o = ps.addObject().put("name", pc.protein().name())
+                        .put("molarMass", Numbers.significant(pc.protein().molarMass(), 6))
+                        .put("pKaSet", pc.protein().pKaSet());
+                ObjectNode g = o.putObject("groups");
+                pc.protein().groups().forEach((k, v) -> g.put(k.label(), v));
+                pc.isoelectricPoint().ifPresent(x -> o.put("isoelectricPoint", Numbers.decimals(x, 2)));
+                ArrayNode cs = o.putArray("conditions");
+                pc.conditions().stream().filter(x -> !Double.isNaN(x.netCharge())).forEach(x -> cs.addObject()
+                        .put("name", x.condition()).put("netCharge", Numbers.decimals(x.netCharge(), 2))
+                        .put("bufferShare", Numbers.decimals(x.bufferShare(), 3)));
+            }
+        }
         a.titratableAcidity().ifPresent(t -> {
             ObjectNode o = n.putObject("titratableAcidity").put("mmolPerLitre", Numbers.significant(t.mmolPerLitre(), 4));
             t.mmolPerDose().ifPresent(x -> o.put("mmolPerDose", Numbers.significant(x, 4)));

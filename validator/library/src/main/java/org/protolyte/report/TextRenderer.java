@@ -280,6 +280,16 @@ public final class TextRenderer {
                 b.append(wrap("  ", "    ", p(c.condition().name()) + ": " + String.join("; ", extra)));
             }
         }
+        for (var pc : a.proteins()) {
+            List<String> at = new ArrayList<>();
+            pc.conditions().stream().filter(x -> !Double.isNaN(x.netCharge())).forEach(x -> at.add(String.format(
+                    Locale.ROOT, "%s %+.1f (%.0f %% of β)", p(x.condition()), x.netCharge(), 100 * x.bufferShare())));
+            b.append(wrap("  ", "    ", String.format(Locale.ROOT, "%s (%.0f g/mol, pKa set '%s'): pI %s at 25 °C; net "
+                    + "charge per molecule %s; each group's pKa in a folded protein is uncertain by about one unit",
+                    p(pc.protein().name()), pc.protein().molarMass(), p(pc.protein().pKaSet()),
+                    pc.isoelectricPoint().isPresent() ? String.format(Locale.ROOT, "%.2f", pc.isoelectricPoint().getAsDouble())
+                            : "none (no acidic or no basic group)", String.join(", ", at))));
+        }
         a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
                 "  titratable %s to pH 7.4 at 37 °C: %.3g mmol/L%s%n", t.mmolPerLitre() >= 0 ? "acidity" : "alkalinity",
                 Math.abs(t.mmolPerLitre()), t.mmolPerDose().isPresent() ? String.format(Locale.ROOT, " (%.3g mmol per dose)",
@@ -331,6 +341,13 @@ public final class TextRenderer {
         };
     }
 
+    /** A form without the name of the substance its system belongs to: "His H+" in "antibody X: His". */
+    private static String formLabel(String system, String form) {
+        int colon = system.lastIndexOf(": ");
+        String owner = colon < 0 ? "" : system.substring(0, colon) + " ";
+        return colon > 0 && form.startsWith(owner) ? form.substring(owner.length()) : form;
+    }
+
     /**
      * The forms of each acid–base system (≥ 5 % of it), e.g. "phosphate: H2PO4- 61 %, HPO4-2 39 %": unless all are
      * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
@@ -353,7 +370,7 @@ public final class TextRenderer {
                 forms = forms.subList(0, Math.min(SHOWN_FORMS, forms.size()));
             }
             parts.add(p(system) + ": " + String.join(", ", forms.stream().map(sp -> String.format(Locale.ROOT,
-                    "%s %.0f %%", p(sp.species().name()), sp.fractionOfComponent() * 100)).toList()));
+                    "%s %.0f %%", p(formLabel(system, sp.species().name())), sp.fractionOfComponent() * 100)).toList()));
         }
         int hidden = bySystem.size() - shown.size();
         if (hidden > 0) {
