@@ -71,7 +71,7 @@ class BatchSamplerTest {
                 continue;
             }
             for (int c = 0; c < up.length; c++) {
-                double resolved = (up[c] - down[c]) / 2 / FRACTION;
+                double resolved = (up[c] - down[c]) / 2 / moves.get(q).fraction();
                 double derived = response[c][q];
                 assertEquals(resolved, derived, Math.max(FLOOR, RELATIVE * Math.abs(resolved)),
                         sample.getFileName() + ", " + moves.get(q).name() + ", condition " + c);
