@@ -92,7 +92,32 @@ public final class Analyzer {
                 recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
         Optional<TitratableAcidity> acidity = searches.titratableAcidity(recipe, solution, caveats);
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
-                sensitivities(recipe, doses, solution, own, derivatives), Drifts.of(recipe, own), acidity, Optional.empty(), diluted);
+                sensitivities(recipe, doses, solution, own, derivatives), Drifts.of(recipe, own), acidity, Optional.empty(),
+                diluted, Optional.empty(), ProteinCharge.of(recipe.library().proteins(), own, p -> bufferAlone(recipe,
+                doses, p)));
+    }
+
+    /**
+     * The pH at each condition of the recipe without one protein (and the counterions it brings), every other amount,
+     * the titrants' q.s. doses included, as they are: the buffer alone, against which the protein's self-buffering
+     * shows. Empty where that solution has no pH.
+     */
+    private List<OptionalDouble> bufferAlone(Recipe recipe, Map<Ingredient, Double> doses,
+                                             org.protolyte.substance.Protein protein) {
+        List<Ingredient> rest = recipe.ingredients().stream().filter(i -> i.substance() != protein.substance()).toList();
+        Solution alone = new Recipe(recipe.formulation(), recipe.library(), rest, recipe.makeUpKelvin())
+                .solution(new HashMap<>(doses));
+        List<OptionalDouble> out = new ArrayList<>();
+        for (Formulation.Condition c : recipe.formulation().conditions()) {
+            try {
+                EquilibriumState s = solve(recipe, alone, c.kelvin(), c.co2Pascal());
+                out.add(s.determinate() ? OptionalDouble.of(s.pH()) : OptionalDouble.empty());
+            } catch (IndeterminateException e) {
+                // caught: the buffer alone then has no pH here, and the report shows no shift for this condition
+                out.add(OptionalDouble.empty());
+            }
+        }
+        return out;
     }
 
     /** The points behind a report's plots: the titration, β and the forms against pH, and pH from 0 to 50 °C. */

@@ -12,14 +12,16 @@ import org.protolyte.recipe.Solution;
 /**
  * Everything computed for one formulation: per condition, the q.s. titrants, what was assumed, and the
  * sensitivity of the pH at the target's temperature to each component (largest first), and a robustness
- * study and the points behind the report's plots where they were asked for.
+ * study and the points behind the report's plots where they were asked for; each protein the formulation defines,
+ * with its pI, and its net charge, share of β and pH shift against the buffer alone at every condition (the short
+ * constructor leaves the shifts empty).
  */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
                                   Optional<TitratableAcidity> titratableAcidity,
                                   Optional<Robustness.Result> robustness, Optional<WorkingSolution> working,
-                                  Optional<Curves> curves) {
+                                  Optional<Curves> curves, List<ProteinCharge> proteins) {
 
     public FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
@@ -27,7 +29,8 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                                Optional<TitratableAcidity> titratableAcidity, Optional<Robustness.Result> robustness,
                                Optional<WorkingSolution> working) {
         this(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities, drifts,
-                titratableAcidity, robustness, working, Optional.empty());
+                titratableAcidity, robustness, working, Optional.empty(), ProteinCharge.of(recipe.library().proteins(),
+                        conditions, p -> java.util.Collections.nCopies(conditions.size(), java.util.OptionalDouble.empty())));
     }
 
     /** A concentrate's working solution: the dilution and every condition again (rules judge the document itself). */
@@ -52,19 +55,14 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                 : java.util.OptionalDouble.empty();
     }
 
-    /** Each protein the formulation defines: its pI, and its net charge and share of β at every condition. */
-    public List<ProteinCharge> proteins() {
-        return ProteinCharge.of(recipe.library().proteins(), conditions);
-    }
-
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, Optional.of(r), working, curves);
+                drifts, titratableAcidity, Optional.of(r), working, curves, proteins);
     }
 
     public FormulationAnalysis withCurves(Curves c) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, robustness, working, Optional.of(c));
+                drifts, titratableAcidity, robustness, working, Optional.of(c), proteins);
     }
 
     public FormulationAnalysis {
@@ -74,5 +72,6 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
         titrants = List.copyOf(titrants);
         caveats = List.copyOf(caveats);
         assumptions = List.copyOf(assumptions);
+        proteins = List.copyOf(proteins);
     }
 }

@@ -12,6 +12,7 @@ import org.protolyte.plugin.Plugins;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.Curves;
 import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.analysis.ProteinCharge;
 import org.protolyte.analysis.TitrantResult;
 import org.protolyte.batch.BatchAnalysis;
 import org.protolyte.chemistry.EquilibriumState;
@@ -206,7 +207,37 @@ public final class HtmlRenderer {
                             .orElse(""))));
             b.append("</ul>").append(NL);
         }
+        proteins(b, a.proteins());
         a.curves().ifPresent(c -> plots(b, a, c, id));
+    }
+
+    /** Each protein: its pI, and per condition its net charge, share of β and pH shift against the buffer alone. */
+    private static void proteins(StringBuilder b, List<ProteinCharge> proteins) {
+        for (ProteinCharge pc : proteins) {
+            b.append("<h3>Protein ").append(esc(pc.protein().name())).append("</h3>").append(NL)
+                    .append(String.format(Locale.ROOT, "<p class=\"protein\">%.0f g/mol, pKa set '%s', pI %s at 25 °C; "
+                            + "each group's pKa in a folded protein is uncertain by about one unit.</p>%n",
+                            pc.protein().molarMass(), esc(pc.protein().pKaSet()), pc.isoelectricPoint().isPresent()
+                                    ? String.format(Locale.ROOT, "%.2f", pc.isoelectricPoint().getAsDouble())
+                                    : "none (no acidic or no basic group)"))
+                    .append("<table class=\"protein\"><thead><tr><th>condition</th><th>net charge per molecule</th>"
+                            + "<th>share of β</th><th>pH shift against the buffer alone</th></tr></thead><tbody>");
+            for (ProteinCharge.AtCondition x : pc.conditions()) {
+                b.append("<tr><td>").append(esc(x.condition())).append("</td>");
+                if (Double.isNaN(x.netCharge())) {
+                    b.append("<td colspan=\"3\">no result: see the diagnostics</td>");
+                } else {
+                    b.append(String.format(Locale.ROOT, "<td class=\"number\">%+.1f</td><td class=\"number\">%.0f %%"
+                            + "</td><td class=\"number\">%s</td>", x.netCharge(), 100 * x.bufferShare(),
+                            x.pHShift().isPresent() ? String.format(Locale.ROOT, "%+.2f", x.pHShift().getAsDouble())
+                                    : "—"));
+                }
+                b.append("</tr>");
+            }
+            b.append("</tbody></table>").append(NL).append("<p class=\"note\">The buffer alone: the same solution "
+                    + "without the protein and the counterions it brings, every other amount (the titrants' q.s. "
+                    + "included) as it is.</p>").append(NL);
+        }
     }
 
     /** The weigh sheet: each line as written, in mmol, and in g or mL of stock, per basis and per batch. */

@@ -268,9 +268,12 @@ public final class JsonRenderer {
                 pc.protein().groups().forEach((k, v) -> g.put(k.label(), v));
                 pc.isoelectricPoint().ifPresent(x -> o.put("isoelectricPoint", Numbers.decimals(x, 2)));
                 ArrayNode cs = o.putArray("conditions");
-                pc.conditions().stream().filter(x -> !Double.isNaN(x.netCharge())).forEach(x -> cs.addObject()
-                        .put("name", x.condition()).put("netCharge", Numbers.decimals(x.netCharge(), 2))
-                        .put("bufferShare", Numbers.decimals(x.bufferShare(), 3)));
+                pc.conditions().stream().filter(x -> !Double.isNaN(x.netCharge())).forEach(x -> {
+                    ObjectNode c = cs.addObject().put("name", x.condition())
+                            .put("netCharge", Numbers.decimals(x.netCharge(), 2))
+                            .put("bufferShare", Numbers.decimals(x.bufferShare(), 3));
+                    x.pHShift().ifPresent(d -> c.put("pHShift", Numbers.decimals(d, 3)));
+                });
             }
         }
         a.titratableAcidity().ifPresent(t -> {

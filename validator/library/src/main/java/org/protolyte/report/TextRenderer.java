@@ -283,9 +283,11 @@ public final class TextRenderer {
         for (var pc : a.proteins()) {
             List<String> at = new ArrayList<>();
             pc.conditions().stream().filter(x -> !Double.isNaN(x.netCharge())).forEach(x -> at.add(String.format(
-                    Locale.ROOT, "%s %+.1f (%.0f %% of β)", p(x.condition()), x.netCharge(), 100 * x.bufferShare())));
+                    Locale.ROOT, "%s %+.1f (%.0f %% of β%s)", p(x.condition()), x.netCharge(), 100 * x.bufferShare(),
+                    x.pHShift().isPresent() ? String.format(Locale.ROOT, ", pH %+.2f", x.pHShift().getAsDouble()) : "")));
             b.append(wrap("  ", "    ", String.format(Locale.ROOT, "%s (%.0f g/mol, pKa set '%s'): pI %s at 25 °C; net "
-                    + "charge per molecule %s; each group's pKa in a folded protein is uncertain by about one unit",
+                    + "charge per molecule (share of β, pH shift against the buffer alone with every other amount as "
+                    + "it is) %s; each group's pKa in a folded protein is uncertain by about one unit",
                     p(pc.protein().name()), pc.protein().molarMass(), p(pc.protein().pKaSet()),
                     pc.isoelectricPoint().isPresent() ? String.format(Locale.ROOT, "%.2f", pc.isoelectricPoint().getAsDouble())
                             : "none (no acidic or no basic group)", String.join(", ", at))));
