@@ -17,7 +17,9 @@ import org.protolyte.chemistry.AcidBaseSystem;
  * (from its species fractions), and each of those takes one equivalent. Titrating to near a pKa takes a good fraction
  * of the last of them; more than {@code maxEquivalents} per proton means the titrant, not the buffer, sets the pH, and
  * close to a whole one means the recipe converts the buffer into another salt form that could be weighed instead
- * (Tris + 1 eq HCl is Tris-HCl).
+ * (Tris + 1 eq HCl is Tris-HCl). A protein's groups are not the buffer as written: the buffer is the largest other
+ * system, and the protons the protein's groups exchange between the two pH values (each group's mean proton number,
+ * as for the buffer) are taken off the q.s. before it is counted in equivalents.
  */
 public final class TitrantPlausible implements CheckKind {
 
@@ -36,8 +38,19 @@ public final class TitrantPlausible implements CheckKind {
         double max = rule.number("maxEquivalents", 1.0);
         double nearFull = rule.number("nearFullEquivalent", 0.9);
         List<Finding> out = new ArrayList<>();
-        Optional<BufferContribution> buffer = a.conditions().stream().filter(ConditionResult::determinate)
-                .findFirst().flatMap(ConditionResult::mainBuffer);
+        Optional<ConditionResult> first = a.conditions().stream().filter(ConditionResult::determinate).findFirst();
+        if (first.isEmpty()) {
+            return out;
+        }
+        List<BufferContribution> proteinGroups = new ArrayList<>();
+        Optional<BufferContribution> buffer = Optional.empty();
+        for (BufferContribution c : first.get().buffers()) {
+            if (a.recipe().library().system(c.system()).map(AcidBaseSystem::bound).orElse(false)) {
+                proteinGroups.add(c);
+            } else if (buffer.isEmpty() || c.bufferCapacityPerLitre() > buffer.get().bufferCapacityPerLitre()) {
+                buffer = Optional.of(c);
+            }
+        }
         if (buffer.isEmpty()) {
             return out;
         }
@@ -49,11 +62,19 @@ public final class TitrantPlausible implements CheckKind {
                 continue;
             }
             int protons = titratableProtons(system.get(), t.goalKelvin(), t.startPH(), t.goalPH());
-            double eq = t.moles() / b.molesPerBasis();
+            double byProtein = 0;
+            for (BufferContribution g : proteinGroups) {
+                AcidBaseSystem s = a.recipe().library().system(g.system()).orElseThrow();
+                byProtein += g.molesPerBasis() * Math.abs(meanProtons(s, t.goalKelvin(), t.startPH())
+                        - meanProtons(s, t.goalKelvin(), t.goalPH()));
+            }
+            double eq = (t.moles() - byProtein) / b.molesPerBasis();
             String pointer = t.ingredient().line().pointer() + "/adjustTo";
-            String head = String.format(Locale.ROOT, "q.s. %s is %.3g mmol, %.2f equivalents of the %s buffer "
+            String head = String.format(Locale.ROOT, "q.s. %s is %.3g mmol%s, %.2f equivalents of the %s buffer "
                     + "(%.3g mmol), which has %d titratable proton%s between pH %.2f and %.2f",
-                    t.ingredient().substance().name(), t.moles() * 1000, eq, b.system(), b.molesPerBasis() * 1000,
+                    t.ingredient().substance().name(), t.moles() * 1000, proteinGroups.isEmpty() ? ""
+                            : String.format(Locale.ROOT, " (%.3g mmol of it taken by the protein's groups)",
+                            byProtein * 1000), eq, b.system(), b.molesPerBasis() * 1000,
                     protons, protons == 1 ? "" : "s", t.startPH(), t.goalPH());
             if (eq > max * protons) {
                 out.add(rule.finding(a.recipe().formulation(), pointer, head + String.format(Locale.ROOT,

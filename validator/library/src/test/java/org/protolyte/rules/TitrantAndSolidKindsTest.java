@@ -161,6 +161,33 @@ class TitrantAndSolidKindsTest {
                 "{}"), "no buffer");
     }
 
+    /**
+     * Histidine 10 mmol/L with a peptide of 10 His groups at 2 mmol/L, brought to pH 6.0 with HCl: most of the acid
+     * goes to the peptide's groups, which are not the buffer as written. The rule takes off what the groups take up,
+     * n·c·(θ_goal − θ_start) with θ = 1/(1 + 10^(pH − pKa)) (Henderson–Hasselbalch, by hand here), before counting
+     * equivalents of histidine.
+     */
+    @Test
+    void theProtonsAProteinTakesUpAreNotCountedAgainstTheBuffer() {
+        FormulationAnalysis a = analyse(formulation(", \"conditions\": [{\"name\": \"use\", \"temperature\": "
+                + "\"25 Cel\"}]", component("L-histidine", "10 mmol/L"), "{\"substance\": \"test peptide\", "
+                + "\"protein\": {\"groups\": {\"His\": 10}, \"molarMass\": \"2000 g/mol\"}, \"amount\": "
+                + "\"2 mmol/L\"}", "{\"substance\": \"hydrochloric acid\", \"adjustTo\": {\"pH\": 6.0, "
+                + "\"temperature\": \"25 Cel\"}}"));
+        TitrantResult t = a.titrants().get(0);
+        AcidBaseSystem his = a.recipe().library().proteins().get(0).systems().values().iterator().next();
+        double pKa = his.steps().get(0).pKa(298.15);
+        double byHand = 10 * 2e-3 * Math.abs(1 / (1 + Math.pow(10, t.goalPH() - pKa))
+                - 1 / (1 + Math.pow(10, t.startPH() - pKa)));
+        assertTrue(t.moles() / 10e-3 > 1.0, "without the correction this q.s. is more than an equivalent of histidine");
+        List<String> none = plausible(a, "{}");
+        assertEquals(List.of(), none);
+        String m = plausible(a, "{\"maxEquivalents\": 0.01}").get(0);
+        assertTrue(m.startsWith(String.format(java.util.Locale.ROOT, "q.s. hydrochloric acid is %.3g mmol (%.3g mmol "
+                + "of it taken by the protein's groups), %.2f equivalents of the histidine buffer", t.moles() * 1000,
+                byHand * 1000, (t.moles() - byHand) / 10e-3)), m);
+    }
+
     // ---- saturation-index ----
 
     private static final FormulationAnalysis THREE = analyse(formulation(", \"conditions\": ["
