@@ -51,6 +51,7 @@ module org.protolyte.library {
             org.protolyte.rules.OsmolalityRange,
             org.protolyte.rules.FrozenBuffer,
             org.protolyte.rules.SaturationIndex,
+            org.protolyte.rules.DrugSolubilityMargin,
             org.protolyte.rules.SolubilityLimit,
             org.protolyte.rules.BatchAdditionsMatch,
             org.protolyte.rules.BatchAmountTolerance,

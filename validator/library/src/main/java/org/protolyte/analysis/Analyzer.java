@@ -94,7 +94,7 @@ public final class Analyzer {
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
                 sensitivities(recipe, doses, solution, own, derivatives), Drifts.of(recipe, own), acidity, Optional.empty(),
                 diluted, Optional.empty(), ProteinCharge.of(recipe.library().proteins(), own, p -> bufferAlone(recipe,
-                doses, p)));
+                doses, p)), DrugSolubility.of(recipe.library().drugSubstances(), own, solution.waterKg()));
     }
 
     /**

@@ -14,14 +14,14 @@ import org.protolyte.recipe.Solution;
  * sensitivity of the pH at the target's temperature to each component (largest first), and a robustness
  * study and the points behind the report's plots where they were asked for; each protein the formulation defines,
  * with its pI, and its net charge, share of β and pH shift against the buffer alone at every condition (the short
- * constructor leaves the shifts empty).
+ * constructor leaves the shifts empty); and each drug substance's dissolved amount against its solubility.
  */
 public record FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                   List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
                                   Optional<TitratableAcidity> titratableAcidity,
                                   Optional<Robustness.Result> robustness, Optional<WorkingSolution> working,
-                                  Optional<Curves> curves, List<ProteinCharge> proteins) {
+                                  Optional<Curves> curves, List<ProteinCharge> proteins, List<DrugSolubility> drugs) {
 
     public FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
@@ -30,7 +30,8 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                                Optional<WorkingSolution> working) {
         this(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities, drifts,
                 titratableAcidity, robustness, working, Optional.empty(), ProteinCharge.of(recipe.library().proteins(),
-                        conditions, p -> java.util.Collections.nCopies(conditions.size(), java.util.OptionalDouble.empty())));
+                        conditions, p -> java.util.Collections.nCopies(conditions.size(), java.util.OptionalDouble.empty())),
+                DrugSolubility.of(recipe.library().drugSubstances(), conditions, solution.waterKg()));
     }
 
     /** A concentrate's working solution: the dilution and every condition again (rules judge the document itself). */
@@ -57,12 +58,12 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
 
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, Optional.of(r), working, curves, proteins);
+                drifts, titratableAcidity, Optional.of(r), working, curves, proteins, drugs);
     }
 
     public FormulationAnalysis withCurves(Curves c) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, robustness, working, Optional.of(c), proteins);
+                drifts, titratableAcidity, robustness, working, Optional.of(c), proteins, drugs);
     }
 
     public FormulationAnalysis {
@@ -73,5 +74,6 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
         caveats = List.copyOf(caveats);
         assumptions = List.copyOf(assumptions);
         proteins = List.copyOf(proteins);
+        drugs = List.copyOf(drugs);
     }
 }

@@ -11,6 +11,7 @@ import java.util.Optional;
 import org.protolyte.plugin.Plugins;
 import org.protolyte.analysis.ConditionResult;
 import org.protolyte.analysis.Curves;
+import org.protolyte.analysis.DrugSolubility;
 import org.protolyte.analysis.FormulationAnalysis;
 import org.protolyte.analysis.ProteinCharge;
 import org.protolyte.analysis.TitrantResult;
@@ -208,7 +209,32 @@ public final class HtmlRenderer {
             b.append("</ul>").append(NL);
         }
         proteins(b, a.proteins());
+        drugs(b, a.drugs());
         a.curves().ifPresent(c -> plots(b, a, c, id));
+    }
+
+    /** Each drug substance: per condition its dissolved amount against its solubility, and its pH range. */
+    private static void drugs(StringBuilder b, List<DrugSolubility> drugs) {
+        for (DrugSolubility d : drugs) {
+            b.append("<h3>Drug substance ").append(esc(d.drug().name())).append("</h3>").append(NL)
+                    .append("<table class=\"drug\"><thead><tr><th>condition</th><th>dissolved (mmol/L)</th>"
+                            + "<th>solubility (mmol/L)</th><th>of its solubility</th><th>limited by</th>"
+                            + "<th>stays dissolved</th></tr></thead><tbody>");
+            for (DrugSolubility.AtCondition x : d.conditions()) {
+                b.append("<tr><td>").append(esc(x.condition())).append("</td><td class=\"number\">")
+                        .append(Numbers.significant(x.dissolved() * 1000, 3).toPlainString())
+                        .append("</td><td class=\"number\">").append(Numbers.significant(x.solubility() * 1000, 3)
+                                .toPlainString()).append("</td><td class=\"number\">")
+                        .append(String.format(Locale.ROOT, "%.0f %% (log10 ± %.2f)", 100 * x.fraction(),
+                                x.uncertainty())).append("</td><td>").append(esc(x.limiting().name()))
+                        .append(x.inRange() ? "" : " (extrapolated)").append("</td><td>")
+                        .append(esc(TextRenderer.dissolvedRange(x.window()).replaceFirst("^, ", "")))
+                        .append("</td></tr>");
+            }
+            b.append("</tbody></table>").append(NL).append("<p class=\"note\">Solubility at the condition's pH and "
+                    + "temperature, the solution's activity coefficients and counterions held; a prediction does not "
+                    + "replace a compatibility study.</p>").append(NL);
+        }
     }
 
     /** Each protein: its pI, and per condition its net charge, share of β and pH shift against the buffer alone. */

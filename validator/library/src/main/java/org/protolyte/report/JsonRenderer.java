@@ -276,6 +276,35 @@ public final class JsonRenderer {
                 });
             }
         }
+        if (!a.drugs().isEmpty()) {
+            ArrayNode ds = n.putArray("drugSubstances");
+            for (var d : a.drugs()) {
+                ObjectNode o = ds.addObject().put("name", d.drug().name());
+                ArrayNode cs = o.putArray("conditions");
+                for (var x : d.conditions()) {
+                    ObjectNode c = cs.addObject().put("name", x.condition())
+                            .put("dissolvedMmolPerLitre", Numbers.significant(x.dissolved() * 1000, 4))
+                            .put("solubilityMmolPerLitre", Numbers.significant(x.solubility() * 1000, 4))
+                            .put("limitingSolid", x.limiting().name())
+                            .put("log10Fraction", Numbers.decimals(x.log10Fraction(), 3))
+                            .put("log10FractionUncertainty", Numbers.decimals(x.uncertainty(), 3))
+                            .put("extrapolated", !x.inRange());
+                    x.window().ifPresentOrElse(w -> {
+                        ObjectNode r = c.putObject("dissolvedRange");
+                        w.low().ifPresent(v -> r.put("abovePH", Numbers.decimals(v, 2)));
+                        w.high().ifPresent(v -> r.put("belowPH", Numbers.decimals(v, 2)));
+                    }, () -> c.putNull("dissolvedRange"));
+                    if (!x.pHMax().isEmpty()) {
+                        ObjectNode m = c.putObject("pHMax");
+                        x.pHMax().forEach((salt, v) -> m.put(salt, Numbers.decimals(v, 2)));
+                    }
+                }
+                ArrayNode profile = o.putArray("profile");
+                d.profile().forEach(pt -> profile.addObject().put("pH", Numbers.decimals(pt.pH(), 1))
+                        .put("solubilityMmolPerLitre", Numbers.significant(pt.solubility() * 1000, 4))
+                        .put("limitingSolid", pt.limiting()));
+            }
+        }
         a.titratableAcidity().ifPresent(t -> {
             ObjectNode o = n.putObject("titratableAcidity").put("mmolPerLitre", Numbers.significant(t.mmolPerLitre(), 4));
             t.mmolPerDose().ifPresent(x -> o.put("mmolPerDose", Numbers.significant(x, 4)));

@@ -292,6 +292,18 @@ public final class TextRenderer {
                     pc.isoelectricPoint().isPresent() ? String.format(Locale.ROOT, "%.2f", pc.isoelectricPoint().getAsDouble())
                             : "none (no acidic or no basic group)", String.join(", ", at))));
         }
+        for (var ds : a.drugs()) {
+            List<String> at = new ArrayList<>();
+            for (var x : ds.conditions()) {
+                at.add(String.format(Locale.ROOT, "%s %.3g of %.3g mmol/L (%.0f %%, log10 ± %.2f; %s%s)%s",
+                        p(x.condition()), x.dissolved() * 1000, x.solubility() * 1000, 100 * x.fraction(),
+                        x.uncertainty(), p(x.limiting().name()), x.inRange() ? "" : ", extrapolated beyond its data",
+                        dissolvedRange(x.window())));
+            }
+            b.append(wrap("  ", "    ", String.format(Locale.ROOT, "%s: dissolved of its solubility at the condition's "
+                    + "pH (the solid that limits it): %s%s", p(ds.drug().name()), String.join("; ", at),
+                    pHMax(ds))));
+        }
         a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
                 "  titratable %s to pH 7.4 at 37 °C: %.3g mmol/L%s%n", t.mmolPerLitre() >= 0 ? "acidity" : "alkalinity",
                 Math.abs(t.mmolPerLitre()), t.mmolPerDose().isPresent() ? String.format(Locale.ROOT, " (%.3g mmol per dose)",
@@ -355,6 +367,32 @@ public final class TextRenderer {
      * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
      * the rest.
      */
+    /** ", dissolved above pH a and below b" for a drug's window; where none holds it, says so. */
+    static String dissolvedRange(Optional<org.protolyte.chemistry.DrugSubstance.Window> w) {
+        if (w.isEmpty()) {
+            return ", above its solubility at every pH";
+        }
+        var low = w.get().low();
+        var high = w.get().high();
+        if (low.isEmpty() && high.isEmpty()) {
+            return ", dissolved at every pH from 0 to 14";
+        }
+        return ", dissolved" + (low.isPresent() ? String.format(Locale.ROOT, " above pH %.2f", low.getAsDouble()) : "")
+                + (low.isPresent() && high.isPresent() ? " and" : "")
+                + (high.isPresent() ? String.format(Locale.ROOT, " below pH %.2f", high.getAsDouble()) : "");
+    }
+
+    /** "; pHmax of SALT x at CONDITION" for each salt whose counterion the first condition holds. */
+    private static String pHMax(org.protolyte.analysis.DrugSolubility ds) {
+        if (ds.conditions().isEmpty()) {
+            return "";
+        }
+        var first = ds.conditions().get(0);
+        List<String> out = new ArrayList<>();
+        first.pHMax().forEach((salt, x) -> out.add(String.format(Locale.ROOT, "pHmax of %s %.2f", p(salt), x)));
+        return out.isEmpty() ? "" : "; at " + p(first.condition()) + ": " + String.join(", ", out);
+    }
+
     static String speciation(ConditionResult c, EquilibriumState s, Systems systems, boolean all) {
         Map<String, List<SpeciesAmount>> bySystem = new LinkedHashMap<>();
         for (SpeciesAmount sp : s.species()) {

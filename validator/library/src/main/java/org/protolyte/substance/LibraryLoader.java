@@ -19,6 +19,7 @@ import org.protolyte.chemistry.DissociationStep;
 import org.protolyte.chemistry.FormationConstant;
 import org.protolyte.chemistry.SaltSolubility;
 import org.protolyte.chemistry.SolidPhase;
+import org.protolyte.chemistry.DrugSubstance;
 import org.protolyte.chemistry.Species;
 import org.protolyte.chemistry.TemperatureRange;
 import org.protolyte.document.Digests;
@@ -56,6 +57,7 @@ public final class LibraryLoader {
     private final Map<String, SolidPhase> phases = new LinkedHashMap<>();
     private final Map<String, String> phaseSources = new LinkedHashMap<>();
     private final Map<String, SaltSolubility> solubilities = new LinkedHashMap<>();
+    private final Map<String, DrugSubstance> drugs = new LinkedHashMap<>();
     private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
     private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
@@ -101,7 +103,7 @@ public final class LibraryLoader {
 
     public SubstanceLibrary build() {
         return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files,
-                complexes, complexSources, phases, phaseSources, solubilities, proteinGroups, List.of());
+                complexes, complexSources, phases, phaseSources, solubilities, proteinGroups, List.of(), drugs);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -128,6 +130,80 @@ public final class LibraryLoader {
             each(root, "complexes", this::complex);
             each(root, "phases", this::phase);
             each(root, "solubilities", this::solubility);
+            each(root, "drugSubstances", this::drug);
+        }
+
+        /**
+         * A drug substance: its system, the free form's intrinsic solubility (a solid dissolving into the system's
+         * uncharged form, or the form named) and its salts (solids as in {@code phases}), each source kept as a phase's.
+         */
+        private void drug(JsonNode n, String pointer) {
+            String name = n.get("name").asString();
+            AcidBaseSystem system = systems.get(n.get("system").asString());
+            if (system == null) {
+                problems.add(doc.problem(pointer + "/system", "'" + n.get("system").asString() + "' is not an acid–base "
+                        + "system of the library"));
+                return;
+            }
+            JsonNode free = n.get("freeForm");
+            List<AcidBaseSystem.Form> uncharged = system.forms().stream().filter(f -> free.has("form")
+                    ? f.name().equals(free.get("form").asString()) : f.charge() == 0).toList();
+            if (uncharged.size() != 1) {
+                problems.add(doc.problem(pointer + "/freeForm" + (free.has("form") ? "/form" : ""), free.has("form")
+                        ? "'" + free.get("form").asString() + "' is not a form of " + system.name()
+                        : system.name() + " has " + uncharged.size() + " forms of charge 0; name the free form's"));
+                return;
+            }
+            if (!ordered(free, pointer + "/freeForm")) {
+                return;
+            }
+            List<SolidPhase> salts = new ArrayList<>();
+            Map<String, Double> uDeltaH = new LinkedHashMap<>();
+            for (int i = 0; i < n.path("salts").size(); i++) {
+                JsonNode salt = n.get("salts").get(i);
+                String at = pointer + "/salts/" + i;
+                Map<String, Double> parts = new LinkedHashMap<>();
+                for (var e : salt.get("ions").properties()) {
+                    if (!e.getKey().equals(SolidPhase.HYDROGEN) && !knownSpecies(e.getKey())) {
+                        problems.add(doc.problem(at + "/ions/" + e.getKey(), "'" + e.getKey() + "' is not H+, an ion, "
+                                + "a form of an acid–base system or a complex in the library"));
+                        return;
+                    }
+                    parts.put(e.getKey(), e.getValue().asDouble());
+                }
+                if (!ordered(salt, at)) {
+                    return;
+                }
+                salts.add(new SolidPhase(salt.get("name").asString(), salt.get("formula").asString(), parts,
+                        solid(salt, "log10Ksp")));
+                uDeltaH.put(salt.get("name").asString(), deltaHUncertainty(salt));
+                phaseSources.put(salt.get("name").asString(), salt.get("source").asString());
+            }
+            SolidPhase freeForm = new SolidPhase(name + " (free form)", uncharged.get(0).name(),
+                    Map.of(uncharged.get(0).name(), 1.0), solid(free, "log10S0"));
+            uDeltaH.put(freeForm.name(), deltaHUncertainty(free));
+            try {
+                DrugSubstance d = new DrugSubstance(name, system, freeForm, salts, uDeltaH);
+                named(drugs, n, pointer, d, "drug substance");
+                phaseSources.put(freeForm.name(), free.get("source").asString());
+            } catch (IllegalArgumentException e) {
+                problems.add(doc.problem(pointer + "/salts", e.getMessage()));
+            }
+        }
+
+        /** A drug's solid: log10 K at 25 °C and ΔH° (kJ/mol) of dissolution, van 't Hoff with ΔCp° 0. */
+        private static FormationConstant solid(JsonNode n, String logField) {
+            return new FormationConstant(n.get(logField).asDouble(), n.path("deltaH").asDouble(0) * 1000, 0,
+                    n.get("uncertainty").asDouble(), TemperatureRange.celsius(n.get("validFrom").asDouble(),
+                    n.get("validTo").asDouble()));
+        }
+
+        /** u(ΔH°) of a drug's solid, J/mol: the source's, or the library's default ({@link UncertaintyDefaults}). */
+        private static double deltaHUncertainty(JsonNode n) {
+            if (!n.has("deltaH")) {
+                return UncertaintyDefaults.UNPUBLISHED_SOLUTION_DELTA_H * 1000;
+            }
+            return n.path("deltaHUncertainty").asDouble(UncertaintyDefaults.DELTA_H) * 1000;
         }
 
         /** A salt's solubility table: its ions (as in a phase), the library forms that are the salt, the points. */

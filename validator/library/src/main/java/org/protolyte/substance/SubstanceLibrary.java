@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.Set;
 
 import org.protolyte.chemistry.AcidBaseSystem;
+import org.protolyte.chemistry.DrugSubstance;
 import org.protolyte.chemistry.CarbonDioxide;
 import org.protolyte.chemistry.Component;
 import org.protolyte.chemistry.SaltSolubility;
@@ -42,6 +43,7 @@ public final class SubstanceLibrary {
     private final List<SaltSolubility> solubilities;
     private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups;   // pKa set -> its groups
     private final List<Protein> proteins;                                         // a formulation's, once added
+    private final List<DrugSubstance> drugs;
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
@@ -50,8 +52,10 @@ public final class SubstanceLibrary {
                      Map<String, Species> complexes, Map<String, String> complexSources,
                      Map<String, SolidPhase> phases, Map<String, String> phaseSources,
                      Map<String, SaltSolubility> solubilities,
-                     Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups, List<Protein> proteins) {
+                     Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups, List<Protein> proteins,
+                     Map<String, DrugSubstance> drugs) {
         this.proteins = List.copyOf(proteins);
+        this.drugs = List.copyOf(drugs.values());
         Map<String, Map<ProteinGroup, AcidBaseSystem>> sets = new LinkedHashMap<>();
         proteinGroups.forEach((k, v) -> sets.put(k, java.util.Collections.unmodifiableMap(new java.util.EnumMap<>(v))));
         this.proteinGroups = java.util.Collections.unmodifiableMap(sets);
@@ -204,6 +208,11 @@ public final class SubstanceLibrary {
         return phases;
     }
 
+    /** Drug substances whose pH-dependent solubility the report gives; their solids' sources are phase sources. */
+    public List<DrugSubstance> drugSubstances() {
+        return drugs;
+    }
+
     /** Salts whose published solubility against temperature a check compares with the recipe. */
     public List<SaltSolubility> solubilities() {
         return solubilities;
@@ -244,8 +253,10 @@ public final class SubstanceLibrary {
         solubilities.forEach(x -> so.put(x.name(), x));
         List<Protein> all = new ArrayList<>(this.proteins);
         all.addAll(proteins);
+        Map<String, DrugSubstance> dr = new LinkedHashMap<>();
+        drugs.forEach(x -> dr.put(x.name(), x));
         return new SubstanceLibrary(sys, stepSources, ions, sol, subs, idx, ambiguous, files, cx, complexSources, ph,
-                phaseSources, so, proteinGroups, all);
+                phaseSources, so, proteinGroups, all, dr);
     }
 
     /** The proteins a formulation defined (see {@link #withProteins}), in its order. */

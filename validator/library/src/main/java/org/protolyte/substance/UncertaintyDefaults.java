@@ -33,6 +33,13 @@ public final class UncertaintyDefaults {
      */
     public static final double UNPUBLISHED_DELTA_CP = 190;
 
+    /**
+     * u(ΔH°) of a drug's solid whose ΔH° of solution is not published (taken as 0), kJ/mol: as large as the enthalpies
+     * of solution of crystalline drugs themselves, commonly 20 to 50 kJ/mol (from memory, not read here), so that an
+     * unknown temperature dependence is never counted as none.
+     */
+    public static final double UNPUBLISHED_SOLUTION_DELTA_H = 40;
+
     /** The words of the reports' {@code assumed} text. */
     public static final String STATED = "where a source gives no uncertainty for ΔH° or ΔCp° of a dissociation step, "
             + "the library's defaults are used: u(ΔH°) " + fmt(DELTA_H) + " kJ/mol (" + fmt(UNPUBLISHED_DELTA_H)

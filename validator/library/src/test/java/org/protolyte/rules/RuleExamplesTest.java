@@ -72,6 +72,11 @@ class RuleExamplesTest {
     private static DocumentReport check(String ruleId, String file) {
         // batch-risk judges the robustness study, which a check runs only when asked (check --robustness N)
         Protolyte p = ruleId.equals("batch-risk") ? WITH_ROBUSTNESS : PROTOLYTE;
+        // a rule whose subject only a site library holds (a drug substance) brings that library beside its examples
+        if (example(ruleId, "library.json").isPresent()) {
+            p = new Protolyte(SCHEMAS, new LibraryLoader(SCHEMAS).addShipped().add("rule-examples/" + ruleId
+                    + "/library.json", bytes(ruleId, "library.json"), true).build());
+        }
         return p.check("rule-examples/" + ruleId + "/" + file, bytes(ruleId, file));
     }
 

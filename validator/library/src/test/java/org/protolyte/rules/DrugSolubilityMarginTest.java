@@ -1,0 +1,88 @@
+package org.protolyte.rules;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.protolyte.analysis.Analyzer;
+import org.protolyte.analysis.DrugSolubility;
+import org.protolyte.analysis.FormulationAnalysis;
+import org.protolyte.chemistry.Davies;
+import org.protolyte.chemistry.Equilibrium;
+import org.protolyte.document.FormulationReader;
+import org.protolyte.document.JsonReader;
+import org.protolyte.document.SchemaCatalog;
+import org.protolyte.recipe.RecipeResolver;
+import org.protolyte.substance.LibraryLoader;
+import org.protolyte.substance.SubstanceLibrary;
+
+/** drug-solubility-margin on a weak acid's sodium salt brought to a pH with hydrochloric acid. */
+class DrugSolubilityMarginTest {
+
+    private static final SchemaCatalog SCHEMAS = new SchemaCatalog();
+    static final SubstanceLibrary LIBRARY = library();
+
+    private static SubstanceLibrary library() {
+        try (InputStream in = DrugSolubilityMarginTest.class.getResourceAsStream("test-drugs.json")) {
+            return new LibraryLoader(SCHEMAS).addShipped().add("test-drugs.json", in.readAllBytes(), true).build();
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /** {@code grams} of sodium phenobarbital per litre brought to {@code pH} at 25 °C with hydrochloric acid. */
+    static FormulationAnalysis analyse(String grams, double pH) {
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-DRUG\", \"revision\": \"A\","
+                + " \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": [{\"substance\": \"sodium phenobarbital\","
+                + " \"amount\": \"" + grams + "\"}, {\"substance\": \"hydrochloric acid\", \"adjustTo\": {\"pH\": " + pH
+                + ", \"temperature\": \"25 Cel\"}}], \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
+        return new Analyzer(new Equilibrium(Davies.INSTANCE)).analyze(new RecipeResolver(LIBRARY).resolve(f));
+    }
+
+    private static List<Finding> check(FormulationAnalysis a, String parameters) {
+        return new DrugSolubilityMargin().check(a, Analyses.rule("drug-solubility-margin", parameters));
+    }
+
+    @Test
+    void aWeakAcidBelowThePhWhereItSeparatesIsFlaggedAtItsLine() {
+        FormulationAnalysis low = analyse("10 g", 7.9);
+        DrugSolubility.AtCondition x = low.drugs().get(0).conditions().get(0);
+        assertTrue(x.log10Fraction() > 0, "10 g/L at pH 7.9 is above its solubility: " + x);
+        List<Finding> f = check(low, "{}");
+        assertEquals(1, f.size());
+        assertEquals("/components/0", f.get(0).pointer().orElseThrow());
+        assertTrue(f.get(0).message().startsWith("phenobarbital exceeds 100 % of its solubility: at use (pH 7.90)"),
+                f.get(0).message());
+        assertTrue(f.get(0).message().contains("phenobarbital (free form) allows"), f.get(0).message());
+    }
+
+    @Test
+    void wellAboveItTheDrugPassesAndAMarginOrTheUncertaintyCanStillFlagIt() {
+        FormulationAnalysis high = analyse("10 g", 9.5);
+        DrugSolubility.AtCondition x = high.drugs().get(0).conditions().get(0);
+        assertTrue(x.log10Fraction() < -1, x.toString());
+        assertEquals(List.of(), check(high, "{}"));
+        // a site's margin of a hundredth of the solubility catches it
+        assertEquals(1, check(high, "{\"maxFraction\": 0.01}").size());
+        // just below saturation: the central value passes, its uncertainty does not
+        FormulationAnalysis edge = analyse("10 g", edgePH());
+        DrugSolubility.AtCondition e = edge.drugs().get(0).conditions().get(0);
+        assertTrue(e.log10Fraction() < 0 && e.log10Fraction() + 2 * e.uncertainty() > 0, e.toString());
+        List<Finding> f = check(edge, "{}");
+        assertEquals(1, f.size());
+        assertTrue(f.get(0).message().contains("may exceed, within its uncertainty,"), f.get(0).message());
+        assertEquals(List.of(), check(edge, "{\"coverage\": 0}"));
+    }
+
+    /** 0.05 pH above where 10 g/L reaches its solubility at the solution's medium. */
+    private static double edgePH() {
+        DrugSolubility.AtCondition x = analyse("10 g", 9.5).drugs().get(0).conditions().get(0);
+        return x.window().orElseThrow().low().getAsDouble() + 0.05;
+    }
+}
