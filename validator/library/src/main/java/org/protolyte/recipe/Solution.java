@@ -31,6 +31,24 @@ public record Solution(Map<Component, Double> totals, List<Species> species, dou
         return new Solution(t, species, water, moles, soluteVolumeLitres);
     }
 
+    /**
+     * This solution mixed with {@code otherParts} volumes of {@code other} per volume of this one, both measured at
+     * {@code kelvin}: the moles, the water and the solutes' apparent volumes add (the density model's additive
+     * volumes), and the species of both are present.
+     */
+    public Solution mixed(Solution other, double otherParts, double kelvin) {
+        double scale = otherParts * volumeLitres(kelvin) / other.volumeLitres(kelvin);
+        double water = waterKg + scale * other.waterKg;
+        Map<Component, Double> t = new java.util.LinkedHashMap<>();
+        totals.forEach((c, m) -> t.merge(c, m * waterKg / water, Double::sum));
+        other.totals.forEach((c, m) -> t.merge(c, m * scale * other.waterKg / water, Double::sum));
+        java.util.Set<Species> all = new java.util.LinkedHashSet<>(species);
+        all.addAll(other.species);
+        Map<Ingredient, Double> n = new java.util.LinkedHashMap<>(moles);
+        other.moles.forEach((i, x) -> n.merge(i, x * scale, Double::sum));
+        return new Solution(t, List.copyOf(all), water, n, soluteVolumeLitres + scale * other.soluteVolumeLitres);
+    }
+
     /** Litres of solution at a temperature: water at its density plus the solutes' apparent volumes. */
     public double volumeLitres(double kelvin) {
         return waterKg / DensityModel.waterDensity(kelvin) + soluteVolumeLitres;
