@@ -25,7 +25,9 @@ import org.protolyte.document.Formulation;
 import org.protolyte.recipe.DensityModel;
 import org.protolyte.recipe.Ingredient;
 import org.protolyte.recipe.Recipe;
+import org.protolyte.recipe.RecipeResolver;
 import org.protolyte.recipe.Solution;
+import org.protolyte.substance.Fluid;
 import org.protolyte.substance.Substance;
 import org.protolyte.units.Air;
 
@@ -84,17 +86,73 @@ public final class Analyzer {
         working.ifPresent(w -> recipe.formulation().conditions()
                 .forEach(c -> results.add(condition(recipe, w, c, derivatives))));
         List<Solution> solutions = new ArrayList<>(java.util.Collections.nCopies(n, solution));
-        working.ifPresent(w -> solutions.addAll(java.util.Collections.nCopies(n, w)));
-        List<ConditionResult> all = new ConstantsPropagation(this).apply(recipe, solution, results, solutions,
-                derivatives, titrants);
+        List<java.util.function.UnaryOperator<Solution>> derived = new ArrayList<>(java.util.Collections.nCopies(n,
+                java.util.function.UnaryOperator.identity()));
+        working.ifPresent(w -> {
+            solutions.addAll(java.util.Collections.nCopies(n, w));
+            double factor = recipe.formulation().dilution().orElseThrow().factor();
+            derived.addAll(java.util.Collections.nCopies(n, s -> s.diluted(factor, recipe.makeUpKelvin())));
+        });
+        int beforeAdmixtures = results.size();
+        List<Fluid> fluids = new ArrayList<>();
+        for (Formulation.Admixture ad : recipe.formulation().admixtures()) {
+            Fluid fluid = recipe.library().fluid(ad.into()).orElseThrow();
+            Solution received = new RecipeResolver(recipe.library()).fluid(fluid).solution(Map.of());
+            java.util.function.UnaryOperator<Solution> mix = s -> s.mixed(received,
+                    ad.fluidParts() / ad.productParts(), recipe.makeUpKelvin());
+            Solution mixture = mix.apply(solution);
+            results.add(admixture(recipe, mixture, new Formulation.Condition("into " + fluid.name() + " ("
+                    + ad.ratio() + ")", fluid.kelvin(), true, ad.pointer(), fluid.co2Pascal()), derivatives));
+            solutions.add(mixture);
+            derived.add(mix);
+            fluids.add(fluid);
+        }
+        Solution everything = solution;   // every component of every result: the fluids' constants count too
+        for (Solution s : solutions.subList(beforeAdmixtures, solutions.size())) {
+            everything = everything.mixed(s, 1, recipe.makeUpKelvin());
+        }
+        List<ConditionResult> all = new ConstantsPropagation(this).apply(recipe, everything, results, solutions,
+                derived, derivatives, titrants);
         List<ConditionResult> own = all.subList(0, n);
         Optional<FormulationAnalysis.WorkingSolution> diluted = working.map(w -> new FormulationAnalysis.WorkingSolution(
-                recipe.formulation().dilution().orElseThrow(), w, all.subList(n, all.size())));
+                recipe.formulation().dilution().orElseThrow(), w, all.subList(n, beforeAdmixtures)));
+        List<FormulationAnalysis.Admixed> admixed = new ArrayList<>();
+        for (int i = 0; i < fluids.size(); i++) {
+            ConditionResult r = all.get(beforeAdmixtures + i);
+            Solution mixture = solutions.get(beforeAdmixtures + i);
+            admixed.add(new FormulationAnalysis.Admixed(recipe.formulation().admixtures().get(i), fluids.get(i),
+                    mixture, r, DrugSolubility.of(recipe.library().drugSubstances(), List.of(r), mixture.waterKg())));
+        }
         Optional<TitratableAcidity> acidity = searches.titratableAcidity(recipe, solution, caveats);
         return new FormulationAnalysis(recipe, solution, own, titrants, caveats, assumptions(recipe),
                 sensitivities(recipe, doses, solution, own, derivatives), Drifts.of(recipe, own), acidity, Optional.empty(),
                 diluted, Optional.empty(), ProteinCharge.of(recipe.library().proteins(), own, p -> bufferAlone(recipe,
-                doses, p)), DrugSolubility.of(recipe.library().drugSubstances(), own, solution.waterKg()));
+                doses, p)), DrugSolubility.of(recipe.library().drugSubstances(), own, solution.waterKg()), admixed);
+    }
+
+    /**
+     * The product mixed into a receiving fluid, at the fluid's temperature and CO2: the equilibrium, β, osmolarity
+     * and saturation, without the searches that belong to the product's own target.
+     */
+    private ConditionResult admixture(Recipe recipe, Solution mixture, Formulation.Condition c,
+                                      List<Optional<Derivatives>> derivatives) {
+        double volume = mixture.volumeLitres(c.kelvin());
+        derivatives.add(Optional.empty());
+        try {
+            Equilibrium.Prepared problem = prepare(recipe, mixture, c.kelvin(), c.co2Pascal(), java.util.Set.of());
+            EquilibriumState s = problem.solve(mixture.totals(), Double.NaN);
+            if (s.determinate()) {
+                derivatives.set(derivatives.size() - 1, differentiated(problem));
+            }
+            double perLitre = mixture.waterKg() / volume;
+            return new ConditionResult(c, Optional.of(s), s.caveats(), s.bufferCapacity() * perLitre,
+                    s.osmolality() * perLitre, volume, buffers(recipe, mixture, s, perLitre), OptionalDouble.empty(),
+                    Optional.empty(), OptionalDouble.empty(), Optional.empty(),
+                    s.determinate() ? saturation(recipe, s) : List.of()).finite();
+        } catch (IndeterminateException e) {
+            return new ConditionResult(c, Optional.empty(), List.of(e.caveat()), Double.NaN, Double.NaN, volume, List.of(),
+                    OptionalDouble.empty(), Optional.empty(), OptionalDouble.empty(), Optional.empty(), List.of());
+        }
     }
 
     /**

@@ -187,13 +187,17 @@ final class ConstantsPropagation {
     }
 
     /**
-     * @param solutions the solution of each result (the concentrate's, then the working solution's)
+     * @param constants a solution holding every component of the results' solutions: its constants are the ones moved
+     * @param solutions the solution of each result (the concentrate's, then the working solution's, then each
+     *                  admixture's)
+     * @param derived   for each result, how its solution follows from the recipe's at another dose (the identity, a
+     *                  dilution, a mixture)
      * @param titrants  the q.s. results: the one dosed (moles &gt; 0, goal reached) is held to its goal
      */
-    List<ConditionResult> apply(Recipe recipe, Solution concentrate, List<ConditionResult> results,
-                                List<Solution> solutions, List<Optional<Derivatives>> derivatives,
-                                List<TitrantResult> titrants) {
-        List<Perturbation> perturbations = perturbations(recipe, concentrate, analyzer.equilibrium().activityModel());
+    List<ConditionResult> apply(Recipe recipe, Solution constants, List<ConditionResult> results,
+                                List<Solution> solutions, List<java.util.function.UnaryOperator<Solution>> derived,
+                                List<Optional<Derivatives>> derivatives, List<TitrantResult> titrants) {
+        List<Perturbation> perturbations = perturbations(recipe, constants, analyzer.equilibrium().activityModel());
         Optional<TitrantResult> dosed = titrants.stream()
                 .filter(t -> t.used() && t.unreachable().isEmpty() && t.moles() > 0).findFirst();
         int n = results.size();
@@ -227,10 +231,9 @@ final class ConstantsPropagation {
                 out.add(r);
                 continue;
             }
-            boolean working = i >= recipe.formulation().conditions().size();    // the diluted working solution's
             Optional<Uncertainty> u = doseFailed ? Optional.empty()
                     : uncertainty(recipe, r, solutions.get(i), derivatives.get(i), dosed, step, perturbations, dDose,
-                    working);
+                    derived.get(i));
             out.add(u.map(r::withUncertainty).orElseGet(() -> r.withCaveat(Caveat.warning("uncertainty-not-computed",
                     "the uncertainty from the constants could not be computed here: the pH is shown without it"))));
         }
@@ -239,14 +242,11 @@ final class ConstantsPropagation {
 
     private Optional<Uncertainty> uncertainty(Recipe recipe, ConditionResult r, Solution solution,
                                               Optional<Derivatives> known, Optional<TitrantResult> dosed, double step, List<Perturbation> perturbations,
-                                              double[] dDose, boolean working) {
+                                              double[] dDose, java.util.function.UnaryOperator<Solution> derive) {
         Differentiated c;
         try {
-            Optional<Solution> more = dosed.map(t -> {
-                Solution s = recipe.solution(Map.of(t.ingredient(), t.moles() + step));
-                return working ? s.diluted(recipe.formulation().dilution().orElseThrow().factor(), recipe.makeUpKelvin())
-                        : s;
-            });
+            Optional<Solution> more = dosed.map(t -> derive.apply(recipe.solution(Map.of(t.ingredient(),
+                    t.moles() + step))));
             c = differentiate(recipe, solution, more, step, r.condition().kelvin(), r.condition().co2Pascal(), known);
         } catch (IndeterminateException | IllegalStateException e) {
             // caught: this condition's uncertainty is not computed, which the caller says in a caveat

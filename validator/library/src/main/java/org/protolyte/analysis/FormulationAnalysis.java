@@ -21,7 +21,19 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
                                   List<Sensitivity> targetSensitivities, List<Drift> drifts,
                                   Optional<TitratableAcidity> titratableAcidity,
                                   Optional<Robustness.Result> robustness, Optional<WorkingSolution> working,
-                                  Optional<Curves> curves, List<ProteinCharge> proteins, List<DrugSolubility> drugs) {
+                                  Optional<Curves> curves, List<ProteinCharge> proteins, List<DrugSolubility> drugs,
+                                  List<Admixed> admixtures) {
+
+    /**
+     * The product mixed into a receiving fluid: the mixture, its equilibrium at the fluid's temperature and CO2 (with
+     * the uncertainty from the product's constants), and each drug substance's solubility in it.
+     */
+    public record Admixed(Formulation.Admixture admixture, org.protolyte.substance.Fluid fluid, Solution mixture,
+                          ConditionResult result, List<DrugSolubility> drugs) {
+        public Admixed {
+            drugs = List.copyOf(drugs);
+        }
+    }
 
     public FormulationAnalysis(Recipe recipe, Solution solution, List<ConditionResult> conditions,
                                List<TitrantResult> titrants, List<Caveat> caveats, List<String> assumptions,
@@ -31,7 +43,7 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
         this(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities, drifts,
                 titratableAcidity, robustness, working, Optional.empty(), ProteinCharge.of(recipe.library().proteins(),
                         conditions, p -> java.util.Collections.nCopies(conditions.size(), java.util.OptionalDouble.empty())),
-                DrugSolubility.of(recipe.library().drugSubstances(), conditions, solution.waterKg()));
+                DrugSolubility.of(recipe.library().drugSubstances(), conditions, solution.waterKg()), List.of());
     }
 
     /** A concentrate's working solution: the dilution and every condition again (rules judge the document itself). */
@@ -58,12 +70,12 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
 
     public FormulationAnalysis withRobustness(Robustness.Result r) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, Optional.of(r), working, curves, proteins, drugs);
+                drifts, titratableAcidity, Optional.of(r), working, curves, proteins, drugs, admixtures);
     }
 
     public FormulationAnalysis withCurves(Curves c) {
         return new FormulationAnalysis(recipe, solution, conditions, titrants, caveats, assumptions, targetSensitivities,
-                drifts, titratableAcidity, robustness, working, Optional.of(c), proteins, drugs);
+                drifts, titratableAcidity, robustness, working, Optional.of(c), proteins, drugs, admixtures);
     }
 
     public FormulationAnalysis {
@@ -75,5 +87,6 @@ public record FormulationAnalysis(Recipe recipe, Solution solution, List<Conditi
         assumptions = List.copyOf(assumptions);
         proteins = List.copyOf(proteins);
         drugs = List.copyOf(drugs);
+        admixtures = List.copyOf(admixtures);
     }
 }

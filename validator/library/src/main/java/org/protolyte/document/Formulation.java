@@ -13,7 +13,22 @@ import org.protolyte.units.Quantity;
 public record Formulation(SourceDocument document, String id, Optional<String> title, Optional<String> revision,
                           Optional<String> intendedUse, Basis basis, List<Line> components,
                           Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres,
-                          Optional<Dilution> dilution) {
+                          Optional<Dilution> dilution, List<Admixture> admixtures) {
+
+    /**
+     * The product mixed into a receiving fluid of the library (an infusion fluid, or a plasma model for the injection
+     * site): {@code productParts} volumes of product with {@code fluidParts} of the fluid.
+     */
+    public record Admixture(String into, double productParts, double fluidParts, String pointer) {
+        /** "1 + 9". */
+        public String ratio() {
+            return fmt(productParts) + " + " + fmt(fluidParts);
+        }
+
+        private static String fmt(double x) {
+            return x == Math.rint(x) ? String.valueOf((long) x) : String.valueOf(x);
+        }
+    }
 
     /** A concentrate diluted before use: final volume per volume of concentrate, with the diluent's name. */
     public record Dilution(double factor, String diluent, String pointer) {
@@ -27,6 +42,7 @@ public record Formulation(SourceDocument document, String id, Optional<String> t
     public Formulation {
         components = List.copyOf(components);
         conditions = List.copyOf(conditions);
+        admixtures = List.copyOf(admixtures);
     }
 
     /** The recipe makes {@code finalVolume} of solution, or is dissolved in {@code waterMass} of water. */

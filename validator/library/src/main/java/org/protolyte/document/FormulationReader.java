@@ -113,8 +113,20 @@ public final class FormulationReader {
                 }
                 dilution = Optional.of(new Formulation.Dilution(factor, d.path("diluent").asString("water"), "/dilution"));
             }
+            List<Formulation.Admixture> admixtures = new ArrayList<>();
+            for (int i = 0; i < root.path("admixture").size(); i++) {
+                JsonNode a = root.get("admixture").get(i);
+                String[] parts = a.get("ratio").asString().split("\\+");
+                double product = Double.parseDouble(parts[0].trim());
+                double fluid = Double.parseDouble(parts[1].trim());
+                if (!(product > 0 && fluid > 0)) {
+                    throw new DocumentException(doc.problem("/admixture/" + i + "/ratio", "both volumes of the ratio "
+                            + "must be above zero: product + fluid, as \"1 + 9\""));
+                }
+                admixtures.add(new Formulation.Admixture(a.get("into").asString(), product, fluid, "/admixture/" + i));
+            }
             return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
-                    text(root, "intendedUse"), basis, lines, target, conditions, dose, dilution);
+                    text(root, "intendedUse"), basis, lines, target, conditions, dose, dilution, admixtures);
         }
 
         private static Optional<String> text(JsonNode n, String field) {

@@ -9,6 +9,7 @@ import org.protolyte.document.Formulation;
 import org.protolyte.document.Problem;
 import org.protolyte.document.SourceDocument;
 import org.protolyte.substance.LookupException;
+import org.protolyte.substance.Fluid;
 import org.protolyte.substance.Protein;
 import org.protolyte.substance.Substance;
 import org.protolyte.substance.SubstanceLibrary;
@@ -64,6 +65,13 @@ public final class RecipeResolver {
                 problems.add(f.document().problem(e.pointer, e.getMessage()));
             }
         }
+        for (Formulation.Admixture a : f.admixtures()) {
+            if (library.fluid(a.into()).isEmpty()) {
+                problems.add(f.document().problem(a.pointer() + "/into", "'" + a.into() + "' is not a receiving fluid "
+                        + "of the library; it has " + String.join(", ", library.fluids().stream().map(Fluid::name)
+                        .toList())));
+            }
+        }
         f.dilution().ifPresent(d -> {
             try {
                 if (!library.lookup(d.diluent()).solvent()) {
@@ -82,6 +90,18 @@ public final class RecipeResolver {
         Recipe recipe = new Recipe(f, library.withProteins(proteins), ingredients, makeUp);
         recipe.solution(java.util.Map.of());   // fails here, with its place, if the amounts cannot be made up
         return recipe;
+    }
+
+    /**
+     * A receiving fluid as a recipe: one litre of its components, made up at its own temperature; its problems point
+     * into the library file that defines it.
+     */
+    public Recipe fluid(Fluid fluid) {
+        Formulation f = new Formulation(fluid.document(), fluid.name(), Optional.of(fluid.name()), Optional.empty(),
+                Optional.empty(), new Formulation.Basis(true, 1.0, fluid.pointer()), fluid.components(),
+                Optional.empty(), List.of(new Formulation.Condition("preparation", fluid.kelvin(), true,
+                fluid.pointer(), fluid.co2Pascal())), Optional.empty(), Optional.empty(), List.of());
+        return resolve(f);
     }
 
     /** A line that defines a protein: its name must be new, as a library name and among the document's proteins. */

@@ -84,7 +84,9 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
             diagnostics.add(new Diagnostic(c.code(), c.severity(), c.message(), Optional.empty(), Optional.empty(),
                     Optional.empty()));
         }
-        for (ConditionResult r : a.conditions()) {
+        List<ConditionResult> judged = new ArrayList<>(a.conditions());   // admixtures are judged like conditions
+        a.admixtures().forEach(m -> judged.add(m.result()));
+        for (ConditionResult r : judged) {
             String pointer = r.condition().pointer();
             for (Caveat c : r.caveats()) {
                 diagnostics.add(new Diagnostic(c.code(), c.severity(), c.message(),
@@ -97,7 +99,7 @@ public record DocumentReport(String source, Optional<String> sha256, Optional<St
                     Optional.empty(), Optional.empty(), Optional.empty()));
         }
         boolean indeterminate = diagnostics.stream().anyMatch(d -> d.severity() == Caveat.Severity.INDETERMINATE)
-                || a.conditions().stream().anyMatch(r -> !r.determinate());
+                || judged.stream().anyMatch(r -> !r.determinate());
         boolean failed = findings.stream().anyMatch(x -> x.active() && x.severity().compareTo(failOn) >= 0);
         Status s = indeterminate ? Status.INDETERMINATE : failed ? Status.FAIL : Status.PASS;
         return new DocumentReport(f.document().source(), Optional.of(sha256), Optional.of(f.id()), s, Optional.of(a),

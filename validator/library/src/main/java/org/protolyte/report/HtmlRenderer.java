@@ -210,7 +210,19 @@ public final class HtmlRenderer {
         }
         proteins(b, a.proteins());
         drugs(b, a.drugs());
+        admixtures(b, a.admixtures());
         a.curves().ifPresent(c -> plots(b, a, c, id));
+    }
+
+    /** Each admixture: the mixture's pH and osmolarity, and each drug's margin in it, as the text report words it. */
+    private static void admixtures(StringBuilder b, List<FormulationAnalysis.Admixed> admixtures) {
+        if (admixtures.isEmpty()) {
+            return;
+        }
+        b.append("<h3>Admixtures</h3><ul class=\"admixtures\">");
+        admixtures.forEach(m -> b.append("<li>").append(esc(TextRenderer.admixture(m))).append("</li>"));
+        b.append("</ul>").append(NL).append("<p class=\"note\">A prediction of precipitation does not replace a "
+                + "compatibility study, the product's labelling or licensed pharmacy practice.</p>").append(NL);
     }
 
     /** Each drug substance: per condition its dissolved amount against its solubility, and its pH range. */

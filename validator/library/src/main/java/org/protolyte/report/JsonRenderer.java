@@ -30,6 +30,25 @@ public final class JsonRenderer {
      * a mapper is immutable and thread-safe, and building one (with its serializer caches cold) costs more than a
      * small document's report.
      */
+
+    /** One drug at one condition or admixture: dissolved, solubility, the limiting solid, the margin and its range. */
+    private static void drugAt(ObjectNode c, org.protolyte.analysis.DrugSolubility.AtCondition x) {
+        c.put("dissolvedMmolPerLitre", Numbers.significant(x.dissolved() * 1000, 4))
+                .put("solubilityMmolPerLitre", Numbers.significant(x.solubility() * 1000, 4))
+                .put("limitingSolid", x.limiting().name())
+                .put("log10Fraction", Numbers.decimals(x.log10Fraction(), 3))
+                .put("log10FractionUncertainty", Numbers.decimals(x.uncertainty(), 3))
+                .put("extrapolated", !x.inRange());
+        x.window().ifPresentOrElse(w -> {
+            ObjectNode r = c.putObject("dissolvedRange");
+            w.low().ifPresent(v -> r.put("abovePH", Numbers.decimals(v, 2)));
+            w.high().ifPresent(v -> r.put("belowPH", Numbers.decimals(v, 2)));
+        }, () -> c.putNull("dissolvedRange"));
+        if (!x.pHMax().isEmpty()) {
+            ObjectNode m = c.putObject("pHMax");
+            x.pHMax().forEach((salt, v) -> m.put(salt, Numbers.decimals(v, 2)));
+        }
+    }
     private static final JsonMapper MAPPER = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT)
             .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
     private final Optional<org.protolyte.units.Quantity> batchSize;
@@ -281,28 +300,34 @@ public final class JsonRenderer {
             for (var d : a.drugs()) {
                 ObjectNode o = ds.addObject().put("name", d.drug().name());
                 ArrayNode cs = o.putArray("conditions");
-                for (var x : d.conditions()) {
-                    ObjectNode c = cs.addObject().put("name", x.condition())
-                            .put("dissolvedMmolPerLitre", Numbers.significant(x.dissolved() * 1000, 4))
-                            .put("solubilityMmolPerLitre", Numbers.significant(x.solubility() * 1000, 4))
-                            .put("limitingSolid", x.limiting().name())
-                            .put("log10Fraction", Numbers.decimals(x.log10Fraction(), 3))
-                            .put("log10FractionUncertainty", Numbers.decimals(x.uncertainty(), 3))
-                            .put("extrapolated", !x.inRange());
-                    x.window().ifPresentOrElse(w -> {
-                        ObjectNode r = c.putObject("dissolvedRange");
-                        w.low().ifPresent(v -> r.put("abovePH", Numbers.decimals(v, 2)));
-                        w.high().ifPresent(v -> r.put("belowPH", Numbers.decimals(v, 2)));
-                    }, () -> c.putNull("dissolvedRange"));
-                    if (!x.pHMax().isEmpty()) {
-                        ObjectNode m = c.putObject("pHMax");
-                        x.pHMax().forEach((salt, v) -> m.put(salt, Numbers.decimals(v, 2)));
-                    }
-                }
+                d.conditions().forEach(x -> drugAt(cs.addObject().put("name", x.condition()), x));
                 ArrayNode profile = o.putArray("profile");
                 d.profile().forEach(pt -> profile.addObject().put("pH", Numbers.decimals(pt.pH(), 1))
                         .put("solubilityMmolPerLitre", Numbers.significant(pt.solubility() * 1000, 4))
                         .put("limitingSolid", pt.limiting()));
+            }
+        }
+        if (!a.admixtures().isEmpty()) {
+            ArrayNode ms = n.putArray("admixtures");
+            for (var m : a.admixtures()) {
+                var r = m.result();
+                ObjectNode o = ms.addObject().put("into", m.fluid().name()).put("ratio", m.admixture().ratio())
+                        .put("temperature", Numbers.decimals(Numbers.celsius(r.condition().kelvin()), 2));
+                r.condition().co2Pascal().ifPresent(c -> o.put("co2kPa", Numbers.significant(c / 1000, 4)));
+                if (r.determinate()) {
+                    var st = r.state().orElseThrow();
+                    o.put("pH", Numbers.decimals(st.pH(), 3));
+                    r.uncertainty().ifPresent(u -> o.put("pHUncertainty", Numbers.significant(u.pH(), 2)));
+                    o.put("osmolarity", Numbers.significant(r.osmolarity() * 1000, 4))
+                            .put("ionicStrength", Numbers.significant(st.ionicStrength(), 4));
+                } else {
+                    o.put("indeterminate", r.caveats().stream().filter(c -> c.severity()
+                            == org.protolyte.chemistry.Caveat.Severity.INDETERMINATE)
+                            .map(org.protolyte.chemistry.Caveat::message).findFirst().orElse("no pH"));
+                }
+                ArrayNode ds = o.putArray("drugSubstances");
+                m.drugs().forEach(d -> d.conditions().forEach(x -> drugAt(ds.addObject().put("name", d.drug().name()),
+                        x)));
             }
         }
         a.titratableAcidity().ifPresent(t -> {

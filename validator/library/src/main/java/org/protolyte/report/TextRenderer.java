@@ -304,6 +304,9 @@ public final class TextRenderer {
                     + "pH (the solid that limits it): %s%s", p(ds.drug().name()), String.join("; ", at),
                     pHMax(ds))));
         }
+        for (var m : a.admixtures()) {
+            b.append(wrap("  ", "    ", admixture(m)));
+        }
         a.titratableAcidity().ifPresent(t -> b.append(String.format(Locale.ROOT,
                 "  titratable %s to pH 7.4 at 37 °C: %.3g mmol/L%s%n", t.mmolPerLitre() >= 0 ? "acidity" : "alkalinity",
                 Math.abs(t.mmolPerLitre()), t.mmolPerDose().isPresent() ? String.format(Locale.ROOT, " (%.3g mmol per dose)",
@@ -367,6 +370,32 @@ public final class TextRenderer {
      * asked for, only the systems that carry 95 % of β, largest first, with their two largest forms, and a count of
      * the rest.
      */
+    /** One admixture: the mixture's pH and osmolarity at the fluid's temperature and CO2, and each drug's margin. */
+    static String admixture(FormulationAnalysis.Admixed m) {
+        var r = m.result();
+        String head = String.format(Locale.ROOT, "mixed %s (product + fluid) at %.1f °C%s: ", p(r.condition().name()),
+                Numbers.celsius(r.condition().kelvin()), r.condition().co2Pascal().isPresent()
+                        ? String.format(Locale.ROOT, " under %.1f kPa CO2", r.condition().co2Pascal().getAsDouble() / 1000)
+                        : ", closed");
+        if (!r.determinate()) {
+            return head + "no pH: " + p(r.caveats().stream().filter(c -> c.severity() == org.protolyte.chemistry.Caveat
+                    .Severity.INDETERMINATE).map(org.protolyte.chemistry.Caveat::message).findFirst().orElse("see the diagnostics"));
+        }
+        var s = r.state().orElseThrow();
+        List<String> parts = new ArrayList<>();
+        parts.add(r.uncertainty().map(u -> String.format(Locale.ROOT, "pH %.2f ± %.2f", s.pH(), u.pH()))
+                .orElse(String.format(Locale.ROOT, "pH %.2f", s.pH())));
+        parts.add(String.format(Locale.ROOT, "%.0f mOsm/L", r.osmolarity() * 1000));
+        for (var d : m.drugs()) {
+            for (var x : d.conditions()) {
+                parts.add(String.format(Locale.ROOT, "%s %.3g of %.3g mmol/L (%.0f %% of its solubility, log10 ± %.2f; "
+                        + "%s)%s", p(d.drug().name()), x.dissolved() * 1000, x.solubility() * 1000, 100 * x.fraction(),
+                        x.uncertainty(), p(x.limiting().name()), dissolvedRange(x.window())));
+            }
+        }
+        return head + String.join("; ", parts);
+    }
+
     /** ", dissolved above pH a and below b" for a drug's window; where none holds it, says so. */
     static String dissolvedRange(Optional<org.protolyte.chemistry.DrugSubstance.Window> w) {
         if (w.isEmpty()) {

@@ -11,8 +11,9 @@ import org.protolyte.recipe.Ingredient;
 /**
  * Each drug substance stays below {@code maxFraction} (default 1) of its solubility at every condition, with room for
  * the uncertainty: log10(dissolved/solubility) + {@code coverage} (default 2) × its standard uncertainty must not pass
- * log10 maxFraction. One finding per drug, at its line, for the condition with the least room, naming every condition;
- * a solid's constant used outside the temperatures of its data is said so.
+ * log10 maxFraction. The product's conditions and every admixture (the product in its receiving fluid) are judged
+ * alike. One finding per drug, at its line, for the condition or admixture with the least room, naming each; a solid's
+ * constant used outside the temperatures of its data is said so.
  */
 public final class DrugSolubilityMargin implements CheckKind {
 
@@ -35,7 +36,10 @@ public final class DrugSolubilityMargin implements CheckKind {
         for (DrugSolubility d : a.drugs()) {
             DrugSolubility.AtCondition worst = null;
             List<String> all = new ArrayList<>();
-            for (DrugSolubility.AtCondition x : d.conditions()) {
+            List<DrugSolubility.AtCondition> judged = new ArrayList<>(d.conditions());
+            a.admixtures().forEach(m -> m.drugs().stream().filter(x -> x.drug().name().equals(d.drug().name()))
+                    .forEach(x -> judged.addAll(x.conditions())));
+            for (DrugSolubility.AtCondition x : judged) {
                 double bound = x.log10Fraction() + k * x.uncertainty();
                 all.add(String.format(Locale.ROOT, "%s %.0f %% (up to %.0f %%%s)", x.condition(), 100 * x.fraction(),
                         100 * Math.pow(10, bound), x.inRange() ? "" : ", extrapolated"));
@@ -48,9 +52,10 @@ public final class DrugSolubilityMargin implements CheckKind {
             }
             String where = worst.log10Fraction() > limit ? "exceeds" : "may exceed, within its uncertainty,";
             out.add(rule.finding(a.recipe().formulation(), pointer(a, d), String.format(Locale.ROOT,
-                    "%s %s %.0f %% of its solubility: at %s (pH %.2f) %.3g mmol/L is dissolved, %.0f %% of the "
+                    "%s %s %.0f %% of its solubility: %s (pH %.2f) %.3g mmol/L is dissolved, %.0f %% of the "
                     + "%.3g mmol/L that %s allows (log10 ± %.2f, coverage %.1f); by condition: %s", d.drug().name(),
-                    where, 100 * max, worst.condition(), worst.pH(), worst.dissolved() * 1000, 100 * worst.fraction(),
+                    where, 100 * max, (worst.condition().startsWith("into ") ? "mixed " : "at ") + worst.condition(),
+                    worst.pH(), worst.dissolved() * 1000, 100 * worst.fraction(),
                     worst.solubility() * 1000, worst.limiting().name(), worst.uncertainty(), k,
                     String.join("; ", all))));
         }

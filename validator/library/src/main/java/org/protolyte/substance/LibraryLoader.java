@@ -58,6 +58,7 @@ public final class LibraryLoader {
     private final Map<String, String> phaseSources = new LinkedHashMap<>();
     private final Map<String, SaltSolubility> solubilities = new LinkedHashMap<>();
     private final Map<String, DrugSubstance> drugs = new LinkedHashMap<>();
+    private final Map<String, Fluid> fluids = new LinkedHashMap<>();
     private final Map<String, List<String>> stepSources = new LinkedHashMap<>();
     private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups = new LinkedHashMap<>();
     private final Map<String, Component> ions = new LinkedHashMap<>();
@@ -103,7 +104,7 @@ public final class LibraryLoader {
 
     public SubstanceLibrary build() {
         return new SubstanceLibrary(systems, stepSources, ions, solutes, substances, index, ambiguous, files,
-                complexes, complexSources, phases, phaseSources, solubilities, proteinGroups, List.of(), drugs);
+                complexes, complexSources, phases, phaseSources, solubilities, proteinGroups, List.of(), drugs, fluids);
     }
 
     /** Reads one validated file into the builder's maps, collecting problems. */
@@ -131,6 +132,40 @@ public final class LibraryLoader {
             each(root, "phases", this::phase);
             each(root, "solubilities", this::solubility);
             each(root, "drugSubstances", this::drug);
+            each(root, "fluids", this::fluid);
+        }
+
+        /**
+         * A receiving fluid: its components per litre, each a known substance with an amount per litre (mass or amount
+         * concentration), and its temperature and CO2.
+         */
+        private void fluid(JsonNode n, String pointer) {
+            List<org.protolyte.document.Formulation.Line> lines = new ArrayList<>();
+            for (int i = 0; i < n.get("components").size(); i++) {
+                JsonNode c = n.get("components").get(i);
+                String at = pointer + "/components/" + i;
+                String name = c.get("substance").asString();
+                if (!index.containsKey(SubstanceLibrary.normalise(name))) {
+                    problems.add(doc.problem(at + "/substance", "'" + name + "' is not a substance of the library"));
+                    continue;
+                }
+                try {
+                    org.protolyte.units.Quantity q = org.protolyte.units.Quantity.parse(c.get("amount").asString())
+                            .require("an amount per litre of fluid", org.protolyte.units.Dimension.MASS_CONCENTRATION,
+                                    org.protolyte.units.Dimension.AMOUNT_CONCENTRATION);
+                    lines.add(new org.protolyte.document.Formulation.Line(i, name, Optional.of(q), Optional.empty(),
+                            Optional.empty(), Optional.empty(), at, Optional.empty()));
+                } catch (org.protolyte.units.UnitException e) {
+                    problems.add(doc.problem(at + "/amount", e.getMessage()));
+                }
+            }
+            List<String> synonyms = new ArrayList<>();
+            n.path("synonyms").forEach(x -> synonyms.add(x.asString()));
+            java.util.OptionalDouble co2 = n.has("co2") ? java.util.OptionalDouble.of(n.get("co2").asDouble() * 1000)
+                    : java.util.OptionalDouble.empty();
+            named(fluids, n, pointer, new Fluid(n.get("name").asString(), synonyms, lines,
+                    n.get("temperature").asDouble() + org.protolyte.chemistry.Thermo.KELVIN_OFFSET, co2,
+                    n.get("source").asString(), doc, pointer), "fluid");
         }
 
         /**

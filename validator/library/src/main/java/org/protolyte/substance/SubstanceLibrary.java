@@ -44,6 +44,8 @@ public final class SubstanceLibrary {
     private final Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups;   // pKa set -> its groups
     private final List<Protein> proteins;                                         // a formulation's, once added
     private final List<DrugSubstance> drugs;
+    private final Map<String, Fluid> fluids;                                      // by normalised name or synonym
+    private final List<Fluid> fluidList;
 
     SubstanceLibrary(Map<String, AcidBaseSystem> systems, Map<String, List<String>> stepSources,
                      Map<String, Component> ions, Map<String, Component> solutes,
@@ -53,9 +55,16 @@ public final class SubstanceLibrary {
                      Map<String, SolidPhase> phases, Map<String, String> phaseSources,
                      Map<String, SaltSolubility> solubilities,
                      Map<String, Map<ProteinGroup, AcidBaseSystem>> proteinGroups, List<Protein> proteins,
-                     Map<String, DrugSubstance> drugs) {
+                     Map<String, DrugSubstance> drugs, Map<String, Fluid> fluids) {
         this.proteins = List.copyOf(proteins);
         this.drugs = List.copyOf(drugs.values());
+        this.fluidList = List.copyOf(fluids.values());
+        Map<String, Fluid> byName = new LinkedHashMap<>();
+        for (Fluid f : fluidList) {
+            byName.put(normalise(f.name()), f);
+            f.synonyms().forEach(x -> byName.put(normalise(x), f));
+        }
+        this.fluids = java.util.Collections.unmodifiableMap(byName);
         Map<String, Map<ProteinGroup, AcidBaseSystem>> sets = new LinkedHashMap<>();
         proteinGroups.forEach((k, v) -> sets.put(k, java.util.Collections.unmodifiableMap(new java.util.EnumMap<>(v))));
         this.proteinGroups = java.util.Collections.unmodifiableMap(sets);
@@ -208,6 +217,16 @@ public final class SubstanceLibrary {
         return phases;
     }
 
+    /** The receiving fluids, in library order. */
+    public List<Fluid> fluids() {
+        return fluidList;
+    }
+
+    /** A receiving fluid by name or synonym (case, spaces and hyphens forgiven). */
+    public Optional<Fluid> fluid(String name) {
+        return Optional.ofNullable(fluids.get(normalise(name)));
+    }
+
     /** Drug substances whose pH-dependent solubility the report gives; their solids' sources are phase sources. */
     public List<DrugSubstance> drugSubstances() {
         return drugs;
@@ -255,8 +274,10 @@ public final class SubstanceLibrary {
         all.addAll(proteins);
         Map<String, DrugSubstance> dr = new LinkedHashMap<>();
         drugs.forEach(x -> dr.put(x.name(), x));
+        Map<String, Fluid> fl = new LinkedHashMap<>();
+        fluidList.forEach(x -> fl.put(x.name(), x));
         return new SubstanceLibrary(sys, stepSources, ions, sol, subs, idx, ambiguous, files, cx, complexSources, ph,
-                phaseSources, so, proteinGroups, all, dr);
+                phaseSources, so, proteinGroups, all, dr, fl);
     }
 
     /** The proteins a formulation defined (see {@link #withProteins}), in its order. */

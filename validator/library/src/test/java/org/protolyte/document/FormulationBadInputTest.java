@@ -126,6 +126,24 @@ class FormulationBadInputTest {
     }
 
     @Test
+    void anAdmixtureWithAZeroVolumeOrAnUnknownFluidIsRefusedAtItsPlace() {
+        String nacl = "{\"substance\": \"sodium chloride\", \"amount\": \"9 g\"}";
+        Problem p = problemAt(TestDocs.formulation(nacl, ", \"admixture\": [{\"into\": \"normal saline\", "
+                + "\"ratio\": \"0 + 9\"}]"), "/admixture/0/ratio");
+        assertTrue(p.message().contains("above zero"), p.message());
+        problemAt(TestDocs.formulation(nacl, ", \"admixture\": [{\"into\": \"normal saline\", \"ratio\": \"1:9\"}]"),
+                "/admixture/0/ratio");
+        DocumentReport r = protolyte.check("t.json", TestDocs.bytes(TestDocs.formulation(nacl,
+                ", \"admixture\": [{\"into\": \"normal saline\", \"ratio\": \"1 + 9\"}, {\"into\": \"seawater\", "
+                + "\"ratio\": \"1 + 1\"}]")));
+        assertEquals(Status.INVALID, r.status());
+        Finding f = r.findings().stream().filter(x -> x.pointer().equals(Optional.of("/admixture/1/into")))
+                .findFirst().orElseThrow(() -> new AssertionError(r.findings().toString()));
+        assertTrue(f.message().contains("'seawater' is not a receiving fluid") && f.message().contains("plasma model"),
+                f.message());
+    }
+
+    @Test
     void componentWithBothAmountAndAdjustToIsRefused() {
         Problem p = problemAt(oneComponent("{\"substance\": \"sodium hydroxide\", \"amount\": \"5 mmol/L\",\n"
                 + " \"adjustTo\": {\"pH\": 7.0, \"temperature\": \"25 Cel\"}}"), "/components/0");

@@ -37,10 +37,16 @@ class DrugSolubilityMarginTest {
 
     /** {@code grams} of sodium phenobarbital per litre brought to {@code pH} at 25 °C with hydrochloric acid. */
     static FormulationAnalysis analyse(String grams, double pH) {
+        return analyse(grams, pH, "");
+    }
+
+    /** As {@link #analyse(String, double)}, with an admixture array's items. */
+    static FormulationAnalysis analyse(String grams, double pH, String admixtures) {
         String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-DRUG\", \"revision\": \"A\","
                 + " \"basis\": {\"finalVolume\": \"1 L\"}, \"components\": [{\"substance\": \"sodium phenobarbital\","
                 + " \"amount\": \"" + grams + "\"}, {\"substance\": \"hydrochloric acid\", \"adjustTo\": {\"pH\": " + pH
-                + ", \"temperature\": \"25 Cel\"}}], \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
+                + ", \"temperature\": \"25 Cel\"}}], \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]"
+                + (admixtures.isEmpty() ? "" : ", \"admixture\": [" + admixtures + "]") + "}";
         var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
         return new Analyzer(new Equilibrium(Davies.INSTANCE)).analyze(new RecipeResolver(LIBRARY).resolve(f));
     }
@@ -84,5 +90,37 @@ class DrugSolubilityMarginTest {
     private static double edgePH() {
         DrugSolubility.AtCondition x = analyse("10 g", 9.5).drugs().get(0).conditions().get(0);
         return x.window().orElseThrow().low().getAsDouble() + 0.05;
+    }
+
+    /**
+     * Fail closed: the test library's constants hold at 20–30 °C, so the solution mixed 1 + 1 into the plasma model at
+     * 37 °C has no pH, the rule cannot judge it there, and the document is INDETERMINATE with the admixture named;
+     * 1 + 99 into saline at 25 °C is judged (unbuffered saline keeps the pH, the drug is diluted a hundredfold).
+     */
+    @Test
+    void anAdmixtureOutsideTheDrugsDataLeavesTheDocumentIndeterminate() throws Exception {
+        FormulationAnalysis a = analyse("10 g", 9.5, "{\"into\": \"plasma model\", \"ratio\": \"1 + 1\"},"
+                + " {\"into\": \"normal saline\", \"ratio\": \"1 + 99\"}");
+        assertEquals(2, a.admixtures().size());
+        var plasma = a.admixtures().get(0);
+        assertTrue(!plasma.result().determinate() && plasma.drugs().isEmpty(), plasma.result().caveats().toString());
+        DrugSolubility.AtCondition saline = a.admixtures().get(1).drugs().get(0).conditions().get(0);
+        assertEquals("into 0.9 % sodium chloride (1 + 99)", saline.condition());
+        assertEquals(10 / 254.22 / 100, saline.dissolved(), 0.002 * 10 / 254.22 / 100, "a hundredth, per litre");
+        assertTrue(saline.log10Fraction() < -1, saline.toString());
+        assertEquals(List.of(), check(a, "{}"));
+        String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-ADM\", \"basis\": "
+                + "{\"finalVolume\": \"1 L\"}, \"components\": [{\"substance\": \"sodium phenobarbital\", \"amount\": "
+                + "\"10 g\"}], \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}], \"admixture\": "
+                + "[{\"into\": \"plasma model\", \"ratio\": \"1 + 1\"}]}";
+        byte[] library;
+        try (InputStream in = DrugSolubilityMarginTest.class.getResourceAsStream("test-drugs.json")) {
+            library = in.readAllBytes();
+        }
+        org.protolyte.api.Result r = org.protolyte.api.Validator.builder().substanceLibrary("test-drugs.json", library)
+                .build().check(org.protolyte.api.Source.of("adm.json", json.getBytes(StandardCharsets.UTF_8)));
+        assertEquals(org.protolyte.api.Status.INDETERMINATE, r.status());
+        assertTrue(r.diagnostics().stream().anyMatch(d -> d.indeterminate()
+                && d.condition().orElse("").equals("into plasma model (1 + 1)")), r.diagnostics().toString());
     }
 }
