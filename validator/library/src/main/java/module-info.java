@@ -39,6 +39,8 @@ module org.protolyte.library {
             org.protolyte.rules.TitrantPlausible,
             org.protolyte.rules.FormStated,
             org.protolyte.rules.ConcentrationLimit,
+            org.protolyte.rules.AmountPerDose,
+            org.protolyte.rules.OsmolarityLimit,
             org.protolyte.rules.HazardNotes,
             org.protolyte.rules.LightSensitive,
             org.protolyte.rules.RevisionStated,

@@ -506,7 +506,7 @@ public final class BatchAnalyzer {
                 JsonNodeFactory.instance.objectNode(), Map.of());
         Formulation f = new Formulation(doc, r.id() + " as made", Optional.of("batch " + r.batch() + " as made"),
                 Optional.empty(), m.intendedUse(), basis, lines, Optional.empty(), conditions, Optional.empty(),
-                Optional.empty(), List.of());
+                Optional.empty(), Optional.empty(), List.of());
         return resolver.resolve(f);
     }
 

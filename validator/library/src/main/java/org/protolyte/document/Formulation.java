@@ -13,6 +13,7 @@ import org.protolyte.units.Quantity;
 public record Formulation(SourceDocument document, String id, Optional<String> title, Optional<String> revision,
                           Optional<String> intendedUse, Basis basis, List<Line> components,
                           Optional<PhTarget> pHTarget, List<Condition> conditions, Optional<Double> doseLitres,
+                          Optional<Double> dosesPerDay,
                           Optional<Dilution> dilution, List<Admixture> admixtures) {
 
     /**

@@ -97,6 +97,8 @@ public final class FormulationReader {
             }
             Optional<Double> dose = root.has("dose") ? positive(root.get("dose").get("volume"), "/dose/volume",
                     "a dose volume", Dimension.VOLUME).map(Quantity::base) : Optional.empty();
+            Optional<Double> perDay = root.path("dose").has("perDay")
+                    ? Optional.of(root.get("dose").get("perDay").asDouble()) : Optional.empty();
             if (!problems.isEmpty()) {
                 throw new DocumentException(problems);
             }
@@ -126,7 +128,7 @@ public final class FormulationReader {
                 admixtures.add(new Formulation.Admixture(a.get("into").asString(), product, fluid, "/admixture/" + i));
             }
             return new Formulation(doc, root.get("id").asString(), text(root, "title"), text(root, "revision"),
-                    text(root, "intendedUse"), basis, lines, target, conditions, dose, dilution, admixtures);
+                    text(root, "intendedUse"), basis, lines, target, conditions, dose, perDay, dilution, admixtures);
         }
 
         private static Optional<String> text(JsonNode n, String field) {

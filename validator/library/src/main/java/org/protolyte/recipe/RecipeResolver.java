@@ -100,7 +100,7 @@ public final class RecipeResolver {
         Formulation f = new Formulation(fluid.document(), fluid.name(), Optional.of(fluid.name()), Optional.empty(),
                 Optional.empty(), new Formulation.Basis(true, 1.0, fluid.pointer()), fluid.components(),
                 Optional.empty(), List.of(new Formulation.Condition("preparation", fluid.kelvin(), true,
-                fluid.pointer(), fluid.co2Pascal())), Optional.empty(), Optional.empty(), List.of());
+                fluid.pointer(), fluid.co2Pascal())), Optional.empty(), Optional.empty(), Optional.empty(), List.of());
         return resolve(f);
     }
 

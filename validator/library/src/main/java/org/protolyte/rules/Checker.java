@@ -121,7 +121,7 @@ public final class Checker {
             }
             try {
                 out.addAll(book.kinds().get(rule.check()).orElseThrow().check(analysis, rule));
-            } catch (PluginCheck.Failure e) {
+            } catch (PluginCheck.Failure | NotJudged e) {
                 unjudged.add(new Unjudged(rule.id(), rule.pack(), e.getMessage()));
             }
         }

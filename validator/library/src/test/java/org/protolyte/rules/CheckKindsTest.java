@@ -28,7 +28,7 @@ class CheckKindsTest {
 
     @Test
     void theShippedKindsAreAllRegistered() {
-        assertEquals(31, CheckKinds.load().all().size());
+        assertEquals(33, CheckKinds.load().all().size());
     }
 
     private static List<Finding> withPack(String rules, String components) {

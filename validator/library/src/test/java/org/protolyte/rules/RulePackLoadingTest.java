@@ -434,6 +434,20 @@ class RulePackLoadingTest {
     }
 
     @Test
+    void aPerDoseLimitOnADocumentWithoutADoseMakesItIndeterminate() {
+        RuleBook book = shipped();
+        book.add("site-dose.json", utf8(pack("site-dose", """
+                    { "id": "site-sodium-per-dose", "check": "amount-per-dose", "severity": "note",
+                      "parameters": { "ion": "Na+", "maxPerDose": "1 mmol" },
+                      "summary": "s", "explanation": "e", "references": ["common practice"] }""")), false);
+        DocumentReport r = judge(book, "site-dose", "revision-stated", "quiet.json");
+        assertEquals(Status.INDETERMINATE, r.status(), () -> r.status() + " " + r.diagnostics());
+        assertTrue(r.diagnostics().stream().anyMatch(d -> d.code().equals("rule-not-judged")
+                && d.message().contains("site-sodium-per-dose") && d.message().contains("dose.volume")),
+                r.diagnostics()::toString);
+    }
+
+    @Test
     void ruleNamingAConditionTheDocumentHasJudgesIt() {
         RuleBook book = shipped();
         book.add("site-use.json", utf8(pack("site-use", """
