@@ -24,8 +24,12 @@ class SolutionMixingTest {
     private static final double KELVIN = 293.15;
 
     private static Solution solution(String components) {
+        return solution("1 L", components);
+    }
+
+    private static Solution solution(String finalVolume, String components) {
         String json = "{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": \"TST-MIX\", \"basis\": "
-                + "{\"finalVolume\": \"1 L\"}, \"components\": [" + components + "],"
+                + "{\"finalVolume\": \"" + finalVolume + "\"}, \"components\": [" + components + "],"
                 + " \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]}";
         var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("t", json.getBytes(StandardCharsets.UTF_8)));
         return new RecipeResolver(LibraryLoader.shipped(SCHEMAS)).resolve(f).solution(Map.of());
@@ -41,7 +45,8 @@ class SolutionMixingTest {
     @Test
     void oneVolumeIntoNineIsTheRecipeAtATenthAndNineTenths() {
         Solution saline = solution("{\"substance\": \"sodium chloride\", \"amount\": \"9 g\"}");
-        Solution glucose = solution("{\"substance\": \"glucose monohydrate\", \"amount\": \"55 g\"}");
+        // the fluid written per 250 mL: nine volumes of it are 36 of its bases
+        Solution glucose = solution("250 mL", "{\"substance\": \"glucose monohydrate\", \"amount\": \"13.75 g\"}");
         Solution mixture = saline.mixed(glucose, 9, KELVIN);
         Solution expected = solution("{\"substance\": \"sodium chloride\", \"amount\": \"0.9 g\"},"
                 + " {\"substance\": \"glucose monohydrate\", \"amount\": \"49.5 g\"}");
@@ -50,6 +55,10 @@ class SolutionMixingTest {
         assertEquals(10 * expected.volumeLitres(KELVIN), mixture.volumeLitres(KELVIN), 1e-12);
         assertEquals(10 * expected.volumeLitres(310.15), mixture.volumeLitres(310.15), 1e-12);
         assertEquals(saline.species().size() + glucose.species().size(), mixture.species().size());
+        double moles = mixture.moles().values().stream().mapToDouble(Double::doubleValue).sum();
+        double fromBoth = saline.moles().values().stream().mapToDouble(Double::doubleValue).sum()
+                + 36 * glucose.moles().values().stream().mapToDouble(Double::doubleValue).sum();
+        assertEquals(fromBoth, moles, 1e-12 * moles);
     }
 
     @Test

@@ -47,7 +47,9 @@ class AmountPerDoseTest {
         FormulationAnalysis a = analyse(DOSE);
         // sodium chloride alone: 90 mg per dose
         assertEquals(List.of(), Analyses.run(KIND, a, "{\"substance\": \"sodium chloride\", \"maxPerDose\": \"91 mg\"}"));
-        assertEquals(1, Analyses.run(KIND, a, "{\"substance\": \"sodium chloride\", \"maxPerDose\": \"89 mg\"}").size());
+        List<Finding> nacl = Analyses.run(KIND, a, "{\"substance\": \"sodium chloride\", \"maxPerDose\": \"89 mg\"}");
+        assertTrue(nacl.get(0).message().startsWith("sodium chloride is 90.0 mg per dose (10 mL); limit 89 mg"),
+                nacl.get(0).message());
         // phosphate: 10.0 mmol/L, so 0.100 mmol per dose, on the phosphate line
         List<Finding> p = Analyses.run(KIND, a, "{\"system\": \"phosphate\", \"maxPerDose\": \"0.099 mmol\"}");
         assertTrue(p.get(0).message().startsWith("total phosphate is 0.100 mmol per dose (10 mL)"), p.get(0).message());
@@ -60,17 +62,35 @@ class AmountPerDoseTest {
     void withoutTheDoseItNeedsTheRuleDoesNotJudgeTheDocument() {
         NotJudged e = assertThrows(NotJudged.class, () -> Analyses.run(KIND, analyse(""),
                 "{\"ion\": \"Na+\", \"maxPerDose\": \"1 mmol\"}"));
-        assertTrue(e.getMessage().contains("does not state its dose volume (dose.volume)"), e.getMessage());
+        assertTrue(e.getMessage().contains("limits Na+ per dose, and the document does not state its dose volume "
+                + "(dose.volume)"), e.getMessage());
         FormulationAnalysis noPerDay = analyse(", \"dose\": {\"volume\": \"10 mL\"}");
         assertEquals(1, Analyses.run(KIND, noPerDay, "{\"ion\": \"Na+\", \"maxPerDose\": \"1 mmol\"}").size());
         NotJudged d = assertThrows(NotJudged.class, () -> Analyses.run(KIND, noPerDay,
                 "{\"ion\": \"Na+\", \"maxPerDay\": \"1 mmol\"}"));
-        assertTrue(d.getMessage().contains("dose.perDay"), d.getMessage());
+        assertTrue(d.getMessage().contains("limits Na+ per day") && d.getMessage().contains("dose.perDay"),
+                d.getMessage());
+    }
+
+    /** The same solution written per 250 mL: the amounts per dose are per litre of solution, not per basis. */
+    @Test
+    void theAmountIsPerLitreOfSolutionWhateverTheBasis() {
+        FormulationAnalysis a = Analyses.analyse(("{\"document\": \"formulation\", \"formatVersion\": 1, \"id\": "
+                + "\"TST-FIX\", \"revision\": \"A\", \"conditions\": [{\"name\": \"use\", \"temperature\": \"25 Cel\"}]"
+                + DOSE + ", \"basis\": {\"finalVolume\": \"250 mL\"}, \"components\": [%s, %s]}").formatted(
+                Analyses.component("sodium chloride", "2.25 g"),
+                Analyses.component("sodium dihydrogen phosphate monohydrate", "0.345 g")));
+        List<Finding> f = Analyses.run(KIND, a, "{\"ion\": \"Na+\", \"maxPerDose\": \"1 mmol\", "
+                + "\"maxPerDay\": \"6.5 mmol\"}");
+        assertEquals(2, f.size());
+        assertTrue(f.get(0).message().startsWith("Na+ is 1.64 mmol per dose (10 mL)"), f.get(0).message());
+        assertTrue(f.get(1).message().startsWith("Na+ is 6.56 mmol per day (40 mL, 4 doses)"), f.get(1).message());
     }
 
     @Test
     void anIonsMassComesFromItsFormula() {
         assertEquals(22.98977, AmountPerDose.ionMolarMass("Na+"), 1e-4);
         assertEquals(95.979, AmountPerDose.ionMolarMass("HPO4-2"), 1e-2);
+        assertTrue(Double.isNaN(AmountPerDose.ionMolarMass("lactate-")), "a name that is no formula has no mass");
     }
 }

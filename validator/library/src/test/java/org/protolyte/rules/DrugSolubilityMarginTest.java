@@ -123,4 +123,42 @@ class DrugSolubilityMarginTest {
         assertTrue(r.diagnostics().stream().anyMatch(d -> d.indeterminate()
                 && d.condition().orElse("").equals("into plasma model (1 + 1)")), r.diagnostics().toString());
     }
+
+    /**
+     * The weak-base sample (invented demo constants, site library) with a third admixture: the finding names the
+     * admixture with the least room (found here from the analysis, not written in), and lists every condition and
+     * admixture with its share.
+     */
+    @Test
+    void theFindingNamesTheAdmixtureWithTheLeastRoomAndListsEveryOne() throws IOException {
+        java.nio.file.Path root = java.nio.file.Path.of(System.getProperty("protolyte.projectRoot", "../.."),
+                "sample-formulations", "site-library");
+        SubstanceLibrary site = new LibraryLoader(SCHEMAS).addShipped().add("site-substances.json",
+                java.nio.file.Files.readAllBytes(root.resolve("site-substances.json")), true).build();
+        String json = java.nio.file.Files.readString(root.resolve("parenteral-weak-base-injection-acetate.json"))
+                .replace("\"ratio\": \"1 + 4\"", "\"ratio\": \"1 + 4\"\n    },\n    {\n      \"into\": \"plasma model\",\n"
+                        + "      \"ratio\": \"1 + 19\"");
+        var f = new FormulationReader(SCHEMAS).read(new JsonReader().read("s", json.getBytes(StandardCharsets.UTF_8)));
+        FormulationAnalysis a = new Analyzer(new Equilibrium(Davies.INSTANCE)).analyze(new RecipeResolver(site).resolve(f));
+        assertEquals(3, a.admixtures().size());
+        List<DrugSolubility.AtCondition> mixed = a.admixtures().stream().map(m -> m.drugs().get(0).conditions().get(0))
+                .toList();
+        DrugSolubility.AtCondition worst = mixed.stream().max(java.util.Comparator.comparingDouble(x ->
+                x.log10Fraction() + 2 * x.uncertainty())).orElseThrow();
+        assertTrue(worst.condition().startsWith("into plasma model"), worst.toString());
+        List<Finding> found = check(a, "{}");
+        assertEquals(1, found.size());
+        String m = found.get(0).message();
+        assertTrue(m.startsWith(String.format(java.util.Locale.ROOT, "demobasine exceeds 100 %% of its solubility: "
+                + "mixed %s (pH %.2f) %.3g mmol/L is dissolved, %.0f %% of the %.3g mmol/L", worst.condition(),
+                worst.pH(), worst.dissolved() * 1000, 100 * worst.fraction(), worst.solubility() * 1000)), m);
+        for (DrugSolubility.AtCondition x : a.drugs().get(0).conditions()) {
+            assertTrue(m.contains(String.format(java.util.Locale.ROOT, "%s %.0f %% (up to %.0f %%)", x.condition(),
+                    100 * x.fraction(), 100 * Math.pow(10, x.log10Fraction() + 2 * x.uncertainty()))), m);
+        }
+        for (DrugSolubility.AtCondition x : mixed) {
+            assertTrue(m.contains(String.format(java.util.Locale.ROOT, "; %s %.0f %% (up to %.0f %%)", x.condition(),
+                    100 * x.fraction(), 100 * Math.pow(10, x.log10Fraction() + 2 * x.uncertainty()))), m);
+        }
+    }
 }
